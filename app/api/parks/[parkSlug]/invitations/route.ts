@@ -1,0 +1,10 @@
+// POST /api/parks/{parkSlug}/invitations: a manager invites staff by e-mail.
+import { handler, readJson } from "@/lib/api/handler";
+import { getParkBySlug } from "@/lib/data/parks";
+import { inviteStaff } from "@/lib/staff/invitations";
+
+export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
+  const park = await getParkBySlug(params.parkSlug);
+  const { link: _link, ...invitation } = await inviteStaff(actor, park.id, await readJson(request));
+  return Response.json({ invitation }, { status: 201 });
+});

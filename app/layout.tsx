@@ -1,0 +1,33 @@
+import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
+import { SiteHeader } from "@/components/site-header";
+import "./globals.css";
+
+const sans = localFont({ src: "./fonts/inter-latin-var.woff2", weight: "100 900", variable: "--font-sans", display: "swap" });
+const mono = localFont({ src: "./fonts/mono-latin-var.woff2", weight: "100 800", variable: "--font-mono", display: "swap" });
+
+export const metadata: Metadata = {
+  title: { default: "Loamcast", template: "%s · Loamcast" },
+  description: "Today's trail conditions, park map and tyre-pressure band for your bike park.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#342b21" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body className="min-h-screen font-sans">
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">
+          Skip to content
+        </a>
+        <SiteHeader />
+        <main id="main" className="mx-auto max-w-5xl px-4 py-6">
+          {children}
+        </main>
+        <footer className="mx-auto max-w-5xl px-4 pb-8 text-xs text-loam-600">
+          Loamcast · conditions are posted by park staff; always follow park signage and staff on the day.
+        </footer>
+      </body>
+    </html>
+  );
+}

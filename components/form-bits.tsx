@@ -1,0 +1,42 @@
+import type { FormState } from "@/lib/actions/form-state";
+
+/** A labelled input with its error announced to screen readers. */
+export function Field(props: { name: string; label: string; type?: string; state?: FormState; autoComplete?: string; required?: boolean; defaultValue?: string; hint?: string }) {
+  const error = props.state?.fieldErrors?.[props.name];
+  const id = `field-${props.name}`;
+  return (
+    <div>
+      <label htmlFor={id} className="label">
+        {props.label}
+      </label>
+      <input
+        id={id}
+        name={props.name}
+        type={props.type ?? "text"}
+        autoComplete={props.autoComplete}
+        required={props.required}
+        defaultValue={props.defaultValue}
+        aria-invalid={Boolean(error)}
+        aria-describedby={error ? `${id}-error` : props.hint ? `${id}-hint` : undefined}
+        className="field"
+      />
+      {props.hint && !error && (
+        <p id={`${id}-hint`} className="mt-1 text-sm text-loam-600">
+          {props.hint}
+        </p>
+      )}
+      <p id={`${id}-error`} className="field-error" aria-live="polite">
+        {error ?? ""}
+      </p>
+    </div>
+  );
+}
+
+export function FormMessage({ state }: { state: FormState }) {
+  if (!state.message) return <p aria-live="polite" className="sr-only" />;
+  return (
+    <p role={state.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${state.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`}>
+      {state.message}
+    </p>
+  );
+}

@@ -1,0 +1,27 @@
+import { getServerSession } from "next-auth";
+import { ParkMembership, User } from "@/models";
+import { authOptions } from "./options";
+import type { Actor } from "./permissions";
+
+/**
+ * The signed-in user, re-read from the database on every call (ASVS v5.0.0 8.3.2):
+ * a role change or a disabled account takes effect at once, whatever the JWT says.
+ */
+export async function getActor(): Promise<Actor | null> {
+  const session = await getServerSession(authOptions);
+  const userId = session?.user?.id;
+  if (!userId) return null;
+  return loadActor(userId);
+}
+
+export async function loadActor(userId: string): Promise<Actor | null> {
+  const user = await User.findByPk(userId, {
+    include: [{ model: ParkMembership, as: "memberships", attributes: ["parkId", "role"] }],
+  });
+  if (!user || user.disabledAt) return null;
+  const memberships = ((user as unknown as { memberships?: ParkMembership[] }).memberships ?? []).map((m) => ({
+    parkId: m.parkId,
+    role: m.role,
+  }));
+  return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole, memberships };
+}

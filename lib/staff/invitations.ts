@@ -1,0 +1,75 @@
+import { Op } from "sequelize";
+import { authorize, type Actor } from "@/lib/auth/permissions";
+import { hashPassword, passwordSchema } from "@/lib/auth/password";
+import { hashToken, newToken } from "@/lib/auth/tokens";
+import { env } from "@/lib/env";
+import { AppError } from "@/lib/errors";
+import { sendMail } from "@/lib/mail/transport";
+import { acceptInvitationFields, invitationFields } from "@/lib/validations/account";
+import { AuditEvent, Invitation, Park, ParkMembership, User, sequelize } from "@/models";
+
+const INVITATION_DAYS = 7;
+
+/** A manager invites someone to their park as manager or ranger; the link goes by e-mail. */
+export async function inviteStaff(actor: Actor | null, parkId: string, input: unknown) {
+  authorize(actor, "staff:invite", { parkId });
+  const { email, role } = invitationFields.parse(input);
+  const park = await Park.findByPk(parkId);
+  if (!park) throw new AppError(404, "Park not found.");
+  const token = newToken();
+  const invitation = await sequelize.transaction(async (transaction) => {
+    const created = await Invitation.create(
+      { parkId, email, role, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), acceptedAt: null },
+      { transaction },
+    );
+    await AuditEvent.create({ parkId, actorId: actor.id, action: "staff.invite", subjectType: "invitation", subjectId: created.id, data: { email, role } }, { transaction });
+    return created;
+  });
+  const link = `${env().APP_URL}/invitations/${token}`;
+  await sendMail({
+    to: email,
+    subject: `You're invited to join ${park.name} on Loamcast`,
+    text: `${actor.name} invited you to join ${park.name} on Loamcast as ${role}.\n\nAccept within ${INVITATION_DAYS} days: ${link}\n\nIf you were not expecting this, ignore this e-mail.`,
+  });
+  return { id: invitation.id, email, role, expiresAt: invitation.expiresAt, link };
+}
+
+export async function findOpenInvitation(token: string) {
+  const invitation = await Invitation.findOne({
+    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    include: [{ model: Park, as: "park", attributes: ["name", "slug"] }],
+  });
+  return invitation as (Invitation & { park?: Park }) | null;
+}
+
+/**
+ * Accepting creates the account (or uses the existing one with that address) and the
+ * membership, in one transaction; a used, expired or tampered token changes nothing.
+ */
+export async function acceptInvitation(input: unknown) {
+  const fields = acceptInvitationFields.parse(input);
+  const invitation = await findOpenInvitation(fields.token);
+  if (!invitation) throw new AppError(400, "This invitation link is not valid any more. Ask your manager for a new one.", "token");
+  const existing = await User.findOne({ where: { email: invitation.email } });
+  let passwordHash: string | null = null;
+  if (!existing) {
+    const password = passwordSchema.safeParse(fields.password);
+    if (!password.success) throw new AppError(400, password.error.issues[0].message, "password");
+    passwordHash = await hashPassword(password.data);
+  }
+  return sequelize.transaction(async (transaction) => {
+    const [claimed] = await Invitation.update(
+      { acceptedAt: new Date() },
+      { where: { id: invitation.id, acceptedAt: null }, transaction },
+    );
+    if (claimed !== 1) throw new AppError(409, "This invitation was already used.");
+    const user =
+      existing ??
+      (await User.create({ email: invitation.email, name: fields.name, passwordHash: passwordHash!, siteRole: "rider", disabledAt: null }, { transaction }));
+    const membership = await ParkMembership.findOne({ where: { parkId: invitation.parkId, userId: user.id }, transaction });
+    if (membership) await membership.update({ role: invitation.role }, { transaction });
+    else await ParkMembership.create({ parkId: invitation.parkId, userId: user.id, role: invitation.role }, { transaction });
+    await AuditEvent.create({ parkId: invitation.parkId, actorId: user.id, action: "staff.join", subjectType: "invitation", subjectId: invitation.id, data: { role: invitation.role } }, { transaction });
+    return { userId: user.id, email: user.email, role: invitation.role, parkSlug: invitation.park?.slug, existingAccount: Boolean(existing) };
+  });
+}

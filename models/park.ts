@@ -1,0 +1,38 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
+import { sequelize } from "@/lib/db";
+
+/** Base layers a park owns for its map: boundary, lifts, roads, summit/base points, contours. */
+export type ParkMapLayers = { [layer: string]: GeoJSON.FeatureCollection | undefined };
+
+export class Park extends Model<InferAttributes<Park>, InferCreationAttributes<Park>> {
+  declare id: CreationOptional<string>;
+  declare slug: string;
+  declare name: string;
+  declare timeZone: string;
+  declare centerLon: number;
+  declare centerLat: number;
+  declare baseElevationM: number;
+  declare summitElevationM: number;
+  declare fictional: CreationOptional<boolean>;
+  declare mapLayers: CreationOptional<ParkMapLayers>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+Park.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    slug: { type: DataTypes.STRING(60), allowNull: false, unique: true },
+    name: { type: DataTypes.STRING(100), allowNull: false },
+    timeZone: { type: DataTypes.STRING(64), allowNull: false },
+    centerLon: { type: DataTypes.DOUBLE, allowNull: false },
+    centerLat: { type: DataTypes.DOUBLE, allowNull: false },
+    baseElevationM: { type: DataTypes.INTEGER, allowNull: false },
+    summitElevationM: { type: DataTypes.INTEGER, allowNull: false },
+    fictional: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    mapLayers: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: "parks", underscored: true },
+);

@@ -1,0 +1,35 @@
+import { defineConfig, devices } from "@playwright/test";
+
+const port = Number(process.env.PORT ?? 3100);
+const chromium = {
+  executablePath: "/usr/bin/chromium",
+  args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+};
+
+export default defineConfig({
+  testDir: "tests/e2e",
+  outputDir: ".local/test-results/e2e-artifacts",
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  timeout: 60_000,
+  reporter: [["list"], ["json", { outputFile: ".local/test-results/e2e.json" }]],
+  use: {
+    baseURL: `http://localhost:${port}`,
+    launchOptions: chromium,
+    trace: "off",
+    screenshot: "only-on-failure",
+  },
+  projects: [
+    { name: "phone", use: { ...devices["Pixel 7"], launchOptions: chromium } },
+    { name: "desktop", use: { viewport: { width: 1280, height: 860 }, launchOptions: chromium }, testMatch: /.*\.desktop\.spec\.ts/ },
+  ],
+  webServer: {
+    command: `node_modules/.bin/next start -p ${port}`,
+    url: `http://localhost:${port}/api/health`,
+    reuseExistingServer: false,
+    timeout: 120_000,
+    stdout: "pipe",
+    stderr: "pipe",
+  },
+});

@@ -1,0 +1,76 @@
+#!/usr/bin/env bash
+# PostgreSQL cluster helpers for the project's own scripts (sourced, not run).
+# A cluster per purpose ("dev", "test") lives outside the work tree when we run as root,
+# because the postgres user may not be able to enter the clone's folder.
+set -euo pipefail
+
+pg_bin_dir() {
+  local d
+  for d in /usr/lib/postgresql/*/bin; do [ -x "$d/initdb" ] && { echo "$d"; return; }; done
+  command -v initdb >/dev/null 2>&1 && { dirname "$(command -v initdb)"; return; }
+  return 1
+}
+
+pg_ensure_installed() {
+  if ! pg_bin_dir >/dev/null 2>&1; then
+    echo "› PostgreSQL server not found: installing Debian's postgresql package"
+    local SUDO=""; [ "$(id -u)" -ne 0 ] && SUDO="sudo"
+    $SUDO apt-get update -qq && DEBIAN_FRONTEND=noninteractive $SUDO apt-get install -y -qq postgresql >/dev/null
+  fi
+  PG_BIN="$(pg_bin_dir)"
+}
+
+# Run a PostgreSQL server binary as the right user.
+pg_as_owner() {
+  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+}
+
+# pg_cluster_dir NAME -> folder holding this clone's cluster NAME
+pg_cluster_dir() {
+  local name="$1" key
+  key="$(printf '%s' "$PWD" | sha1sum | cut -c1-10)"
+  if [ "$(id -u)" -eq 0 ]; then echo "/var/tmp/loamcast-pg/$key/$name"; else echo "$PWD/.local/pg/$name"; fi
+}
+
+port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null && { exec 3>&- 3<&-; return 0; }; return 1; }
+
+# pg_start NAME PORT PASSWORD: init the cluster on first use, start it, wait until ready.
+pg_start() {
+  local name="$1" port="$2" password="$3" dir
+  pg_ensure_installed
+  dir="$(pg_cluster_dir "$name")"
+  mkdir -p "$dir"
+  [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$dir" && chmod 700 "$dir" && chmod 755 "$(dirname "$dir")" "$(dirname "$(dirname "$dir")")"
+  if [ ! -f "$dir/data/PG_VERSION" ]; then
+    echo "› Creating PostgreSQL cluster '$name' in $dir"
+    printf '%s\n' "$password" > "$dir/pwfile"
+    [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$dir/pwfile"
+    pg_as_owner "$PG_BIN/initdb" -D "$dir/data" -U loamcast --pwfile="$dir/pwfile" \
+      --auth-local=scram-sha-256 --auth-host=scram-sha-256 -E UTF8 --locale=C.UTF-8 >"$dir/initdb.log" 2>&1 \
+      || { cat "$dir/initdb.log"; return 1; }
+    rm -f "$dir/pwfile"
+  fi
+  if pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" status >/dev/null 2>&1; then
+    echo "› PostgreSQL '$name' already running"
+    return 0
+  fi
+  if port_in_use "$port"; then
+    echo "✗ Port $port (PostgreSQL '$name') is already taken by another program. Free it or set PGPORT." >&2
+    return 1
+  fi
+  pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 30 \
+    -o "-c listen_addresses=127.0.0.1 -p $port -k $dir" start >/dev/null \
+    || { tail -20 "$dir/server.log"; return 1; }
+  echo "› PostgreSQL '$name' listening on 127.0.0.1:$port"
+}
+
+pg_stop() {
+  local dir; dir="$(pg_cluster_dir "$1")"
+  [ -f "$dir/data/postmaster.pid" ] && pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w stop >/dev/null 2>&1 || true
+}
+
+# pg_restart_fast NAME: used by fault tests.
+pg_restart() {
+  local dir; dir="$(pg_cluster_dir "$1")"
+  pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w restart >/dev/null
+}

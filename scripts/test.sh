@@ -1,0 +1,51 @@
+#!/usr/bin/env bash
+# npm test: the same bootstrap as npm start, against a throwaway database, then
+# type-check, unit tests, integration tests (real PostgreSQL) and browser tests (Chromium).
+set -uo pipefail
+. "$(dirname "$0")/bootstrap.sh"
+. scripts/pg.sh
+set +e
+
+ensure_node_modules || exit 1
+load_env test
+export BCRYPT_COST=${BCRYPT_COST:-10}
+
+if [ ! -x /usr/bin/chromium ]; then
+  say "› Installing Debian's chromium for the browser tests"
+  SUDO=""; [ "$(id -u)" -ne 0 ] && SUDO="sudo"
+  $SUDO apt-get update -qq && DEBIAN_FRONTEND=noninteractive $SUDO apt-get install -y -qq chromium >/dev/null || { echo "✗ could not install chromium"; exit 1; }
+fi
+
+cleanup() { trap - EXIT INT TERM; stop_children; pg_stop test; }
+trap cleanup EXIT INT TERM
+
+pg_start test "$PG_PORT" "$PG_PASSWORD" || exit 1
+node_modules/.bin/tsx scripts/db.ts fresh || exit 1
+rm -rf "$PHOTO_STORAGE_DIR"
+start_fake_smtp
+rm -rf .local/test-results && mkdir -p .local/test-results
+
+declare -A RESULT
+run_step() {
+  local name="$1"; shift
+  say "━━ $name"
+  if "$@"; then RESULT[$name]=pass; else RESULT[$name]=FAIL; fi
+}
+
+run_step typecheck node_modules/.bin/tsc --noEmit
+run_step unit node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile=.local/test-results/unit.json
+run_step integration node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile=.local/test-results/integration.json
+run_step build node_modules/.bin/next build
+if [ "${RESULT[build]}" = pass ]; then
+  run_step browser node_modules/.bin/playwright test
+else
+  RESULT[browser]=FAIL
+fi
+
+node scripts/test-summary.mjs
+status=0
+for step in typecheck unit integration build browser; do
+  printf '  %-12s %s\n' "$step" "${RESULT[$step]}"
+  [ "${RESULT[$step]}" = pass ] || status=1
+done
+exit $status
