@@ -15,7 +15,8 @@ export function Field(props: { name: string; label: string; type?: string; state
         type={props.type ?? "text"}
         autoComplete={props.autoComplete}
         required={props.required}
-        defaultValue={props.defaultValue}
+        defaultValue={props.state?.values?.[props.name] ?? props.defaultValue}
+        key={props.state?.values?.[props.name] ?? props.defaultValue}
         aria-invalid={Boolean(error)}
         aria-describedby={error ? `${id}-error` : props.hint ? `${id}-hint` : undefined}
         className="field"

@@ -11,7 +11,7 @@ export async function signUpAction(_prev: FormState, form: FormData): Promise<Fo
   try {
     await signUpRider({ name: form.get("name"), email: form.get("email"), password: form.get("password") });
   } catch (error) {
-    return formError(error);
+    return formError(error, form);
   }
   redirect("/sign-in?created=1");
 }
@@ -20,7 +20,7 @@ export async function acceptInvitationAction(_prev: FormState, form: FormData): 
   try {
     await acceptInvitation({ token: form.get("token"), name: form.get("name"), password: form.get("password") ?? "" });
   } catch (error) {
-    return formError(error);
+    return formError(error, form);
   }
   redirect("/sign-in?joined=1");
 }
@@ -31,6 +31,6 @@ export async function inviteStaffAction(_prev: FormState, form: FormData): Promi
     const invitation = await inviteStaff(await getActor(), park.id, { email: form.get("email"), role: form.get("role") });
     return { ok: true, message: `Invitation sent to ${invitation.email}.` };
   } catch (error) {
-    return formError(error);
+    return formError(error, form);
   }
 }

@@ -2,11 +2,24 @@ import { ZodError } from "zod";
 import { AppError } from "@/lib/errors";
 
 /** What every form's server action returns to `useActionState`. */
-export type FormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string> };
+export type FormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string>; values?: Record<string, string> };
 export const initialFormState: FormState = { ok: false };
 
 /** Turns a refusal into per-field messages; anything unexpected becomes a generic message. */
-export function formError(error: unknown): FormState {
+export function formError(error: unknown, form?: FormData): FormState {
+  return { ...describeError(error), values: form ? echoValues(form) : undefined };
+}
+
+/** Non-secret fields are sent back so a refused form keeps what the user typed. */
+function echoValues(form: FormData): Record<string, string> {
+  const values: Record<string, string> = {};
+  for (const [key, value] of form.entries()) {
+    if (typeof value === "string" && !/password|token|^\$/i.test(key)) values[key] = value.slice(0, 2000);
+  }
+  return values;
+}
+
+function describeError(error: unknown): FormState {
   if (error instanceof AppError) {
     return { ok: false, message: error.message, fieldErrors: error.field ? { [error.field]: error.message } : undefined };
   }
