@@ -1,9 +1,21 @@
 /** All models and their associations, defined in one place. Import models from here. */
 import { AuditEvent } from "./audit-event";
+import { Hazard } from "./hazard";
 import { Invitation } from "./invitation";
+import { Notice } from "./notice";
+import { NoticeDelivery } from "./notice-delivery";
 import { Park } from "./park";
 import { ParkMembership } from "./park-membership";
+import { ParkState } from "./park-state";
+import { Photo } from "./photo";
+import { RideLog } from "./ride-log";
+import { Setup } from "./setup";
 import { SignInAttempt } from "./sign-in-attempt";
+import { Subscription } from "./subscription";
+import { Trail } from "./trail";
+import { TrailFeature } from "./trail-feature";
+import { TrailReport } from "./trail-report";
+import { TrailVersion } from "./trail-version";
 import { User } from "./user";
 
 Park.hasMany(ParkMembership, { foreignKey: "parkId", as: "memberships" });
@@ -12,5 +24,49 @@ User.hasMany(ParkMembership, { foreignKey: "userId", as: "memberships" });
 ParkMembership.belongsTo(User, { foreignKey: "userId", as: "user" });
 Invitation.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 
+Park.hasMany(Trail, { foreignKey: "parkId", as: "trails" });
+Trail.belongsTo(Park, { foreignKey: "parkId", as: "park" });
+Trail.hasMany(TrailVersion, { foreignKey: "trailId", as: "versions" });
+Trail.hasMany(TrailFeature, { foreignKey: "trailId", as: "features" });
+TrailFeature.belongsTo(Trail, { foreignKey: "trailId", as: "trail" });
+
+Trail.hasMany(TrailReport, { foreignKey: "trailId", as: "reports" });
+TrailReport.belongsTo(Trail, { foreignKey: "trailId", as: "trail" });
+TrailReport.belongsTo(User, { foreignKey: "reporterId", as: "reporter" });
+Park.hasMany(ParkState, { foreignKey: "parkId", as: "states" });
+Park.hasMany(Hazard, { foreignKey: "parkId", as: "hazards" });
+Hazard.belongsTo(Trail, { foreignKey: "trailId", as: "trail" });
+Hazard.hasMany(Photo, { foreignKey: "hazardId", as: "photos" });
+
+User.hasMany(Setup, { foreignKey: "userId", as: "setups" });
+User.hasMany(RideLog, { foreignKey: "userId", as: "rideLogs" });
+RideLog.belongsTo(Setup, { foreignKey: "setupId", as: "setup" });
+
+User.hasMany(Subscription, { foreignKey: "userId", as: "subscriptions" });
+Subscription.belongsTo(Park, { foreignKey: "parkId", as: "park" });
+Subscription.belongsTo(User, { foreignKey: "userId", as: "user" });
+Notice.belongsTo(Park, { foreignKey: "parkId", as: "park" });
+Notice.hasMany(NoticeDelivery, { foreignKey: "noticeId", as: "deliveries" });
+NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
+
 export { sequelize } from "@/lib/db";
-export { AuditEvent, Invitation, Park, ParkMembership, SignInAttempt, User };
+export {
+  AuditEvent,
+  Hazard,
+  Invitation,
+  Notice,
+  NoticeDelivery,
+  Park,
+  ParkMembership,
+  ParkState,
+  Photo,
+  RideLog,
+  Setup,
+  SignInAttempt,
+  Subscription,
+  Trail,
+  TrailFeature,
+  TrailReport,
+  TrailVersion,
+  User,
+};

@@ -1,0 +1,40 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
+import { sequelize } from "@/lib/db";
+
+export type DeliveryState = "queued" | "sending" | "sent" | "retrying" | "failed";
+
+/** One notice to one rider. Unique per (notice, user); claimed before each send so it goes out once. */
+export class NoticeDelivery extends Model<InferAttributes<NoticeDelivery>, InferCreationAttributes<NoticeDelivery>> {
+  declare id: CreationOptional<string>;
+  declare noticeId: string;
+  declare userId: string;
+  declare email: string;
+  declare state: CreationOptional<DeliveryState>;
+  declare attempts: CreationOptional<number>;
+  declare lastError: CreationOptional<string | null>;
+  declare messageId: string;
+  declare claimedAt: CreationOptional<Date | null>;
+  declare claimedBy: CreationOptional<string | null>;
+  declare sentAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+NoticeDelivery.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    noticeId: { type: DataTypes.UUID, allowNull: false },
+    userId: { type: DataTypes.UUID, allowNull: false },
+    email: { type: DataTypes.STRING(254), allowNull: false },
+    state: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "queued" },
+    attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    lastError: { type: DataTypes.STRING(500), allowNull: true },
+    messageId: { type: DataTypes.STRING(200), allowNull: false },
+    claimedAt: { type: DataTypes.DATE, allowNull: true },
+    claimedBy: { type: DataTypes.STRING(64), allowNull: true },
+    sentAt: { type: DataTypes.DATE, allowNull: true },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: "notice_deliveries", underscored: true },
+);
