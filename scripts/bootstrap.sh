@@ -37,10 +37,12 @@ load_env() {
   if [ -f .env ]; then set -a; . ./.env; set +a; fi
   ensure_secrets
   local pg_port smtp_port control_port db app_port
+  # LOAMCAST_PORT_OFFSET moves every port at once, so several clones can test side by side.
+  local off=${LOAMCAST_PORT_OFFSET:-0}
   if [ "$purpose" = "test" ]; then
-    pg_port=${TEST_PGPORT:-55433}; smtp_port=2526; control_port=2581; db=loamcast_test; app_port=${TEST_PORT:-3100}
+    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}
   else
-    pg_port=${PGPORT:-55432}; smtp_port=2525; control_port=2580; db=loamcast; app_port=${PORT:-3000}
+    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}
   fi
   export LOAMCAST_PURPOSE="$purpose" PG_PORT="$pg_port" PORT="$app_port"
   export PG_PASSWORD="${PG_PASSWORD:-$GENERATED_PG_PASSWORD}"
