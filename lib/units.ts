@@ -1,0 +1,77 @@
+/**
+ * Unit conversions and display helpers. Factors from NIST Special Publication 811 (2008),
+ * Appendix B.8: psi = 6 894.757 293 168 Pa, bar = 100 000 Pa, lb = 0.453 592 37 kg (exact),
+ * ft = 0.3048 m (exact), in = 0.0254 m (exact). The engine works in SI; the rider picks units.
+ */
+export const PA_PER_PSI = 6894.757293168;
+export const KPA_PER_PSI = PA_PER_PSI / 1000;
+export const KPA_PER_BAR = 100;
+export const KPA_PER_ATM = 101.325;
+export const KG_PER_LB = 0.45359237;
+export const M_PER_FT = 0.3048;
+export const MM_PER_IN = 25.4;
+
+export const PRESSURE_UNITS = ["psi", "bar", "kPa"] as const;
+export const MASS_UNITS = ["kg", "lb"] as const;
+export const LENGTH_UNITS = ["m", "ft"] as const;
+export type PressureUnit = (typeof PRESSURE_UNITS)[number];
+export type MassUnit = (typeof MASS_UNITS)[number];
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+
+export const psiToKpa = (psi: number) => psi * KPA_PER_PSI;
+export const kpaToPsi = (kPa: number) => kPa / KPA_PER_PSI;
+export const barToKpa = (bar: number) => bar * KPA_PER_BAR;
+export const kpaToBar = (kPa: number) => kPa / KPA_PER_BAR;
+export const lbToKg = (lb: number) => lb * KG_PER_LB;
+export const kgToLb = (kg: number) => kg / KG_PER_LB;
+export const ftToM = (ft: number) => ft * M_PER_FT;
+export const mToFt = (m: number) => m / M_PER_FT;
+export const inToMm = (inches: number) => inches * MM_PER_IN;
+export const mmToIn = (mm: number) => mm / MM_PER_IN;
+export const celsiusToKelvin = (c: number) => c + 273.15;
+
+const KPA_PER_UNIT: Record<PressureUnit, number> = { psi: KPA_PER_PSI, bar: KPA_PER_BAR, kPa: 1 };
+
+/** Converts a pressure in kPa to the given unit. */
+export const kpaTo = (kPa: number, unit: PressureUnit) => kPa / KPA_PER_UNIT[unit];
+/** Converts a pressure in the given unit to kPa. */
+export const kpaFrom = (value: number, unit: PressureUnit) => value * KPA_PER_UNIT[unit];
+
+/** Decimals that match a tyre gauge's resolution in each unit. */
+const PRESSURE_DECIMALS: Record<PressureUnit, number> = { psi: 1, bar: 2, kPa: 0 };
+const MINUS = "\u2212";
+
+type FormatOptions = { signed?: boolean; decimals?: number };
+
+function formatNumber(value: number, decimals: number, signed: boolean): string {
+  const rounded = Number(value.toFixed(decimals));
+  const magnitude = Math.abs(rounded).toFixed(decimals);
+  if (rounded < 0) return `${MINUS}${magnitude}`;
+  if (signed && rounded > 0) return `+${magnitude}`;
+  if (signed) return `±${magnitude}`;
+  return magnitude;
+}
+
+/** "19.0 psi", "1.31 bar", "131 kPa"; with `signed`, "+0.9 psi" / "−1.5 psi". */
+export function formatPressure(kPa: number, unit: PressureUnit, options: FormatOptions = {}): string {
+  const decimals = options.decimals ?? PRESSURE_DECIMALS[unit];
+  return `${formatNumber(kpaTo(kPa, unit), decimals, options.signed ?? false)} ${unit}`;
+}
+
+/** "72.0 kg" or "158.7 lb". */
+export function formatMass(kg: number, unit: MassUnit, decimals = 1): string {
+  const value = unit === "kg" ? kg : kgToLb(kg);
+  return `${formatNumber(value, decimals, false)} ${unit}`;
+}
+
+/** "1400 m" or "4593 ft". */
+export function formatLength(m: number, unit: LengthUnit, decimals = 0): string {
+  const value = unit === "m" ? m : mToFt(m);
+  return `${formatNumber(value, decimals, false)} ${unit}`;
+}
+
+/** "6 °C" or "−4.5 °C" (one decimal only when needed). */
+export function formatTemperature(c: number): string {
+  const decimals = Number.isInteger(Number(c.toFixed(1))) ? 0 : 1;
+  return `${formatNumber(c, decimals, false)} °C`;
+}
