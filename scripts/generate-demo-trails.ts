@@ -1,0 +1,166 @@
+/**
+ * Generates the FICTIONAL demo park "Harrow Ridge Bike Park": its trail files (half GPX 1.1, half
+ * GeoJSON), park.json and trails.json under data/demo-park/. Everything here is invented.
+ * Deterministic (seeded), so running it again gives the same files. Run: npx tsx scripts/generate-demo-trails.ts
+ */
+import { mkdirSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { along, destination, length, lineString } from "@turf/turf";
+import { toGeoJson } from "@/lib/trails/export-geojson";
+import { toGpx } from "@/lib/trails/export-gpx";
+import { synthesizeTrail, seededRandom, type SyntheticTrailSpec } from "@/lib/trails/synthetic";
+import type { Position, TrailWaypoint } from "@/lib/trails/types";
+import type { Difficulty, TrailDirection, TrailKind } from "@/lib/validations/trail";
+
+const OUT = path.join(process.cwd(), "data", "demo-park");
+const CENTER = { lon: -121.94, lat: 47.3 };
+const BASE = { lon: -121.928, lat: 47.291, ele: 620 };
+const SUMMIT = { lon: -121.952, lat: 47.309, ele: 1340 };
+const MEADOW = { lon: -121.9352, lat: 47.2964, ele: 820 }; // top of the beginners' tow
+
+type Stop = typeof BASE;
+type FeatureMark = [fraction: number, type: string, name: string];
+type DemoTrail = {
+  name: string;
+  difficulty: Difficulty;
+  kind: TrailKind;
+  direction: TrailDirection;
+  format: "gpx" | "geojson";
+  from: Stop;
+  to: Stop;
+  avgGradePct: number;
+  /** Lane on the hill (bulge), width of its switchbacks (meander) and the feel of its profile. */
+  shape: Pick<SyntheticTrailSpec, "bulgeM" | "meanderM" | "gradeVariation" | "rollerM" | "rollerWavelengthM">;
+  features: FeatureMark[];
+  /** Split the recording here (fraction) to show a GPS signal gap between two segments. */
+  gapAt?: number;
+};
+
+const TRAILS: DemoTrail[] = [
+  { name: "Mossback Ramble", difficulty: "easiest", kind: "flow", direction: "downhill", format: "gpx", from: MEADOW, to: BASE, avgGradePct: 3.6,
+    shape: { bulgeM: 260, meanderM: 110, gradeVariation: 0.25, rollerM: 0.4, rollerWavelengthM: 90 }, features: [[0.3, "berm", "Fern Bend"], [0.7, "wooden feature", "Creek Bridge"]] },
+  { name: "Cedar Skip", difficulty: "easy", kind: "flow", direction: "downhill", format: "geojson", from: MEADOW, to: BASE, avgGradePct: 4.6,
+    shape: { bulgeM: -260, meanderM: 110, gradeVariation: 0.4, rollerM: 0.8, rollerWavelengthM: 70 }, features: [[0.25, "berm", "Cedar Curl"], [0.55, "jump", "Little Hop"], [0.8, "berm", "Last Lean"]] },
+  { name: "Switchgrass Traverse", difficulty: "easy", kind: "cross-country", direction: "both", format: "gpx", from: SUMMIT, to: BASE, avgGradePct: 4.5,
+    shape: { bulgeM: 1350, meanderM: 200, gradeVariation: 0.45, rollerM: 1.0, rollerWavelengthM: 140 }, features: [[0.2, "roots", "Spruce Knuckles"], [0.6, "wooden feature", "Bog Boardwalk"]] },
+  { name: "Tumblewire", difficulty: "intermediate", kind: "jump", direction: "downhill", format: "geojson", from: SUMMIT, to: BASE, avgGradePct: 8,
+    shape: { bulgeM: 950, meanderM: 150, gradeVariation: 0.35, rollerM: 2.2, rollerWavelengthM: 45 },
+    features: [[0.12, "jump", "Tabletop One"], [0.2, "berm", "Wire Turn"], [0.35, "jump", "Step-up Stack"], [0.5, "berm", "Big Swoop"], [0.68, "jump", "Hip to Hip"], [0.85, "drop", "Exit Ledge"]] },
+  { name: "Slatebelt Flow", difficulty: "intermediate", kind: "flow", direction: "downhill", format: "gpx", from: SUMMIT, to: BASE, avgGradePct: 9, gapAt: 0.58,
+    shape: { bulgeM: -950, meanderM: 150, gradeVariation: 0.4, rollerM: 1.2, rollerWavelengthM: 60 }, features: [[0.15, "berm", "Slate Wall"], [0.4, "berm", "Moss Corner"], [0.75, "jump", "Roller Kicker"]] },
+  { name: "Long Haul Climb", difficulty: "intermediate", kind: "climb", direction: "uphill", format: "geojson", from: BASE, to: SUMMIT, avgGradePct: 7.5,
+    shape: { bulgeM: 1350, meanderM: 200, gradeVariation: 0.5, rollerM: 0.6, rollerWavelengthM: 110 }, features: [[0.45, "roots", "Root Stairs"], [0.8, "rock garden", "Talus Step"]] },
+  { name: "Gnarlroot", difficulty: "difficult", kind: "technical", direction: "downhill", format: "gpx", from: SUMMIT, to: BASE, avgGradePct: 12.5,
+    shape: { bulgeM: 600, meanderM: 150, gradeVariation: 0.45, rollerM: 0.8, rollerWavelengthM: 40 }, features: [[0.2, "roots", "Tangle"], [0.42, "rock garden", "Scatter"], [0.6, "drop", "Root Ledge"], [0.82, "roots", "Knotted Chute"]] },
+  { name: "Basalt Chute", difficulty: "difficult", kind: "downhill", direction: "downhill", format: "geojson", from: SUMMIT, to: BASE, avgGradePct: 13.5,
+    shape: { bulgeM: -600, meanderM: 150, gradeVariation: 0.4, rollerM: 0.8, rollerWavelengthM: 50 }, features: [[0.3, "drop", "Column Drop"], [0.5, "wooden feature", "Ladder Bridge"], [0.78, "rock garden", "Basalt Blocks"]] },
+  { name: "Scree Stairs", difficulty: "extreme", kind: "technical", direction: "downhill", format: "gpx", from: SUMMIT, to: BASE, avgGradePct: 18.5,
+    shape: { bulgeM: 250, meanderM: 110, gradeVariation: 0.35, rollerM: 0.6, rollerWavelengthM: 35 }, features: [[0.25, "rock garden", "Loose Stair"], [0.5, "drop", "Slab Drop"], [0.75, "rock garden", "Scree Fan"]] },
+  { name: "Plumbline", difficulty: "extreme", kind: "downhill", direction: "downhill", format: "geojson", from: SUMMIT, to: BASE, avgGradePct: 21.5,
+    shape: { bulgeM: -250, meanderM: 90, gradeVariation: 0.3, rollerM: 0.6, rollerWavelengthM: 40 }, features: [[0.3, "drop", "Plumb Drop"], [0.55, "jump", "Gap Line"], [0.8, "roots", "Finish Roots"]] },
+];
+
+const slug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "");
+
+function buildLine(trail: DemoTrail, seed: number): Position[] {
+  const random = seededRandom(seed * 7919);
+  const jitter = () => (random() - 0.5) * 0.0006; // spread trailheads a few tens of metres apart
+  const drop = Math.abs(trail.from.ele - trail.to.ele);
+  return synthesizeTrail({
+    seed,
+    start: [trail.from.lon + jitter(), trail.from.lat + jitter()],
+    end: [trail.to.lon + jitter(), trail.to.lat + jitter()],
+    startEleM: trail.from.ele,
+    endEleM: trail.to.ele,
+    lengthM: drop / (trail.avgGradePct / 100),
+    spacingM: 7,
+    noiseM: 0.3,
+    ...trail.shape,
+  });
+}
+
+/** Feature waypoints a few metres beside the line, as a crew's GPS would mark them. */
+function featureWaypoints(line: Position[], marks: FeatureMark[], seed: number): TrailWaypoint[] {
+  const random = seededRandom(seed * 104729);
+  const feature = lineString(line);
+  const lengthKm = length(feature, { units: "kilometers" });
+  return marks.map(([fraction, type, name]) => {
+    const on = along(feature, lengthKm * fraction, { units: "kilometers" });
+    const beside = destination(on, (2 + random() * 4) / 1000, random() * 360 - 180, { units: "kilometers" });
+    const [lon, lat] = beside.geometry.coordinates;
+    return { name, type, lon: round(lon, 7), lat: round(lat, 7) };
+  });
+}
+
+const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
+
+/** Drops a few points at `fraction` so the recording has two segments with a short gap between them. */
+function splitAt(line: Position[], fraction: number): Position[][] {
+  const cut = Math.round(line.length * fraction);
+  return [line.slice(0, cut), line.slice(cut + 4)];
+}
+
+const point = (name: string, stop: Stop) => ({
+  type: "Feature" as const,
+  properties: { name, elevationM: stop.ele },
+  geometry: { type: "Point" as const, coordinates: [stop.lon, stop.lat] },
+});
+
+const liftLine = (name: string, from: Stop, to: Stop) => ({
+  type: "Feature" as const,
+  properties: { name, from: from === BASE ? "base" : "summit", verticalM: to.ele - from.ele },
+  geometry: { type: "LineString" as const, coordinates: [[from.lon, from.lat], [to.lon, to.lat]] },
+});
+
+/** A boundary around every trail with a margin, as an RFC 7946 polygon (exterior ring counter-clockwise). */
+function boundary(lines: Position[][]) {
+  const margin = 0.004;
+  const lons = lines.flat().map((p) => p[0]);
+  const lats = lines.flat().map((p) => p[1]);
+  const [w, e] = [Math.min(...lons) - margin, Math.max(...lons) + margin].map((x) => round(x, 5));
+  const [s, n] = [Math.min(...lats) - margin, Math.max(...lats) + margin].map((x) => round(x, 5));
+  return {
+    type: "Feature" as const,
+    properties: { name: "Harrow Ridge Bike Park boundary (fictional)" },
+    geometry: { type: "Polygon" as const, coordinates: [[[w, s], [e, s], [e, n], [w, n], [w, s]]] },
+  };
+}
+
+function main(): void {
+  mkdirSync(path.join(OUT, "trails"), { recursive: true });
+  const index = [];
+  const lines: Position[][] = [];
+  for (const [i, trail] of TRAILS.entries()) {
+    const seed = 1000 + i;
+    const line = buildLine(trail, seed);
+    lines.push(line);
+    const segments = trail.gapAt ? splitAt(line, trail.gapAt) : [line];
+    const waypoints = featureWaypoints(line, trail.features, seed);
+    const file = `${slug(trail.name)}.${trail.format}`;
+    const exported = { name: trail.name, segments, waypoints };
+    const body = trail.format === "gpx" ? toGpx(exported) : `${JSON.stringify(toGeoJson(exported))}\n`;
+    writeFileSync(path.join(OUT, "trails", file), body);
+    index.push({ name: trail.name, difficulty: trail.difficulty, kind: trail.kind, direction: trail.direction, file });
+    console.log(`${file.padEnd(28)} ${line.length} points`);
+  }
+  const park = {
+    name: "Harrow Ridge Bike Park",
+    slug: "harrow-ridge",
+    fictional: true,
+    note: "A fictional park invented for the Loamcast demo. Its place, trails and lifts do not exist.",
+    timeZone: "America/Los_Angeles",
+    center: CENTER,
+    baseElevationM: BASE.ele,
+    summitElevationM: SUMMIT.ele,
+    mapLayers: {
+      boundary: { type: "FeatureCollection", features: [boundary(lines)] },
+      lifts: { type: "FeatureCollection", features: [liftLine("Ridgeline Chair", BASE, SUMMIT), liftLine("Meadow Tow", BASE, MEADOW)] },
+      landmarks: { type: "FeatureCollection", features: [point("Summit", SUMMIT), point("Base area", BASE), point("Meadow (tow top)", MEADOW)] },
+    },
+  };
+  writeFileSync(path.join(OUT, "park.json"), `${JSON.stringify(park, null, 2)}\n`);
+  writeFileSync(path.join(OUT, "trails.json"), `${JSON.stringify(index, null, 2)}\n`);
+  console.log(`Wrote ${TRAILS.length} trails, park.json and trails.json to ${path.relative(process.cwd(), OUT)}`);
+}
+
+main();
