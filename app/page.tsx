@@ -17,7 +17,7 @@ export default async function HomePage() {
         {parks.map((park) => (
           <li key={park.slug} className="card space-y-2">
             <h2 className="text-xl font-bold">{park.name}</h2>
-            {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-500">Fictional demo park</p>}
+            {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-700">Fictional demo park</p>}
             <p className="text-sm text-loam-600">
               Base {park.baseElevationM} m · summit {park.summitElevationM} m · {park.timeZone}
             </p>

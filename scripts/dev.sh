@@ -11,7 +11,7 @@ trap cleanup EXIT INT TERM
 pg_start dev "$PG_PORT" "$PG_PASSWORD"
 node_modules/.bin/tsx scripts/db.ts prepare
 start_fake_smtp
-if [ -f scripts/worker.ts ]; then node_modules/.bin/tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
+if [ -f scripts/worker.ts ]; then node --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 node_modules/.bin/next dev -p "$PORT" &
 CHILD_PIDS+=($!)
 wait "${CHILD_PIDS[-1]}"

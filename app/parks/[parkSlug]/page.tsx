@@ -10,7 +10,7 @@ export default async function ParkPage({ params }: { params: Promise<{ parkSlug:
   return (
     <section className="space-y-3">
       <h1 className="text-2xl font-bold">{park.name}</h1>
-      {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-500">Fictional demo park</p>}
+      {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-700">Fictional demo park</p>}
       <p>
         Base {park.baseElevationM} m · summit {park.summitElevationM} m · {park.timeZone}
       </p>
