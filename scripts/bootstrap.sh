@@ -8,9 +8,15 @@ export NEXT_TELEMETRY_DISABLED=1
 say() { printf '\033[1m%s\033[0m\n' "$*"; }
 
 ensure_node_modules() {
-  if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+  # Reinstall only when the lock file's content changed since the last install (not its mtime:
+  # a fresh checkout touches every file).
+  local want have
+  want="$(sha1sum package-lock.json | cut -d' ' -f1)"
+  have="$(cat node_modules/.loamcast-lock.sha1 2>/dev/null || true)"
+  if [ ! -d node_modules ] || [ "$want" != "$have" ]; then
     say "› Installing npm packages (npm ci)"
     npm ci --no-audit --no-fund
+    echo "$want" > node_modules/.loamcast-lock.sha1
   fi
   [ -f public/vendor/maplibre-gl-worker.mjs ] || node scripts/copy-map-worker.mjs
 }
