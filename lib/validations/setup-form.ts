@@ -163,10 +163,10 @@ const PRESSURE_DECIMALS: Record<PressureUnit, number> = { psi: 2, bar: 3, kPa: 1
 export const pressureText = (kPa: number | undefined, unit: PressureUnit) => (kPa === undefined ? "" : numberText(kpaTo(kPa, unit), PRESSURE_DECIMALS[unit]));
 export const massText = (kg: number, unit: MassUnit) => numberText(unit === "lb" ? kgToLb(kg) : kg, 1);
 
-/** A stored width shows in inches when it is a whole number of 0.05″ (as typed in inches), else in mm. */
+/** A stored width shows in inches when it is within 0.1 mm of a whole number of 0.05″ (as typed in inches), else in mm. */
 function widthDraft(widthMm: number): Pick<WheelDraft, "width" | "widthUnit"> {
   const inches = mmToIn(widthMm);
-  const inInches = Math.abs(inches * 20 - Math.round(inches * 20)) < 0.01;
+  const inInches = Math.abs(inches * 20 - Math.round(inches * 20)) < 0.08;
   return inInches ? { width: numberText(inches, 2), widthUnit: "in" } : { width: numberText(widthMm, 1), widthUnit: "mm" };
 }
 
