@@ -22,4 +22,4 @@ export const frontRear = ([front, rear]: readonly [number, number] | readonly nu
   `front ${signedKpa(front)}, rear ${signedKpa(rear)} (≈ ${signedPsi(front)} / ${signedPsi(rear)})`;
 
 export const kpaAndPsi = (kPa: number) => `${kPa} kPa (≈ ${formatPressure(kPa, "psi")})`;
-export const percent = (fraction: number) => `${fraction > 0 ? "+" : fraction < 0 ? "\u2212" : ""}${Math.round(Math.abs(fraction) * 1000) / 10} %`;
+export const percent = (fraction: number) => `${fraction > 0 ? "+" : fraction < 0 ? "\u2212" : ""}${Math.round(Math.abs(fraction) * 1000) / 10}\u00a0%`;

@@ -7,7 +7,7 @@ import { AppError } from "@/lib/errors";
 import { findOwnSetup, setupView, storedSetup } from "@/lib/data/setups";
 import { parkForRequest, pickTrails, trailsToday } from "@/lib/data/trails-today";
 import { ceilingKpa, floorKpa } from "@/lib/pressure/band";
-import { suggestBaselineChange, type FeedbackSuggestion } from "@/lib/pressure/feedback";
+import { suggestBaselineChange } from "@/lib/pressure/feedback";
 import { shiftDate } from "@/lib/time";
 import { isUuid, parseInput } from "@/lib/validations/parse";
 import { rideLogSchema } from "@/lib/validations/ride-log";
@@ -15,9 +15,9 @@ import { setupSchema, type SetupInput } from "@/lib/validations/setup";
 import { unitsOf } from "@/lib/validations/units";
 import { RideLog, Setup, User, sequelize } from "@/models";
 import { staleSetup } from "./setups";
+import { canApply, type StoredSuggestion } from "./suggestion";
 
-/** The stored suggestion: the engine's answer plus what its change applies to. */
-export type StoredSuggestion = FeedbackSuggestion & { appliesTo: "baseline" | "ran" };
+export type { StoredSuggestion } from "./suggestion";
 
 const WHEELS = ["front", "rear"] as const;
 
@@ -78,12 +78,6 @@ export function rideLogView(log: RideLog) {
     appliedAt: log.appliedAt ?? null,
     createdAt: log.createdAt,
   };
-}
-
-/** What applying would do: a setup without a baseline gets one from what was run, plus the change. */
-export function canApply(log: { suggestion: StoredSuggestion | null; appliedAt: Date | null; setupId: string | null }, setupHasBaseline: boolean) {
-  if (!log.suggestion || log.appliedAt || !log.setupId) return false;
-  return !setupHasBaseline || log.suggestion.deltaKpa !== 0;
 }
 
 /** Applies a ride log's suggestion to its setup's baseline, in one transaction, at most once. */
