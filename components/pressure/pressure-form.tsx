@@ -9,7 +9,7 @@ import { STANDARD_CAUTIONS } from "@/lib/pressure/cautions";
 import type { PressureAnswer } from "@/lib/riders/pressure-today";
 import { PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/units";
 import { emptyDayDraft, pressureFieldFor, pressureRequestFrom, type DayDraft } from "@/lib/validations/pressure-form";
-import { emptySetupDraft, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
+import { emptySetupDraft, setupDraftSchema, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
 import { BandResult, Cautions } from "./band-result";
 import { DayFields, type ParkOption, type TrailOption } from "./day-fields";
 import { CheckInput, Segments } from "./inputs";
@@ -28,7 +28,7 @@ type Props = {
   initialSetupId?: string;
 };
 
-const STORE = { setup: "loamcast.pressure.setup", unit: "loamcast.pressure.unit" };
+const STORE = { setup: "loamcast.pressure.setup" };
 
 export function PressureForm(props: Props) {
   const router = useRouter();
@@ -44,21 +44,20 @@ export function PressureForm(props: Props) {
   const [busy, setBusy] = useState(false);
   const resultHeading = useRef<HTMLHeadingElement>(null);
 
-  // A setup kept on this device (anonymous riders only), read after the first render.
+  // A setup kept on this device (anonymous riders only), read once after the first render.
+  const { signedIn } = props;
   useEffect(() => {
-    if (props.signedIn) return;
+    if (signedIn) return;
     try {
-      const saved = localStorage.getItem(STORE.setup);
-      if (saved) {
-        setDraft({ ...emptySetupDraft(props.units), ...(JSON.parse(saved) as SetupDraft) });
+      const saved = setupDraftSchema.safeParse(JSON.parse(localStorage.getItem(STORE.setup) ?? "null"));
+      if (saved.success) {
+        setDraft(saved.data);
         setRemember(true);
       }
-      const savedUnit = localStorage.getItem(STORE.unit) as PressureUnit | null;
-      if (savedUnit && PRESSURE_UNITS.includes(savedUnit)) setUnit(savedUnit);
     } catch {
       // Storage blocked or damaged: start from an empty form.
     }
-  }, [props.signedIn, props.units]);
+  }, [signedIn]);
 
   // The server page re-renders with another park's trails: pick that park's defaults.
   const parkSlug = props.park?.slug ?? null;
@@ -78,7 +77,6 @@ export function PressureForm(props: Props) {
 
   function keepOnDevice() {
     try {
-      if (!props.signedIn) localStorage.setItem(STORE.unit, unit);
       if (!props.signedIn && !setupId) {
         if (remember) localStorage.setItem(STORE.setup, JSON.stringify(draft));
         else localStorage.removeItem(STORE.setup);
@@ -91,7 +89,8 @@ export function PressureForm(props: Props) {
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
     setMessage(null);
-    const built = pressureRequestFrom({ setupId, draft, day, unit });
+    // A setup typed by hand is shown in the unit it was typed in: one switch, not two.
+    const built = pressureRequestFrom({ setupId, draft, day, unit: setupId ? unit : draft.pressureUnit });
     if (!built.ok) {
       setErrors(built.errors);
       setMessage("Check the highlighted fields.");
@@ -144,7 +143,7 @@ export function PressureForm(props: Props) {
               )}
             </p>
           )}
-          <Segments name="unit" legend="Show pressures in" value={unit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={setUnit} />
+          {setupId && <Segments name="unit" legend="Show pressures in" value={unit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={setUnit} />}
         </fieldset>
         {!setupId && (
           <>

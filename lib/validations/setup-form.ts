@@ -5,7 +5,9 @@
  * Pure and client-safe: the form runs it on every change, the handlers re-check on the server.
  */
 import { formatPressure, inToMm, kgToLb, kpaFrom, kpaTo, lbToKg, mmToIn, type MassUnit, type PressureUnit } from "@/lib/units";
-import type { Casing, Pace, Surface } from "./pressure";
+import { z } from "zod";
+import { MASS_UNITS, PRESSURE_UNITS } from "@/lib/units";
+import { CASINGS, PACES, surfaceSchema, type Casing, type Pace, type Surface } from "./pressure";
 import { setupSchema, type SetupInput } from "./setup";
 
 export type WidthUnit = "in" | "mm";
@@ -50,6 +52,15 @@ export const emptySetupDraft = (units: { pressure: PressureUnit; mass: MassUnit 
   rearSag: "",
   forkTravel: "",
   frontSag: "",
+});
+
+const text = z.string().max(60);
+const wheelDraftSchema = z.object({ bsd: text, width: text, widthUnit: z.enum(["in", "mm"]), casing: z.enum(CASINGS), insert: z.boolean(), tubeless: z.boolean(), max: text, rimMax: text });
+/** The shape of a draft kept in the browser; anything else found there is ignored. */
+export const setupDraftSchema = z.object({
+  name: text, massUnit: z.enum(MASS_UNITS), pressureUnit: z.enum(PRESSURE_UNITS), riderMass: text, bikeMass: text, pace: z.enum(PACES),
+  front: wheelDraftSchema, rear: wheelDraftSchema, baselineFront: text, baselineRear: text, baselineSurfaces: z.array(surfaceSchema).max(10),
+  baselineTemperature: text, rearStroke: text, rearSag: text, forkTravel: text, frontSag: text,
 });
 
 /** Blank → undefined; "19,5" → 19.5; anything else that is not a number → NaN (refused by zod). */

@@ -41,10 +41,15 @@ test("an anonymous rider gets a band for an unsaved setup, with the cautions", a
   await expect(page.getByTestId("cautions")).toContainText("Check both tyres with a gauge");
   await shot(page, "pressure-anonymous-band");
 
-  // The pressure unit switch re-words the band.
-  await page.getByRole("group", { name: "Show pressures in" }).getByText("bar", { exact: true }).click();
+  // The pressure unit switch re-words the band; the setup can be kept on this device only.
+  await page.getByRole("group", { name: "Pressure in" }).getByText("bar", { exact: true }).click();
+  await expect(page.getByLabel("Rear wheel: tyre's printed maximum (bar)")).toHaveValue("2.758"); // 40 psi (NIST SP 811)
+  await page.getByLabel(/Keep this setup on this device/).check();
   await page.getByRole("button", { name: "Show my pressure band" }).click();
   await expect(page.getByTestId("band-front")).toContainText(/\d\.\d\d bar/);
+  await page.reload();
+  await expect(page.getByLabel("Rider with kit (kg)")).toHaveValue("72");
+  await expect(page.getByLabel("Rear wheel: tyre's printed maximum (bar)")).toHaveValue("2.758");
 });
 
 test("the demo rider picks a saved setup and today's trails, and sees band, reasons and cautions", async ({ page }) => {

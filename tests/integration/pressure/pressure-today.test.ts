@@ -39,7 +39,7 @@ describe("pressure band for today's trails", () => {
     expect(text).toMatch(/grip-slick-roots: Wet roots on 1 of 3 trails \(Fernwash\)/);
     expect(text).toMatch(/support-jump-drop: Jumps or drops on 1 of 3 trails \(Skylark Jumps\)/);
     expect(text).toMatch(/support-berm: Berms on 1 of 3 trails \(Fernwash\)/);
-    expect(answer.cautions).toContain("No report today for Quiet Climb: conditions there are unknown and were left out.");
+    expect(answer.cautions).toContain("No report today for Quiet Climb: the ground there is unknown and left out (its mapped features still count). Check the conditions board.");
     expect(answer.basis).toBe("baseline");
     // Test park: base 900 m, summit 1800 m → rides at the midpoint unless told otherwise.
     expect(answer.conditions).toMatchObject({ park: { slug: park.slug }, rideElevationM: 1350 });

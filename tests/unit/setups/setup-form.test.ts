@@ -8,6 +8,7 @@ import {
   emptySetupDraft,
   numberFrom,
   parseSetupDraft,
+  setupDraftSchema,
   type SetupDraft,
 } from "@/lib/validations/setup-form";
 
@@ -100,5 +101,11 @@ describe("setup form", () => {
     expect([numberFrom(""), numberFrom(" 2.4 "), numberFrom("19,5"), numberFrom(".5")]).toEqual([undefined, 2.4, 19.5, 0.5]);
     expect(numberFrom("2.4in")).toBeNaN();
     expect(numberFrom("1e3")).toBeNaN();
+  });
+
+  it("a draft kept in the browser is read back only when it has the draft's shape", () => {
+    expect(setupDraftSchema.safeParse(JSON.parse(JSON.stringify(filled()))).data).toEqual(filled());
+    expect(setupDraftSchema.safeParse({ ...filled(), front: "29er" }).success).toBe(false);
+    expect(setupDraftSchema.safeParse(null).success).toBe(false);
   });
 });
