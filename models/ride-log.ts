@@ -14,6 +14,8 @@ export class RideLog extends Model<InferAttributes<RideLog>, InferCreationAttrib
   declare symptoms: { front: string[]; rear: string[] };
   declare note: string | null;
   declare suggestion: Record<string, unknown> | null;
+  declare surfaces: CreationOptional<string[]>;
+  declare appliedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -30,6 +32,8 @@ RideLog.init(
     symptoms: { type: DataTypes.JSONB, allowNull: false },
     note: { type: DataTypes.STRING(1000), allowNull: true },
     suggestion: { type: DataTypes.JSONB, allowNull: true },
+    surfaces: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    appliedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
   },
   { sequelize, tableName: "ride_logs", underscored: true, updatedAt: false },

@@ -28,6 +28,7 @@ export const ACTIONS = {
   "own:setups": "owner",
   "own:ride-logs": "owner",
   "own:subscriptions": "owner",
+  "own:units": "owner",
   "dev:mail": "site",
 } as const;
 export type Action = keyof typeof ACTIONS;

@@ -25,7 +25,7 @@ export function reportCautions(day: PlannedDay): string[] {
   const missing = day.trails.filter((t) => !t.hasReport);
   const stale = day.trails.filter((t) => t.hasReport && (t.reportAgeHours ?? 0) > STALE_REPORT_HOURS);
   if (missing.length > 0) {
-    cautions.push(`No report today for ${missing.map((t) => t.name).join(", ")}: conditions there are unknown and were left out.`);
+    cautions.push(`No report today for ${missing.map((t) => t.name).join(", ")}: the ground there is unknown and left out (its mapped features still count). Check the conditions board.`);
   }
   if (stale.length > 0) {
     cautions.push(

@@ -39,11 +39,16 @@ export function planDay(today: DayConditions | undefined): PlannedDay {
   return { scope: "none", trails: [] };
 }
 
-/** " on 3 of 4 trails", " on Lynx Flow", or " today" for whole-day conditions. */
+/** Trail names shown in a reason before the rest is summed up as "and N more". */
+const NAMES_SHOWN = 3;
+
+/** " on 3 of 4 trails (Lynx Flow, Fern Gully, Quarry Drop)", " on Lynx Flow", or " today" for whole-day conditions. */
 export function shareText(day: PlannedDay, matching: PlannedTrail[]): string {
   if (day.scope === "day") return " today";
   if (day.trails.length === 1) return ` on ${matching[0]?.name ?? day.trails[0].name}`;
-  return ` on ${matching.length} of ${day.trails.length} trails`;
+  const names = [...new Set(matching.map((t) => t.name))];
+  const more = names.length > NAMES_SHOWN ? ` and ${names.length - NAMES_SHOWN} more` : "";
+  return ` on ${matching.length} of ${day.trails.length} trails (${names.slice(0, NAMES_SHOWN).join(", ")}${more})`;
 }
 
 /**

@@ -40,3 +40,20 @@ export function checkSag(raw: SagInput | unknown): SagResult {
   }
   return { percent, min, max, verdict: "in-range", cautions: [...SAG_CAUTIONS], text: `Sag ${shown} is within the usual ${range}. Next, set rebound so the bike returns once without a second bounce.` };
 }
+
+type SuspensionMeasures = { rearStrokeMm?: number; rearSagMm?: number; forkTravelMm?: number; frontSagMm?: number };
+
+/** Sag checks for whichever ends of a setup have both a sag and a stroke (or travel) measured. */
+export function suspensionSag(s: SuspensionMeasures | null | undefined): { rear?: SagResult; fork?: SagResult } {
+  const result: { rear?: SagResult; fork?: SagResult } = {};
+  const ends = [
+    { end: "rear" as const, sagMm: s?.rearSagMm, strokeMm: s?.rearStrokeMm },
+    { end: "fork" as const, sagMm: s?.frontSagMm, strokeMm: s?.forkTravelMm },
+  ];
+  for (const { end, sagMm, strokeMm } of ends) {
+    if (sagMm === undefined || strokeMm === undefined) continue;
+    const parsed = sagInputSchema.safeParse({ end, sagMm, strokeMm });
+    if (parsed.success) result[end] = checkSag(parsed.data);
+  }
+  return result;
+}

@@ -14,7 +14,8 @@ export const PACES = ["easy", "steady", "hard"] as const;
 export const BEAD_SEAT_DIAMETERS_MM = [406, 507, 559, 584, 622] as const;
 export const SYMPTOMS = ["squirm-in-berms", "rim-strike", "burp", "harsh", "sliding", "fine"] as const;
 
-const number = (label: string, min: number, max: number, unit: string) =>
+/** A number within [min, max] whose messages name the field and the unit. */
+export const boundedNumber = (label: string, min: number, max: number, unit: string) =>
   z
     .number({ error: `${label} must be a number.` })
     .min(min, { error: `${label} must be at least ${min} ${unit}.` })
@@ -28,41 +29,41 @@ const uniqueList = <T extends z.ZodType>(item: T, label: string, max: number) =>
 
 export const surfaceSchema = z.enum(SURFACES, { error: `Surface must be one of: ${SURFACES.join(", ")}.` });
 export const featureSchema = z.enum(FEATURES, { error: `Feature must be one of: ${FEATURES.join(", ")}.` });
-const surfaceList = uniqueList(surfaceSchema, "surfaces", SURFACES.length);
+export const surfaceList = uniqueList(surfaceSchema, "surfaces", SURFACES.length);
 const featureList = uniqueList(featureSchema, "features", FEATURES.length);
 
 export const wheelSchema = z.strictObject({
   bsdMm: z.literal(BEAD_SEAT_DIAMETERS_MM, {
     error: `Bead-seat diameter must be one of ${BEAD_SEAT_DIAMETERS_MM.join(", ")} mm (ISO 5775: 20", 24", 26", 27.5", 29").`,
   }),
-  widthMm: number("Tyre width", 35, 120, "mm"),
+  widthMm: boundedNumber("Tyre width", 35, 120, "mm"),
   casing: z.enum(CASINGS, { error: `Casing must be one of: ${CASINGS.join(", ")}.` }),
   insert: z.boolean({ error: "Insert must be true or false." }),
   tubeless: z.boolean({ error: "Tubeless must be true or false." }),
-  maxKpa: number("The tyre's printed maximum", 100, 1100, "kPa"),
-  rimMaxKpa: number("The rim's printed maximum", 100, 1100, "kPa").optional(),
+  maxKpa: boundedNumber("The tyre's printed maximum", 100, 1100, "kPa"),
+  rimMaxKpa: boundedNumber("The rim's printed maximum", 100, 1100, "kPa").optional(),
 });
 
 export const baselineSchema = z.strictObject({
-  frontKpa: number("Baseline front pressure", 20, 1100, "kPa"),
-  rearKpa: number("Baseline rear pressure", 20, 1100, "kPa"),
+  frontKpa: boundedNumber("Baseline front pressure", 20, 1100, "kPa"),
+  rearKpa: boundedNumber("Baseline rear pressure", 20, 1100, "kPa"),
   surfaces: surfaceList.min(1, { error: "Name at least one surface the baseline was set on." }).default(["dry"]),
-  temperatureC: number("Baseline temperature", -40, 50, "°C").optional(),
+  temperatureC: boundedNumber("Baseline temperature", -40, 50, "°C").optional(),
 });
 
 /** Air temperatures and elevations of the day; each optional (missing means "same as the other"). */
 const airFields = {
-  airTemperatureC: number("Air temperature", -40, 50, "°C").optional(),
-  pumpTemperatureC: number("Pump temperature", -40, 50, "°C").optional(),
-  rideElevationM: number("Ride elevation", -500, 5000, "m").optional(),
-  pumpElevationM: number("Pump elevation", -500, 5000, "m").optional(),
+  airTemperatureC: boundedNumber("Air temperature", -40, 50, "°C").optional(),
+  pumpTemperatureC: boundedNumber("Pump temperature", -40, 50, "°C").optional(),
+  rideElevationM: boundedNumber("Ride elevation", -500, 5000, "m").optional(),
+  pumpElevationM: boundedNumber("Pump elevation", -500, 5000, "m").optional(),
 };
 
 export const trailConditionsSchema = z.strictObject({
   name: z.string().trim().min(1, { error: "Trail name is required." }).max(120, { error: "Trail name is too long." }),
   surfaces: surfaceList,
   features: featureList,
-  lastReportAgeHours: number("Report age", 0, 24 * 365 * 10, "hours").nullable().optional(),
+  lastReportAgeHours: boundedNumber("Report age", 0, 24 * 365 * 10, "hours").nullable().optional(),
 });
 
 /** What the engine knows about today: per-trail conditions and/or whole-day surfaces and features. */
@@ -87,8 +88,8 @@ export const todayRequestSchema = z.strictObject({
 });
 
 const setupFields = {
-  riderMassKg: number("Rider mass (with kit)", 10, 200, "kg"),
-  bikeMassKg: number("Bike mass", 3, 60, "kg"),
+  riderMassKg: boundedNumber("Rider mass (with kit)", 10, 200, "kg"),
+  bikeMassKg: boundedNumber("Bike mass", 3, 60, "kg"),
   pace: z.enum(PACES, { error: `Pace must be one of: ${PACES.join(", ")}.` }),
   front: wheelSchema,
   rear: wheelSchema,
@@ -97,6 +98,12 @@ const setupFields = {
 };
 
 export const pressureRequestSchema = z.strictObject({ ...setupFields, today: todayRequestSchema.optional() });
+/** The same request for a signed-in rider's saved setup (own setups only); unit defaults to the rider's choice. */
+export const savedSetupPressureRequestSchema = z.strictObject({
+  setupId: z.uuid({ error: "Choose one of your saved setups." }),
+  unit: setupFields.unit.unwrap().optional(),
+  today: todayRequestSchema.optional(),
+});
 export const pressureInputSchema = z.strictObject({ ...setupFields, today: dayConditionsSchema.optional() });
 
 export const wheelSymptomsSchema = uniqueList(
@@ -109,8 +116,8 @@ export const rideSymptomsSchema = z.strictObject({ front: wheelSymptomsSchema, r
 export const sagInputSchema = z
   .strictObject({
     end: z.enum(["rear", "fork"], { error: "Sag is measured on the rear shock or the fork." }),
-    sagMm: number("Sag", 0, 400, "mm"),
-    strokeMm: number("Stroke or travel", 10, 400, "mm"),
+    sagMm: boundedNumber("Sag", 0, 400, "mm"),
+    strokeMm: boundedNumber("Stroke or travel", 10, 400, "mm"),
   })
   .refine((v) => v.sagMm <= v.strokeMm, { error: "Sag cannot exceed the stroke or travel.", path: ["sagMm"] });
 
@@ -124,6 +131,7 @@ export type Baseline = z.infer<typeof baselineSchema>;
 export type TrailConditions = z.infer<typeof trailConditionsSchema>;
 export type DayConditions = z.infer<typeof dayConditionsSchema>;
 export type PressureRequest = z.infer<typeof pressureRequestSchema>;
+export type SavedSetupPressureRequest = z.infer<typeof savedSetupPressureRequestSchema>;
 export type PressureRequestInput = z.input<typeof pressureRequestSchema>;
 export type PressureInput = z.infer<typeof pressureInputSchema>;
 export type PressureInputRaw = z.input<typeof pressureInputSchema>;

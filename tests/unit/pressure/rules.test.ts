@@ -24,9 +24,15 @@ describe("grip rules", () => {
     expect(t.frontKpa).toBeLessThan(t.rearKpa);
     expect(t.rearKpa).toBeLessThan(0);
     const roots = t.reasons.find((r) => r.id === "grip-slick-roots");
-    expect(roots?.text).toMatch(/^Wet roots on 3 of 4 trails, .*: −0\.\d psi front/);
+    expect(roots?.text).toMatch(/^Wet roots on 3 of 4 trails \(A, B, C\), .*: −0\.\d psi front/);
     const wet = t.reasons.find((r) => r.id === "grip-wet");
     expect(wet?.frontKpa).toBeCloseTo(SURFACE_GRIP_KPA.wet[0] * 0.75, 9);
+  });
+
+  it("names at most three trails in a reason, then says how many more", () => {
+    const wet = ["A", "B", "C", "D", "E"].map((name) => trail(name, ["wet"]));
+    const t = tweak({ trails: [...wet, trail("F", ["dry"])] });
+    expect(t.reasons.find((r) => r.id === "grip-wet")?.text).toMatch(/^Wet on 5 of 6 trails \(A, B, C and 2 more\), less grip/);
   });
 
   it("a trail counts by its least grippy surface", () => {
@@ -54,7 +60,7 @@ describe("support rules", () => {
     expect(t.rearKpa).toBeGreaterThan(t.frontKpa);
     expect(t.frontKpa).toBeGreaterThan(0);
     expect(t.reasons.map((r) => r.id)).toEqual(["support-jump-drop", "support-berm"]);
-    expect(t.reasons[0].text).toMatch(/on 1 of 2 trails/);
+    expect(t.reasons[0].text).toMatch(/on 1 of 2 trails \(Jump line\)/);
   });
 
   it("a hard pace scales support up and says so", () => {

@@ -1,0 +1,8 @@
+// GET /api/me/ride-logs: the caller's ride logs. POST: log a ride → the one suggested baseline change.
+import { handler, readJson } from "@/lib/api/handler";
+import { listRideLogs } from "@/lib/data/ride-logs";
+import { createRideLog } from "@/lib/riders/ride-logs";
+
+export const GET = handler(async ({ actor }) => Response.json({ rideLogs: await listRideLogs(actor) }));
+
+export const POST = handler(async ({ request, actor }) => Response.json(await createRideLog(actor, await readJson(request, 20_000)), { status: 201 }));

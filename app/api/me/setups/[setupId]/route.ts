@@ -1,0 +1,17 @@
+// GET, PATCH (with lockVersion; 409 when stale), DELETE /api/me/setups/{setupId}: the caller's own setup only (else 404).
+import { handler, readJson } from "@/lib/api/handler";
+import { findOwnSetup, setupView } from "@/lib/data/setups";
+import { deleteSetup, updateSetup } from "@/lib/riders/setups";
+
+type Params = { setupId: string };
+
+export const GET = handler<Params>(async ({ params, actor }) => Response.json({ setup: setupView(await findOwnSetup(actor, params.setupId)) }));
+
+export const PATCH = handler<Params>(async ({ request, params, actor }) =>
+  Response.json({ setup: await updateSetup(actor, params.setupId, await readJson(request, 20_000)) }),
+);
+
+export const DELETE = handler<Params>(async ({ params, actor }) => {
+  await deleteSetup(actor, params.setupId);
+  return new Response(null, { status: 204 });
+});

@@ -1,0 +1,10 @@
+// GET /api/me/setups: the caller's setups. POST /api/me/setups: save a new one.
+import { handler, readJson } from "@/lib/api/handler";
+import { listSetups } from "@/lib/data/setups";
+import { createSetup } from "@/lib/riders/setups";
+
+export const GET = handler(async ({ actor }) => Response.json({ setups: await listSetups(actor) }));
+
+export const POST = handler(async ({ request, actor }) =>
+  Response.json({ setup: await createSetup(actor, await readJson(request, 20_000)) }, { status: 201 }),
+);

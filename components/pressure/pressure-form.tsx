@@ -1,0 +1,164 @@
+"use client";
+/**
+ * "Today's pressure": park, trails and setup → POST /api/pressure → the band. A plain form that
+ * works with Tab and Enter alone; an unsaved setup can be kept in this browser only.
+ */
+import { useRouter } from "next/navigation";
+import { useEffect, useRef, useState, useTransition } from "react";
+import { STANDARD_CAUTIONS } from "@/lib/pressure/cautions";
+import type { PressureAnswer } from "@/lib/riders/pressure-today";
+import { PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/units";
+import { emptyDayDraft, pressureFieldFor, pressureRequestFrom, type DayDraft } from "@/lib/validations/pressure-form";
+import { emptySetupDraft, setupDraftSchema, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
+import { BandResult, Cautions } from "./band-result";
+import { DayFields, type ParkOption, type TrailOption } from "./day-fields";
+import { CheckInput, Segments } from "./inputs";
+import { SetupFields } from "./setup-fields";
+
+export type SetupOption = { id: string; name: string; summary: string };
+type Props = {
+  parks: ParkOption[];
+  park: ParkOption | null;
+  trails: TrailOption[];
+  anyReport: boolean;
+  defaultTrailIds: string[];
+  setups: SetupOption[];
+  signedIn: boolean;
+  units: { pressure: PressureUnit; mass: MassUnit };
+  initialSetupId?: string;
+};
+
+const STORE = { setup: "loamcast.pressure.setup" };
+
+export function PressureForm(props: Props) {
+  const router = useRouter();
+  const [loadingPark, startParkChange] = useTransition();
+  const [setupId, setSetupId] = useState<string | null>(props.initialSetupId ?? props.setups[0]?.id ?? null);
+  const [draft, setDraft] = useState<SetupDraft>(() => emptySetupDraft(props.units));
+  const [remember, setRemember] = useState(false);
+  const [unit, setUnit] = useState<PressureUnit>(props.units.pressure);
+  const [day, setDay] = useState<DayDraft>(() => emptyDayDraft(props.park?.slug ?? null, props.defaultTrailIds));
+  const [errors, setErrors] = useState<DraftErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+  const [answer, setAnswer] = useState<PressureAnswer | null>(null);
+  const [busy, setBusy] = useState(false);
+  const resultHeading = useRef<HTMLHeadingElement>(null);
+
+  // A setup kept on this device (anonymous riders only), read once after the first render.
+  const { signedIn } = props;
+  useEffect(() => {
+    if (signedIn) return;
+    try {
+      const saved = setupDraftSchema.safeParse(JSON.parse(localStorage.getItem(STORE.setup) ?? "null"));
+      if (saved.success) {
+        setDraft(saved.data);
+        setRemember(true);
+      }
+    } catch {
+      // Storage blocked or damaged: start from an empty form.
+    }
+  }, [signedIn]);
+
+  // The server page re-renders with another park's trails: pick that park's defaults.
+  const parkSlug = props.park?.slug ?? null;
+  const defaults = props.defaultTrailIds.join(",");
+  useEffect(() => {
+    setDay((d) => (d.parkSlug === parkSlug && d.trailIds.length ? d : { ...d, parkSlug, trailIds: defaults ? defaults.split(",") : [] }));
+  }, [parkSlug, defaults]);
+
+  useEffect(() => {
+    if (answer) resultHeading.current?.focus();
+  }, [answer]);
+
+  function changePark(slug: string) {
+    setDay((d) => ({ ...d, parkSlug: slug || null, trailIds: [] }));
+    startParkChange(() => router.replace(slug ? `/pressure?park=${encodeURIComponent(slug)}` : "/pressure?park=none", { scroll: false }));
+  }
+
+  function keepOnDevice() {
+    try {
+      if (!props.signedIn && !setupId) {
+        if (remember) localStorage.setItem(STORE.setup, JSON.stringify(draft));
+        else localStorage.removeItem(STORE.setup);
+      }
+    } catch {
+      // Not kept; nothing else depends on it.
+    }
+  }
+
+  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    setMessage(null);
+    // A setup typed by hand is shown in the unit it was typed in: one switch, not two.
+    const built = pressureRequestFrom({ setupId, draft, day, unit: setupId ? unit : draft.pressureUnit });
+    if (!built.ok) {
+      setErrors(built.errors);
+      setMessage("Check the highlighted fields.");
+      return;
+    }
+    setErrors({});
+    setBusy(true);
+    try {
+      const response = await fetch("/api/pressure", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(built.body) });
+      const body = await response.json();
+      if (!response.ok) {
+        const field = body?.error?.field as string | undefined;
+        if (field) setErrors({ [pressureFieldFor(field)]: body.error.message });
+        setMessage(body?.error?.message ?? "Something went wrong. Nothing you typed was lost.");
+        return;
+      }
+      keepOnDevice();
+      setAnswer(body as PressureAnswer);
+    } catch {
+      setMessage("No connection. Nothing you typed was lost; try again.");
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <div className="space-y-6">
+      <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Today's pressure">
+        <DayFields parks={props.parks} park={props.park} trails={props.trails} anyReport={props.anyReport} day={day} errors={errors} onChange={setDay} onParkChange={changePark} loadingPark={loadingPark} />
+        <fieldset className="card space-y-3">
+          <legend className="px-1 text-lg font-bold">Your bike</legend>
+          {props.setups.length > 0 ? (
+            <div role="radiogroup" aria-label="Setup" className="space-y-2">
+              {[...props.setups, { id: "", name: "Enter a setup by hand", summary: "Not saved" }].map((s) => (
+                <label key={s.id || "custom"} className="flex min-h-tap cursor-pointer items-center gap-3 rounded-lg border-2 border-loam-300 bg-white px-3 py-2 has-[:checked]:border-loam-900 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-moss-600">
+                  <input type="radio" name="setup" value={s.id} checked={(setupId ?? "") === s.id} onChange={() => setSetupId(s.id || null)} className="h-6 w-6 accent-loam-900" />
+                  <span>
+                    <span className="block font-bold">{s.name}</span>
+                    <span className="block text-sm text-loam-800">{s.summary}</span>
+                  </span>
+                </label>
+              ))}
+            </div>
+          ) : (
+            <p className="text-loam-800">
+              {props.signedIn ? (
+                <>Enter your bike below, or <a className="font-semibold underline" href="/me/setups/new">save a setup</a> to skip this next time.</>
+              ) : (
+                <>Enter your bike below. <a className="font-semibold underline" href="/sign-in?callbackUrl=/pressure">Sign in</a> to save setups and baselines.</>
+              )}
+            </p>
+          )}
+          {setupId && <Segments name="unit" legend="Show pressures in" value={unit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={setUnit} />}
+        </fieldset>
+        {!setupId && (
+          <>
+            <SetupFields idPrefix="setup" draft={draft} errors={errors} onChange={setDraft} />
+            {!props.signedIn && <CheckInput id="remember" label="Keep this setup on this device (never sent to us to store)" checked={remember} onChange={setRemember} />}
+          </>
+        )}
+        <p role="alert" aria-live="assertive" className={message ? "rounded-lg bg-brick-100 p-3 font-semibold text-brick-600" : "sr-only"}>
+          {message ?? ""}
+        </p>
+        <button type="submit" className="btn-primary w-full text-lg" disabled={busy}>
+          {busy ? "Working it out…" : "Show my pressure band"}
+        </button>
+      </form>
+      <div aria-live="polite">{answer ? <BandResult ref={resultHeading} answer={answer} /> : <Cautions cautions={STANDARD_CAUTIONS} />}</div>
+    </div>
+  );
+}

@@ -1,0 +1,84 @@
+"use client";
+/** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline. */
+import { MASS_UNITS, PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/units";
+import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/validations/pressure";
+import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/validations/setup-form";
+import { CheckInput, MultiCheck, Segments, SelectInput, TextInput } from "./inputs";
+
+export const WHEEL_SIZES = BEAD_SEAT_DIAMETERS_MM.map((bsd) => ({
+  value: String(bsd),
+  label: ({ 406: '20″ (406 mm)', 507: '24″ (507 mm)', 559: '26″ (559 mm)', 584: '27.5″ (584 mm)', 622: '29″ (622 mm)' } as const)[bsd],
+}));
+const CASING_LABELS = { light: "Light", trail: "Trail", reinforced: "Reinforced", downhill: "Downhill" } as const;
+const PACE_LABELS = { easy: "Easy", steady: "Steady", hard: "Hard" } as const;
+export const surfaceOptions = SURFACES.map((s) => ({ value: s, label: s[0].toUpperCase() + s.slice(1) }));
+
+type Props = { idPrefix: string; draft: SetupDraft; errors: DraftErrors; onChange: (draft: SetupDraft) => void; showBaseline?: boolean };
+
+function WheelFields({ idPrefix, position, draft, errors, onChange }: Props & { position: "front" | "rear" }) {
+  const wheel = draft[position];
+  const set = (patch: Partial<WheelDraft>) => onChange({ ...draft, [position]: { ...wheel, ...patch } });
+  const id = (name: string) => `${idPrefix}-${position}-${name}`;
+  const title = position === "front" ? "Front wheel" : "Rear wheel";
+  const unit = draft.pressureUnit;
+  return (
+    <fieldset className="card space-y-3">
+      <legend className="px-1 text-lg font-bold">{title}</legend>
+      {position === "rear" && (
+        <button type="button" className="btn-quiet" onClick={() => onChange({ ...draft, rear: { ...draft.front } })}>
+          Same as the front
+        </button>
+      )}
+      <SelectInput id={id("bsd")} label={`${title}: wheel size`} value={wheel.bsd} options={WHEEL_SIZES} onChange={(bsd) => set({ bsd })} error={errors[`${position}.bsd`]} />
+      <div className="grid grid-cols-[1fr_auto] items-start gap-2">
+        <TextInput id={id("width")} label={`${title}: tyre width (${wheel.widthUnit === "in" ? "inches" : "mm"})`} value={wheel.width} onChange={(width) => set({ width })} error={errors[`${position}.width`]} hint="As printed on the tyre, e.g. 2.4 in or 61 mm." />
+        <div className="pt-6">
+          <Segments name={id("width-unit")} legend="Width in" small value={wheel.widthUnit} options={[{ value: "in", label: "in" }, { value: "mm", label: "mm" }]} onChange={(u) => onChange({ ...draft, [position]: convertWidth(wheel, u) })} />
+        </div>
+      </div>
+      <SelectInput id={id("casing")} label={`${title}: casing`} value={wheel.casing} options={CASINGS.map((c) => ({ value: c, label: CASING_LABELS[c] }))} onChange={(casing) => set({ casing })} />
+      <div className="grid grid-cols-2 gap-2">
+        <CheckInput id={id("tubeless")} label="Tubeless" checked={wheel.tubeless} onChange={(tubeless) => set({ tubeless })} />
+        <CheckInput id={id("insert")} label="Insert" checked={wheel.insert} onChange={(insert) => set({ insert })} />
+      </div>
+      <TextInput id={id("max")} label={`${title}: tyre's printed maximum (${unit})`} value={wheel.max} onChange={(max) => set({ max })} error={errors[`${position}.max`]} hint="Printed on the tyre's sidewall. Nothing is ever advised above it." />
+      <TextInput id={id("rim-max")} label={`${title}: rim's printed maximum (${unit}, optional)`} value={wheel.rimMax} onChange={(rimMax) => set({ rimMax })} error={errors[`${position}.rimMax`]} hint="Printed on the rim or in its manual; the lower of the two counts." />
+    </fieldset>
+  );
+}
+
+export function SetupFields(props: Props) {
+  const { idPrefix, draft, errors, onChange } = props;
+  const id = (name: string) => `${idPrefix}-${name}`;
+  const switchUnits = (units: { pressure: PressureUnit; mass: MassUnit }) => onChange(convertDraftUnits(draft, units));
+  return (
+    <div className="space-y-4">
+      <fieldset className="card space-y-3">
+        <legend className="px-1 text-lg font-bold">Rider and bike</legend>
+        <div className="flex flex-wrap gap-4">
+          <Segments name={id("mass-unit")} legend="Mass in" value={draft.massUnit} options={MASS_UNITS.map((u) => ({ value: u, label: u }))} onChange={(mass) => switchUnits({ pressure: draft.pressureUnit, mass })} />
+          <Segments name={id("pressure-unit")} legend="Pressure in" value={draft.pressureUnit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={(pressure) => switchUnits({ pressure, mass: draft.massUnit })} />
+        </div>
+        <div className="grid grid-cols-2 gap-3">
+          <TextInput id={id("rider-mass")} label={`Rider with kit (${draft.massUnit})`} value={draft.riderMass} onChange={(riderMass) => onChange({ ...draft, riderMass })} error={errors.riderMass} />
+          <TextInput id={id("bike-mass")} label={`Bike (${draft.massUnit})`} value={draft.bikeMass} onChange={(bikeMass) => onChange({ ...draft, bikeMass })} error={errors.bikeMass} />
+        </div>
+        <Segments name={id("pace")} legend="How you ride" value={draft.pace} options={PACES.map((p) => ({ value: p, label: PACE_LABELS[p] }))} onChange={(pace) => onChange({ ...draft, pace })} />
+      </fieldset>
+      <WheelFields {...props} position="front" />
+      <WheelFields {...props} position="rear" />
+      {props.showBaseline !== false && (
+        <fieldset className="card space-y-3">
+          <legend className="px-1 text-lg font-bold">Baseline (optional)</legend>
+          <p className="text-loam-800">Pressures you know work for you, checked with a gauge. Leave blank for a starting estimate.</p>
+          <div className="grid grid-cols-2 gap-3">
+            <TextInput id={id("baseline-front")} label={`Front (${draft.pressureUnit})`} value={draft.baselineFront} onChange={(baselineFront) => onChange({ ...draft, baselineFront })} error={errors.baselineFront} />
+            <TextInput id={id("baseline-rear")} label={`Rear (${draft.pressureUnit})`} value={draft.baselineRear} onChange={(baselineRear) => onChange({ ...draft, baselineRear })} error={errors.baselineRear} />
+          </div>
+          <MultiCheck name={id("baseline-surfaces")} legend="Ground it was set on" values={draft.baselineSurfaces} options={surfaceOptions} onChange={(baselineSurfaces) => onChange({ ...draft, baselineSurfaces })} error={errors.baselineSurfaces} />
+          <TextInput id={id("baseline-temperature")} label="Air temperature when checked (°C, optional)" value={draft.baselineTemperature} onChange={(baselineTemperature) => onChange({ ...draft, baselineTemperature })} error={errors.baselineTemperature} />
+        </fieldset>
+      )}
+    </div>
+  );
+}
