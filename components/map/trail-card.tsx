@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import { formatInspection, formatLength, formatSurfaces } from "@/lib/map/format";
+import { formatParkTime, formatLength, formatSurfaces } from "@/lib/map/format";
 import { statusKey } from "@/lib/map/status";
 import type { HazardMapProperties } from "@/lib/map/geojson";
 import type { TrailMapProperties } from "@/lib/validations/map";
@@ -36,8 +36,8 @@ export function TrailCard({ trail, timeZone, onClose }: { trail: TrailMapPropert
         </dd>
         <dt className="text-loam-600">Surface</dt>
         <dd>{formatSurfaces(trail.surfaces)}</dd>
-        <dt className="text-loam-600">Inspected</dt>
-        <dd>{formatInspection(trail.lastReportAt, timeZone)}</dd>
+        <dt className="text-loam-600">Last inspected</dt>
+        <dd>{formatParkTime(trail.lastReportAt, timeZone)}</dd>
         <dt className="text-loam-600">Length</dt>
         <dd>
           {formatLength(trail.lengthM)}
@@ -58,7 +58,7 @@ export function HazardCard({ hazard, trailName, timeZone, onClose }: { hazard: H
       <h2 className="text-lg font-bold">Hazard: {hazard.kindLabel}</h2>
       {trailName && <p className="text-sm">On {trailName}</p>}
       {hazard.note && <p className="mt-1">{hazard.note}</p>}
-      <p className="mt-1 text-sm text-loam-600">Pinned {formatInspection(hazard.reportedAt, timeZone)}</p>
+      <p className="mt-1 text-sm text-loam-600">Pinned {formatParkTime(hazard.reportedAt, timeZone)}</p>
     </Card>
   );
 }

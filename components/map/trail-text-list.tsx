@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { formatInspection, formatLength } from "@/lib/map/format";
+import { formatParkTime, formatLength } from "@/lib/map/format";
 import { statusKey } from "@/lib/map/status";
 import type { HazardMapProperties } from "@/lib/map/geojson";
 import type { TrailMapProperties } from "@/lib/validations/map";
@@ -25,7 +25,7 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
             <StatusBadge status={statusKey(t.status)} />
             <span className="text-sm text-loam-600">
               {formatLength(t.lengthM)}
-              {t.descentM !== null && ` · ${Math.round(t.descentM)} m descent`} · inspected {formatInspection(t.lastReportAt, timeZone)}
+              {t.descentM !== null && ` · ${Math.round(t.descentM)} m descent`} · last inspected {formatParkTime(t.lastReportAt, timeZone)}
             </span>
           </li>
         ))}
@@ -39,7 +39,7 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
             <li key={h.id}>
               <strong>{h.kindLabel}</strong>
               {h.trailId && trailNames.get(h.trailId) ? ` on ${trailNames.get(h.trailId)}` : ""}
-              {h.note ? `: ${h.note}` : ""} <span className="text-sm text-loam-600">(pinned {formatInspection(h.reportedAt, timeZone)})</span>
+              {h.note ? `: ${h.note}` : ""} <span className="text-sm text-loam-600">(pinned {formatParkTime(h.reportedAt, timeZone)})</span>
             </li>
           ))}
         </ul>

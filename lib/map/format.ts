@@ -1,11 +1,11 @@
 import { parkLocalDate, parkLocalTime, shiftDate } from "@/lib/time";
 
 /**
- * When a trail was last inspected, in the park's own time zone: "today 07:12",
- * "yesterday 18:40", "28 Nov 07:12", or "never inspected". Shared by the map card and the list.
+ * When something happened, in the park's own time zone: "today 07:12", "yesterday 18:40",
+ * "28 Nov 07:12", or "never". Shared by the map card and the list.
  */
-export function formatInspection(iso: string | null, timeZone: string, now = new Date()): string {
-  if (!iso) return "never inspected";
+export function formatParkTime(iso: string | null, timeZone: string, now = new Date()): string {
+  if (!iso) return "never";
   const at = new Date(iso);
   const [day, today] = [parkLocalDate(at, timeZone), parkLocalDate(now, timeZone)];
   const time = parkLocalTime(at, timeZone);

@@ -1,7 +1,7 @@
 import type { TrailStatusKey } from "./status";
 
 /** Source and layer ids of our own style, prefixed so they never clash with a hosted base style. */
-export const SOURCE_IDS = { park: "lc-park", trails: "lc-trails", hazards: "lc-hazards", features: "lc-features" } as const;
+export const SOURCE_IDS = { park: "lc-park", trails: "lc-trails", trailLabels: "lc-trail-labels", hazards: "lc-hazards", features: "lc-features" } as const;
 
 export const trailLineLayerId = (status: TrailStatusKey) => `lc-trail-${status}` as const;
 
@@ -22,6 +22,7 @@ export const LAYER_IDS = {
   trailCasing: "lc-trail-casing",
   trailHit: "lc-trail-hit",
   trailStatusTags: "lc-trail-status-tags",
+  trailStatusMarks: "lc-trail-status-marks",
   trailNames: "lc-trail-names",
   features: "lc-features",
   featureLabels: "lc-feature-labels",

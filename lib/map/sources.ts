@@ -8,6 +8,7 @@ export function parkDataUrls(parkSlug: string) {
     style: `${base}/map-style.json`,
     park: `${base}/park-layers.geojson`,
     trails: `${base}/trails.geojson`,
+    trailLabels: `${base}/trail-labels.geojson`,
     hazards: `${base}/hazards.geojson`,
     features: `${base}/features.geojson`,
   };
@@ -22,6 +23,7 @@ export function parkSources(parkSlug: string): Record<string, GeoJSONSourceSpeci
   return {
     [SOURCE_IDS.park]: { type: "geojson", data: urls.park },
     [SOURCE_IDS.trails]: { type: "geojson", data: urls.trails, promoteId: "id" },
+    [SOURCE_IDS.trailLabels]: { type: "geojson", data: urls.trailLabels },
     [SOURCE_IDS.hazards]: { type: "geojson", data: urls.hazards },
     [SOURCE_IDS.features]: { type: "geojson", data: urls.features },
   };

@@ -4,6 +4,8 @@ import { notFound } from "next/navigation";
 import { MapLegend } from "@/components/map/map-legend";
 import { ParkMapLoader } from "@/components/map/park-map-loader";
 import { TrailTextList } from "@/components/map/trail-text-list";
+import { getActor } from "@/lib/auth/actor";
+import { can } from "@/lib/auth/permissions";
 import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/data/map";
 import { boundsAround, trailBounds } from "@/lib/map/bounds";
 import { parkDataUrls } from "@/lib/map/sources";
@@ -22,7 +24,8 @@ export default async function ParkMapPage({ params }: Props) {
   const { parkSlug } = await params;
   const park = await Park.findOne({ where: { slug: parkSlug } });
   if (!park) notFound();
-  const [{ trails, collection }, hazards] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id)]);
+  const [{ trails, collection }, hazards, actor] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id), getActor()]);
+  const staff = can(actor, "trail:write", { parkId: park.id }) || can(actor, "hazard:write", { parkId: park.id });
   const properties = collection.features.map((f) => f.properties);
   const bounds = trailBounds(trails) ?? boundsAround(park.centerLon, park.centerLat);
 
@@ -36,6 +39,7 @@ export default async function ParkMapPage({ params }: Props) {
         <nav aria-label="Park pages" className="flex gap-2">
           <Link href={`/parks/${park.slug}`} className="btn-quiet">Conditions board</Link>
           <a href="#trail-list" className="btn-quiet">Trail list</a>
+          {staff && <Link href={`/staff/${park.slug}/map`} className="btn-quiet">Move pins</Link>}
         </nav>
       </header>
       <a href="#trail-list" className="sr-only focus:not-sr-only">Skip the map: go to the list of trails and hazards</a>
