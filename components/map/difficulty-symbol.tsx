@@ -3,9 +3,10 @@ import type { Difficulty } from "@/lib/validations/trail";
 
 /**
  * The trade's difficulty sign (circle, square, diamond, double diamond) for the map's card and
- * legend. The shape carries the rating as well as the colour; the label says it in words.
+ * legend. The shape carries the rating as well as the colour; the label says it in words
+ * (shown, for screen readers only, or none when the words are already beside it).
  */
-export function DifficultySymbol({ difficulty, size = 18, showLabel = false }: { difficulty: Difficulty; size?: number; showLabel?: boolean }) {
+export function DifficultySymbol({ difficulty, size = 18, label = "hidden" }: { difficulty: Difficulty; size?: number; label?: "visible" | "hidden" | "none" }) {
   const d = DIFFICULTIES[difficulty];
   const stroke = d.outline ?? d.colour;
   const common = { fill: d.colour, stroke, strokeWidth: 1.5 };
@@ -25,7 +26,8 @@ export function DifficultySymbol({ difficulty, size = 18, showLabel = false }: {
       <svg width={size} height={size} viewBox="0 0 20 20" aria-hidden="true" focusable="false" className="shrink-0">
         {shape}
       </svg>
-      {showLabel ? <span>{d.label}</span> : <span className="sr-only">{d.label}</span>}
+      {label === "visible" && <span>{d.label}</span>}
+      {label === "hidden" && <span className="sr-only">{d.label}</span>}
     </span>
   );
 }

@@ -28,7 +28,7 @@ export function MapLegend() {
           <ul className="space-y-1">
             {difficultyValues.map((d) => (
               <li key={d} className="flex items-center gap-2" data-legend-difficulty={d}>
-                <DifficultySymbol difficulty={d} />
+                <DifficultySymbol difficulty={d} label="none" />
                 <span>
                   <strong>{DIFFICULTIES[d].label}</strong>: {DIFFICULTIES[d].colourName} line
                 </span>

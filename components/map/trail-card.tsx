@@ -28,7 +28,7 @@ export function TrailCard({ trail, timeZone, onClose }: { trail: TrailMapPropert
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
         <dt className="text-loam-600">Difficulty</dt>
         <dd>
-          <DifficultySymbol difficulty={trail.difficulty} showLabel />
+          <DifficultySymbol difficulty={trail.difficulty} label="visible" />
         </dd>
         <dt className="text-loam-600">Today</dt>
         <dd>

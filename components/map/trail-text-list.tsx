@@ -21,7 +21,7 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
             <Link href={`/trails/${t.id}`} className="min-w-40 flex-1 font-semibold text-loam-900 underline-offset-2 hover:underline">
               {t.name}
             </Link>
-            <DifficultySymbol difficulty={t.difficulty} showLabel />
+            <DifficultySymbol difficulty={t.difficulty} label="visible" />
             <StatusBadge status={statusKey(t.status)} />
             <span className="text-sm text-loam-600">
               {formatLength(t.lengthM)}
