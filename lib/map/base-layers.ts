@@ -19,7 +19,7 @@ export function groundLayers(): LayerSpecification[] {
   ];
 }
 
-/** Contours, roads, lifts, the boundary and landmarks: drawn on our ground or on a hosted style. */
+/** Contours, the boundary, roads and lifts: drawn on our ground or on a hosted style. */
 export function parkBaseLayers(): LayerSpecification[] {
   return [
     {
@@ -104,6 +104,12 @@ export function parkBaseLayers(): LayerSpecification[] {
       },
       paint: halo,
     },
+  ];
+}
+
+/** Summit, base and other named spots: drawn above the trails so their names stay readable. */
+export function landmarkLayers(): LayerSpecification[] {
+  return [
     {
       id: LAYER_IDS.landmarks,
       type: "circle",

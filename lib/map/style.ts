@@ -1,5 +1,5 @@
 import type { LayerSpecification, StyleSpecification } from "maplibre-gl";
-import { groundLayers, parkBaseLayers } from "./base-layers";
+import { groundLayers, landmarkLayers, parkBaseLayers } from "./base-layers";
 import { MAP_FONT, parkSources } from "./sources";
 import { featureLayers, hazardLayers, trailLayers } from "./trail-layers";
 
@@ -25,7 +25,7 @@ export function buildParkStyle(input: ParkStyleInput): StyleSpecification {
 
 /** What the park draws over any ground: its base layers, then trails, features and hazards on top. */
 export function parkOverlayLayers(): LayerSpecification[] {
-  return [...parkBaseLayers(), ...trailLayers(), ...featureLayers(), ...hazardLayers()];
+  return [...parkBaseLayers(), ...trailLayers(), ...landmarkLayers(), ...featureLayers(), ...hazardLayers()];
 }
 
 /**
