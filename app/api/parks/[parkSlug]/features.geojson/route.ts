@@ -1,0 +1,12 @@
+// GET /api/parks/{parkSlug}/features.geojson: built features (berms, jumps, drops…) on the park's trails.
+import { geoJsonResponse } from "@/lib/api/geojson-response";
+import { handler } from "@/lib/api/handler";
+import { parkFeaturesGeoJson } from "@/lib/data/map";
+import { getParkBySlug } from "@/lib/data/parks";
+
+export const dynamic = "force-dynamic";
+
+export const GET = handler<{ parkSlug: string }>(async ({ request, params }) => {
+  const park = await getParkBySlug(params.parkSlug);
+  return geoJsonResponse(await parkFeaturesGeoJson(park.id), request);
+});

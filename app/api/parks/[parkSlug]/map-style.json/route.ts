@@ -1,0 +1,11 @@
+// GET /api/parks/{parkSlug}/map-style.json: the park's MapLibre style (our own, or ours over MAP_STYLE_URL).
+import { jsonWithEtag } from "@/lib/api/geojson-response";
+import { handler } from "@/lib/api/handler";
+import { getParkBySlug } from "@/lib/data/parks";
+import { parkMapStyle } from "@/lib/map/park-style";
+
+export const dynamic = "force-dynamic";
+
+export const GET = handler<{ parkSlug: string }>(async ({ request, params }) =>
+  jsonWithEtag(await parkMapStyle(await getParkBySlug(params.parkSlug)), request, "application/json"),
+);

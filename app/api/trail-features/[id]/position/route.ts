@@ -1,0 +1,9 @@
+// PATCH /api/trail-features/{id}/position: staff move a built feature; it is snapped onto its trail.
+import { handler, readJson } from "@/lib/api/handler";
+import { moveTrailFeature } from "@/lib/map-records/move-pins";
+
+export const dynamic = "force-dynamic";
+
+export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) =>
+  Response.json(await moveTrailFeature(actor, params.id, await readJson(request, 10_000))),
+);

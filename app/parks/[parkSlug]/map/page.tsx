@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { MapLegend } from "@/components/map/map-legend";
+import { ParkMapLoader } from "@/components/map/park-map-loader";
+import { TrailTextList } from "@/components/map/trail-text-list";
+import { getActor } from "@/lib/auth/actor";
+import { can } from "@/lib/auth/permissions";
+import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/data/map";
+import { boundsAround, trailBounds } from "@/lib/map/bounds";
+import { parkDataUrls } from "@/lib/map/sources";
+import { Park } from "@/models";
+
+export const dynamic = "force-dynamic";
+
+type Props = { params: Promise<{ parkSlug: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const park = await Park.findOne({ where: { slug: (await params).parkSlug }, attributes: ["name"] });
+  return { title: park ? `${park.name}: map` : "Map" };
+}
+
+export default async function ParkMapPage({ params }: Props) {
+  const { parkSlug } = await params;
+  const park = await Park.findOne({ where: { slug: parkSlug } });
+  if (!park) notFound();
+  const [{ trails, collection }, hazards, actor] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id), getActor()]);
+  const staff = can(actor, "trail:write", { parkId: park.id }) || can(actor, "hazard:write", { parkId: park.id });
+  const properties = collection.features.map((f) => f.properties);
+  const bounds = trailBounds(trails) ?? boundsAround(park.centerLon, park.centerLat);
+
+  return (
+    <section className="space-y-4">
+      <header className="flex flex-wrap items-end justify-between gap-2">
+        <div>
+          <h1 className="text-2xl font-bold">{park.name}: map</h1>
+          {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-500">Fictional demo park</p>}
+        </div>
+        <nav aria-label="Park pages" className="flex gap-2">
+          <Link href={`/parks/${park.slug}`} className="btn-quiet">Conditions board</Link>
+          <a href="#trail-list" className="btn-quiet">Trail list</a>
+          {staff && <Link href={`/staff/${park.slug}/map`} className="btn-quiet">Move pins</Link>}
+        </nav>
+      </header>
+      <a href="#trail-list" className="sr-only focus:not-sr-only">Skip the map: go to the list of trails and hazards</a>
+      <ParkMapLoader styleUrl={parkDataUrls(park.slug).style} bounds={bounds} timeZone={park.timeZone} trails={properties} hazards={hazards.features.map((f) => f.properties)} />
+      <MapLegend />
+      <TrailTextList trails={properties} hazards={hazards.features.map((f) => f.properties)} timeZone={park.timeZone} trailNames={new Map(properties.map((t) => [t.id, t.name]))} />
+    </section>
+  );
+}

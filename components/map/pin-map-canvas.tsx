@@ -1,0 +1,91 @@
+"use client";
+import type { KeyboardEvent } from "react";
+import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MarkerDragEvent } from "react-map-gl/maplibre";
+import type { Bounds } from "@/lib/map/bounds";
+import { exposeMapForTests, maplibregl } from "./maplibre-setup";
+import { useMapState } from "./use-map-state";
+
+export type CanvasPin = { key: string; lon: number; lat: number; label: string; look: "feature" | "hazard" | "pick" };
+
+export type PinMapCanvasProps = {
+  styleUrl: string;
+  bounds: Bounds;
+  pins: CanvasPin[];
+  selectedKey: string | null;
+  onSelect?: (key: string) => void;
+  /** A pin was dragged, nudged with the arrow keys, or (when selected) sent where the map was tapped. */
+  onMove: (key: string, lon: number, lat: number, how: "drag" | "tap" | "key") => void;
+  label: string;
+};
+
+/** One arrow-key press moves a pin about this far. */
+const NUDGE_M = 5;
+const NUDGES: Record<string, [east: number, north: number]> = { ArrowUp: [0, 1], ArrowDown: [0, -1], ArrowLeft: [-1, 0], ArrowRight: [1, 0] };
+
+const LOOKS = {
+  feature: "h-5 w-5 border-2 border-loam-900 bg-white",
+  hazard: "h-7 w-7 border-2 border-loam-900 bg-flare-400 font-bold text-loam-900",
+  pick: "h-7 w-7 border-4 border-white bg-moss-600 shadow",
+};
+
+/** A map of draggable pins, shared by the staff pin page and the point picker. */
+export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label }: PinMapCanvasProps) {
+  const { state, onIdle, onError } = useMapState();
+
+  function onMapClick(event: MapLayerMouseEvent) {
+    // A tap on a pin bubbles up to the map too: only a tap on the ground moves the selected pin.
+    if ((event.originalEvent?.target as Element | null)?.closest?.(".maplibregl-marker")) return;
+    if (selectedKey) onMove(selectedKey, event.lngLat.lng, event.lngLat.lat, "tap");
+  }
+
+  function onKey(event: KeyboardEvent, pin: CanvasPin) {
+    const step = NUDGES[event.key];
+    if (!step) return;
+    event.preventDefault();
+    const metresPerDegree = 111_195;
+    const lat = pin.lat + (step[1] * NUDGE_M) / metresPerDegree;
+    const lon = pin.lon + (step[0] * NUDGE_M) / (metresPerDegree * Math.cos((pin.lat * Math.PI) / 180));
+    onMove(pin.key, lon, lat, "key");
+  }
+
+  return (
+    <div className="relative h-[60vh] min-h-80 overflow-hidden rounded-xl border border-loam-300" data-testid="pin-map" data-map-state={state} aria-label={label} role="group">
+      <Map
+        mapLib={maplibregl}
+        mapStyle={styleUrl}
+        initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
+        style={{ width: "100%", height: "100%" }}
+        onClick={onMapClick}
+        onLoad={(event) => exposeMapForTests(event.target)}
+        onIdle={onIdle}
+        onError={onError}
+        dragRotate={false}
+        touchPitch={false}
+      >
+        <NavigationControl position="top-right" showCompass={false} />
+        {pins.map((pin) => (
+          <Marker
+            key={pin.key}
+            longitude={pin.lon}
+            latitude={pin.lat}
+            draggable
+            onDragEnd={(event: MarkerDragEvent) => onMove(pin.key, event.lngLat.lng, event.lngLat.lat, "drag")}
+          >
+            <button
+              type="button"
+              className={`inline-flex items-center justify-center rounded-full ${LOOKS[pin.look]} ${selectedKey === pin.key ? "outline-4 outline-offset-2 outline-moss-600" : ""}`}
+              aria-label={`${pin.label}${selectedKey === pin.key ? " (selected: tap the map or use the arrow keys to move it)" : ""}`}
+              aria-pressed={selectedKey === pin.key}
+              title={pin.label}
+              data-pin={pin.key}
+              onClick={() => onSelect?.(pin.key)}
+              onKeyDown={(event) => onKey(event, pin)}
+            >
+              {pin.look === "hazard" ? "!" : ""}
+            </button>
+          </Marker>
+        ))}
+      </Map>
+    </div>
+  );
+}

@@ -1,0 +1,23 @@
+export type Bounds = [[west: number, south: number], [east: number, north: number]];
+type Box = { minLon: number; minLat: number; maxLon: number; maxLat: number };
+
+/** The box around every trail (the map opens fitted to it), or null when the park has none yet. */
+export function trailBounds(trails: Box[]): Bounds | null {
+  if (trails.length === 0) return null;
+  const west = Math.min(...trails.map((t) => t.minLon));
+  const south = Math.min(...trails.map((t) => t.minLat));
+  const east = Math.max(...trails.map((t) => t.maxLon));
+  const north = Math.max(...trails.map((t) => t.maxLat));
+  return [
+    [west, south],
+    [east, north],
+  ];
+}
+
+/** Without trails, a box of about ±1 km around the park's centre. */
+export function boundsAround(lon: number, lat: number, halfSpanDeg = 0.01): Bounds {
+  return [
+    [lon - halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat - halfSpanDeg],
+    [lon + halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat + halfSpanDeg],
+  ];
+}

@@ -1,0 +1,56 @@
+import { expect, test } from "@playwright/test";
+import { demo, shot, signInAs } from "./helpers";
+import { openMap, PARK } from "./map-helpers";
+
+type Feature = { properties: { id: string; label: string; trailName: string; distanceAlongM: number }; geometry: { coordinates: number[] } };
+const features = async (request: import("@playwright/test").APIRequestContext): Promise<Feature[]> => (await (await request.get(`/api/parks/${PARK}/features.geojson`)).json()).features;
+const metres = (a: number[], b: number[]) => Math.hypot((a[0] - b[0]) * 111_195 * Math.cos((a[1] * Math.PI) / 180), (a[1] - b[1]) * 111_195);
+
+test("moving a feature needs a park role: anonymous 401, rider 403", async ({ page, request }) => {
+  const [feature] = await features(request);
+  const body = { data: { lon: feature.geometry.coordinates[0], lat: feature.geometry.coordinates[1] } };
+  expect((await request.patch(`/api/trail-features/${feature.properties.id}/position`, body)).status()).toBe(401);
+  await signInAs(page, demo("rider"));
+  expect((await page.request.patch(`/api/trail-features/${feature.properties.id}/position`, body)).status()).toBe(403);
+  // A browser request from another site is refused before anything else (ASVS v5.0.0 3.5.3).
+  const crossSite = await page.request.patch(`/api/trail-features/${feature.properties.id}/position`, { ...body, headers: { origin: "https://elsewhere.example" } });
+  expect(crossSite.status()).toBe(403);
+});
+
+test("a ranger drags a feature on the staff map, it snaps onto its trail, and Undo puts it back", async ({ page }) => {
+  await signInAs(page, demo("ranger"), undefined, `/staff/${PARK}/map`);
+  await page.goto(`/staff/${PARK}/map`);
+  await openMap(page, `/staff/${PARK}/map`, "pin-map");
+  const before = await features(page.request);
+  const pin = page.locator('[data-pin^="feature:"]').first();
+  const id = (await pin.getAttribute("data-pin"))!.split(":")[1];
+  const original = before.find((f) => f.properties.id === id)!;
+
+  const box = (await pin.boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width / 2 + 24, box.y + box.height / 2 + 18, { steps: 8 });
+  await page.mouse.up();
+  await expect(page.getByTestId("pin-status")).toContainText("snapped onto its trail");
+  const moved = (await features(page.request)).find((f) => f.properties.id === id)!;
+  expect(metres(moved.geometry.coordinates, original.geometry.coordinates)).toBeGreaterThan(1);
+  expect(moved.properties.distanceAlongM).not.toBe(original.properties.distanceAlongM);
+  await shot(page, "staff-map-moved");
+
+  await page.getByRole("button", { name: "Undo last move" }).click();
+  await expect(page.getByTestId("pin-status")).toContainText("back");
+  // Back at the same place along the trail, now exactly on the line (an uploaded waypoint may sit
+  // up to 10 m beside it).
+  const restored = (await features(page.request)).find((f) => f.properties.id === id)!;
+  expect(Math.abs(restored.properties.distanceAlongM - original.properties.distanceAlongM)).toBeLessThanOrEqual(1);
+  expect(metres(restored.geometry.coordinates, original.geometry.coordinates)).toBeLessThan(10);
+  await expect(page.getByRole("button", { name: "Undo last move" })).toBeDisabled();
+});
+
+test("staff of the park see a link to move pins from the rider's map; riders do not", async ({ page }) => {
+  await page.goto(`/parks/${PARK}/map`);
+  await expect(page.getByRole("link", { name: "Move pins" })).toHaveCount(0);
+  await signInAs(page, demo("manager"));
+  await page.goto(`/parks/${PARK}/map`);
+  await expect(page.getByRole("link", { name: "Move pins" })).toHaveAttribute("href", `/staff/${PARK}/map`);
+});
