@@ -9,6 +9,8 @@ const PAGES: Visit[] = [
   { path: "/sign-in" },
   { path: "/sign-up" },
   { path: "/parks/harrow-ridge" },
+  { path: "/parks/harrow-ridge/map" },
+  { path: "/staff/harrow-ridge/map", as: "ranger" },
   { path: "/me", as: "rider" },
   { path: "/pressure" },
   { path: "/pressure", as: "rider" },
