@@ -86,9 +86,16 @@ export async function removeSubscription(actor: Actor | null, id: string) {
 
 const invalidLink = (what: string) => new AppError(400, `This ${what} link is not valid or has expired.`, "token");
 
+/** Any malformed token gets the same answer as a forged one. */
+function tokenText(token: unknown, what: string): string {
+  const parsed = linkToken.safeParse(token);
+  if (!parsed.success) throw invalidLink(what);
+  return parsed.data;
+}
+
 /** The double opt-in: only this sets confirmedAt. Idempotent, so a second click is harmless. */
 export async function confirmSubscription(token: unknown) {
-  const payload = readConfirmToken(linkToken.parse(token));
+  const payload = readConfirmToken(tokenText(token, "confirmation"));
   if (!payload) throw invalidLink("confirmation");
   const sub = await Subscription.findByPk(payload.subscriptionId, { include: [{ model: Park, as: "park", attributes: ["slug", "name"] }] });
   // The link confirms the address it was sent to, and only while the rider still wants the mail.
@@ -98,7 +105,7 @@ export async function confirmSubscription(token: unknown) {
 }
 
 async function subscriptionForUnsubscribe(token: unknown) {
-  const payload = readUnsubscribeToken(linkToken.parse(token));
+  const payload = readUnsubscribeToken(tokenText(token, "unsubscribe"));
   if (!payload) throw invalidLink("unsubscribe");
   const park = await Park.findByPk(payload.parkId, { attributes: ["id", "slug", "name"] });
   if (!park) throw invalidLink("unsubscribe");
