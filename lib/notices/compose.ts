@@ -39,8 +39,9 @@ export function noticeSubject(parkName: string, kind: NoticeKind, trailNames: st
   return subject.length <= SUBJECT_MAX ? subject : `${subject.slice(0, SUBJECT_MAX - 1).trimEnd()}…`;
 }
 
+/** "Sun 14 Jun 2026, 10:00, park time (America/Los_Angeles)", assembled from parts so ICU versions agree. */
 export function formatClosedUntil(closedUntil: Date, timeZone: string): string {
-  const when = new Intl.DateTimeFormat("en-GB", {
+  const parts = new Intl.DateTimeFormat("en-GB", {
     timeZone,
     weekday: "short",
     day: "numeric",
@@ -49,8 +50,9 @@ export function formatClosedUntil(closedUntil: Date, timeZone: string): string {
     hour: "2-digit",
     minute: "2-digit",
     hourCycle: "h23",
-  }).format(closedUntil);
-  return `${when}, park time (${timeZone})`;
+  }).formatToParts(closedUntil);
+  const get = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? "";
+  return `${get("weekday")} ${get("day")} ${get("month")} ${get("year")}, ${get("hour")}:${get("minute")}, park time (${timeZone})`;
 }
 
 export function composeNoticeEmail(input: NoticeEmailInput) {
