@@ -51,7 +51,7 @@ export async function getNotice(actor: Actor | null, noticeId: string) {
   const trails = notice.trailIds ? await Trail.findAll({ where: { id: notice.trailIds }, attributes: ["id", "name"] }) : [];
   return {
     ...noticeView(notice, counts),
-    park: { slug: park.slug, name: park.name, timeZone: park.timeZone },
+    park: { id: park.id, slug: park.slug, name: park.name, timeZone: park.timeZone },
     trails: trails.map((t) => ({ id: t.id, name: t.name })),
   };
 }

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { getActor } from "@/lib/auth/actor";
 
 export const metadata = { title: "My account" };
@@ -12,6 +13,7 @@ export default async function MyAccountPage() {
         <p className="font-semibold">{actor.name}</p>
         <p className="text-loam-600">{actor.email}</p>
       </div>
+      <Link href="/me/subscriptions" className="btn-quiet">Trail notices by e-mail</Link>
     </section>
   );
 }
