@@ -8,6 +8,8 @@ import { SubscriptionForm, type ParkChoice } from "./subscription-form";
 export const metadata = { title: "Trail notices by e-mail" };
 export const dynamic = "force-dynamic";
 
+const KIND_PLURAL: Record<string, string> = { closure: "closures", reopening: "reopenings", advisory: "advisories" };
+
 const STATUS_TEXT = {
   pending: "Waiting for you to confirm: open the link we e-mailed you",
   active: "On",
@@ -46,7 +48,7 @@ export default async function MySubscriptionsPage({ searchParams }: { searchPara
                 <p className="font-bold">{s.park.name}</p>
                 <p className="text-sm">
                   {s.trailIds ? s.trailIds.map((id) => trailName.get(id) ?? "a removed trail").join(", ") : "Every trail"} ·{" "}
-                  {s.kinds.join(", ")} · to {s.email}
+                  {s.kinds.map((k) => KIND_PLURAL[k] ?? k).join(", ")} · to {s.email}
                 </p>
                 <p className="text-sm font-semibold" data-status={s.status}>{STATUS_TEXT[s.status]}</p>
               </div>

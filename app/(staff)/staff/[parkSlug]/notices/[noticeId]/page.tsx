@@ -49,7 +49,7 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
             </div>
           ))}
         </dl>
-        {can(actor, "notice:send", { parkId: notice.park.id }) && <RetryFailedForm parkSlug={parkSlug} noticeId={notice.id} failed={notice.deliveries.failed} />}
+        {notice.deliveries.failed > 0 && can(actor, "notice:send", { parkId: notice.park.id }) && <RetryFailedForm parkSlug={parkSlug} noticeId={notice.id} failed={notice.deliveries.failed} />}
         {deliveries.length === 0 ? (
           <p className="text-loam-700">Nobody matched this notice, so nothing was e-mailed.</p>
         ) : (
