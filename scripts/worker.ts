@@ -10,8 +10,9 @@ import { sequelize } from "@/models";
 
 async function main() {
   const settings = workerSettings();
-  const transport = createNoticeTransport({ maxConnections: settings.concurrency });
-  const options = { workerId: newWorkerId(), transport, ...settings };
+  const { connections, ...rest } = settings;
+  const transport = createNoticeTransport({ maxConnections: connections });
+  const options = { workerId: newWorkerId(), transport, ...rest };
   const stopping = new AbortController();
   const stop = (signal: string) => {
     if (stopping.signal.aborted) return;

@@ -16,6 +16,7 @@ export type WorkerOptions = {
   workerId: string;
   transport: Transporter;
   batchSize: number;
+  /** Messages in flight; the transport's pool holds those waiting for a connection. */
   concurrency: number;
   retry: RetryPolicy;
   /** A 'sending' claim older than this is taken to belong to a dead worker. */
@@ -30,7 +31,7 @@ export type BatchResult = { claimed: number; sent: number; retrying: number; fai
 export const newWorkerId = () => `${hostname().slice(0, 32)}:${process.pid}:${randomBytes(4).toString("hex")}`;
 
 export function workerDefaults(transport: Transporter, overrides: Partial<WorkerOptions> = {}): WorkerOptions {
-  return { workerId: newWorkerId(), transport, batchSize: 100, concurrency: 4, retry: DEFAULT_RETRY_POLICY, staleClaimMs: 5 * 60_000, ...overrides };
+  return { workerId: newWorkerId(), transport, batchSize: 100, concurrency: 16, retry: DEFAULT_RETRY_POLICY, staleClaimMs: 5 * 60_000, ...overrides };
 }
 
 type NoticeContext = { notice: Notice; park: Park };

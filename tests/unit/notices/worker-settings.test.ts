@@ -4,7 +4,7 @@ import { workerSettings } from "@/lib/notices/worker-settings";
 
 describe("notice worker settings", () => {
   it("default to the production policy", () => {
-    expect(workerSettings({})).toEqual({ concurrency: 4, batchSize: 100, pollMs: 1000, retry: DEFAULT_RETRY_POLICY, staleClaimMs: 300_000 });
+    expect(workerSettings({})).toEqual({ connections: 4, concurrency: 16, batchSize: 100, pollMs: 1000, retry: DEFAULT_RETRY_POLICY, staleClaimMs: 300_000 });
   });
 
   it("read overrides from the environment", () => {
