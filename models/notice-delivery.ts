@@ -16,6 +16,7 @@ export class NoticeDelivery extends Model<InferAttributes<NoticeDelivery>, Infer
   declare claimedAt: CreationOptional<Date | null>;
   declare claimedBy: CreationOptional<string | null>;
   declare sentAt: CreationOptional<Date | null>;
+  declare nextAttemptAt: CreationOptional<Date>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -33,6 +34,7 @@ NoticeDelivery.init(
     claimedAt: { type: DataTypes.DATE, allowNull: true },
     claimedBy: { type: DataTypes.STRING(64), allowNull: true },
     sentAt: { type: DataTypes.DATE, allowNull: true },
+    nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -11,6 +11,7 @@ export class Subscription extends Model<InferAttributes<Subscription>, InferCrea
   declare kinds: CreationOptional<string[]>;
   declare confirmedAt: CreationOptional<Date | null>;
   declare unsubscribedAt: CreationOptional<Date | null>;
+  declare confirmationSentAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -25,6 +26,7 @@ Subscription.init(
     kinds: { type: DataTypes.JSONB, allowNull: false, defaultValue: ["closure", "reopening", "advisory"] },
     confirmedAt: { type: DataTypes.DATE, allowNull: true },
     unsubscribedAt: { type: DataTypes.DATE, allowNull: true },
+    confirmationSentAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getActor } from "@/lib/auth/actor";
 import { can, roleInPark } from "@/lib/auth/permissions";
@@ -16,6 +17,7 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">{park.name}: staff desk</h1>
+      <Link href={`/staff/${park.slug}/notices`} className="btn-quiet">Notices to riders</Link>
       <div className="card">
         <h2 className="mb-2 text-lg font-bold">Team</h2>
         <ul className="divide-y divide-loam-100">

@@ -1,0 +1,63 @@
+import { getActor } from "@/lib/auth/actor";
+import { listSubscriptions } from "@/lib/notices/subscriptions";
+import type { NoticeKind } from "@/lib/validations/notice";
+import { Park, Trail } from "@/models";
+import { RemoveSubscriptionForm } from "./remove-form";
+import { SubscriptionForm, type ParkChoice } from "./subscription-form";
+
+export const metadata = { title: "Trail notices by e-mail" };
+export const dynamic = "force-dynamic";
+
+const KIND_PLURAL: Record<string, string> = { closure: "closures", reopening: "reopenings", advisory: "advisories" };
+
+const STATUS_TEXT = {
+  pending: "Waiting for you to confirm: open the link we e-mailed you",
+  active: "On",
+  unsubscribed: "Stopped (you unsubscribed)",
+} as const;
+
+export default async function MySubscriptionsPage({ searchParams }: { searchParams: Promise<{ park?: string }> }) {
+  const actor = (await getActor())!;
+  const [{ park: wanted }, subscriptions, parks, trails] = await Promise.all([
+    searchParams,
+    listSubscriptions(actor),
+    Park.findAll({ attributes: ["id", "slug", "name"], order: [["name", "ASC"]] }),
+    Trail.findAll({ where: { archivedAt: null }, attributes: ["id", "parkId", "name"], order: [["name", "ASC"]] }),
+  ]);
+  const trailName = new Map(trails.map((t) => [t.id, t.name]));
+  const choices: ParkChoice[] = parks.map((p) => {
+    const current = subscriptions.find((s) => s.park.slug === p.slug && s.status !== "unsubscribed");
+    return {
+      slug: p.slug,
+      name: p.name,
+      trails: trails.filter((t) => t.parkId === p.id).map((t) => ({ id: t.id, name: t.name })),
+      current: current ? { trailIds: current.trailIds, kinds: current.kinds as NoticeKind[] } : null,
+    };
+  });
+  const initialSlug = choices.some((c) => c.slug === wanted) ? wanted! : (choices[0]?.slug ?? "");
+
+  return (
+    <section className="space-y-4">
+      <h1 className="text-2xl font-bold">Trail notices by e-mail</h1>
+      <p className="text-loam-700">When staff close or reopen a trail, hear it before you drive up. Every e-mail has a link to stop them in one click.</p>
+      {subscriptions.length > 0 && (
+        <ul className="space-y-3" aria-label="Your subscriptions">
+          {subscriptions.map((s) => (
+            <li key={s.id} className="card flex flex-wrap items-start justify-between gap-3" data-testid={`subscription-${s.park.slug}`}>
+              <div className="space-y-1">
+                <p className="font-bold">{s.park.name}</p>
+                <p className="text-sm">
+                  {s.trailIds ? s.trailIds.map((id) => trailName.get(id) ?? "a removed trail").join(", ") : "Every trail"} ·{" "}
+                  {s.kinds.map((k) => KIND_PLURAL[k] ?? k).join(", ")} · to {s.email}
+                </p>
+                <p className="text-sm font-semibold" data-status={s.status}>{STATUS_TEXT[s.status]}</p>
+              </div>
+              <RemoveSubscriptionForm subscriptionId={s.id} parkName={s.park.name} />
+            </li>
+          ))}
+        </ul>
+      )}
+      <SubscriptionForm key={initialSlug} parks={choices} initialSlug={initialSlug} />
+    </section>
+  );
+}

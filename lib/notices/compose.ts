@@ -1,0 +1,96 @@
+import { headerSafe } from "@/lib/mail/transport";
+import type { NoticeKind } from "@/lib/validations/notice";
+
+/**
+ * The notice e-mail, built from parts only: the subject is ours (park and trail names,
+ * with CR/LF neutralised), the staff message goes only into the body, escaped in HTML.
+ * Pure: the worker and the preview both call it.
+ */
+export type NoticeEmailInput = {
+  park: { name: string; slug: string; timeZone: string };
+  /** Built by noticeSubject when the notice is written, stored with it. */
+  subject: string;
+  message: string;
+  closedUntil: Date | null;
+  appUrl: string;
+  /** Page where a rider confirms with a button (works without signing in). */
+  unsubscribePageUrl: string;
+  /** RFC 8058 one-click target: a POST here unsubscribes. */
+  oneClickUrl: string;
+};
+
+export const SUBJECT_MAX = 150;
+
+const escapeMap: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
+export const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => escapeMap[c]);
+
+/** "Ridgeback", "Ridgeback and Fernline", "A, B and C", "A, B and 3 more trails". */
+export function trailList(names: string[]): string {
+  const clean = names.map(headerSafe);
+  const list = new Intl.ListFormat("en-GB", { type: "conjunction" });
+  if (clean.length <= 3) return list.format(clean);
+  return list.format([...clean.slice(0, 2), `${clean.length - 2} more trails`]);
+}
+
+export function noticeSubject(parkName: string, kind: NoticeKind, trailNames: string[] | null): string {
+  const what = trailNames && trailNames.length > 0 ? trailList(trailNames) : "all trails";
+  const phrase = kind === "closure" ? `${what} closed` : kind === "reopening" ? `${what} reopened` : `advisory for ${what}`;
+  const subject = `${headerSafe(parkName)}: ${phrase}`;
+  return subject.length <= SUBJECT_MAX ? subject : `${subject.slice(0, SUBJECT_MAX - 1).trimEnd()}…`;
+}
+
+/** "Sun 14 Jun 2026, 10:00, park time (America/Los_Angeles)", assembled from parts so ICU versions agree. */
+export function formatClosedUntil(closedUntil: Date, timeZone: string): string {
+  const parts = new Intl.DateTimeFormat("en-GB", {
+    timeZone,
+    weekday: "short",
+    day: "numeric",
+    month: "short",
+    year: "numeric",
+    hour: "2-digit",
+    minute: "2-digit",
+    hourCycle: "h23",
+  }).formatToParts(closedUntil);
+  const get = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? "";
+  return `${get("weekday")} ${get("day")} ${get("month")} ${get("year")}, ${get("hour")}:${get("minute")}, park time (${timeZone})`;
+}
+
+export function composeNoticeEmail(input: NoticeEmailInput) {
+  const subject = headerSafe(input.subject);
+  const boardUrl = `${input.appUrl}/parks/${encodeURIComponent(input.park.slug)}`;
+  const until = input.closedUntil ? formatClosedUntil(input.closedUntil, input.park.timeZone) : null;
+  const message = input.message.replace(/\r\n?/g, "\n");
+
+  const text = [
+    subject,
+    "",
+    message,
+    "",
+    ...(until ? [`Closed until: ${until}`, ""] : []),
+    `Today's conditions: ${boardUrl}`,
+    "",
+    "--",
+    `You get this because you asked for notices from ${headerSafe(input.park.name)} on Loamcast.`,
+    `Stop these e-mails: ${input.unsubscribePageUrl}`,
+    "",
+  ].join("\n");
+
+  const e = escapeHtml;
+  const html = `<!doctype html>
+<html lang="en"><body style="font-family:system-ui,sans-serif;color:#221c16;max-width:560px">
+<h1 style="font-size:20px">${e(subject)}</h1>
+<p style="white-space:pre-line">${e(message)}</p>
+${until ? `<p><strong>Closed until:</strong> ${e(until)}</p>` : ""}
+<p><a href="${e(boardUrl)}">Today's conditions at ${e(input.park.name)}</a></p>
+<hr>
+<p style="font-size:13px;color:#63513a">You get this because you asked for notices from ${e(input.park.name)} on Loamcast.
+<a href="${e(input.unsubscribePageUrl)}">Stop these e-mails</a>.</p>
+</body></html>
+`;
+
+  const headers = {
+    "List-Unsubscribe": `<${input.oneClickUrl}>`,
+    "List-Unsubscribe-Post": "List-Unsubscribe=One-Click",
+  };
+  return { subject, text, html, headers };
+}

@@ -1,0 +1,58 @@
+import { z } from "zod";
+
+/** Notices and subscriptions: the shapes forms, actions and route handlers all accept. */
+export const NOTICE_KINDS = ["closure", "reopening", "advisory"] as const;
+export type NoticeKind = (typeof NOTICE_KINDS)[number];
+
+export const MESSAGE_MAX = 2000;
+export const MAX_TRAILS_PER_NOTICE = 100;
+
+// Control characters other than tab, LF and CR have no place in a message riders read.
+const STRAY_CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
+
+const kind = z.enum(NOTICE_KINDS, { message: "Choose closure, reopening or advisory." });
+
+/** null = the whole park; otherwise a non-empty list of distinct trail ids. */
+const trailIds = z
+  .array(z.uuid("Choose trails from the list."))
+  .min(1, "Choose at least one trail, or the whole park.")
+  .max(MAX_TRAILS_PER_NOTICE, `Choose at most ${MAX_TRAILS_PER_NOTICE} trails.`)
+  .transform((ids) => [...new Set(ids)])
+  .nullable();
+
+export const noticeFields = z
+  .strictObject({
+    kind,
+    trailIds: trailIds.default(null),
+    message: z
+      .string({ message: "Write the message riders will read." })
+      .trim()
+      .min(1, "Write the message riders will read.")
+      .max(MESSAGE_MAX, `Keep the message under ${MESSAGE_MAX} characters.`)
+      .refine((text) => !STRAY_CONTROL.test(text), "The message contains control characters."),
+    closedUntil: z.iso
+      .datetime({ offset: true, message: "Give 'closed until' as a date and time." })
+      .transform((text) => new Date(text))
+      .refine((date) => date.getTime() > Date.now(), "'Closed until' must be in the future.")
+      .nullable()
+      .default(null),
+  })
+  .superRefine((notice, ctx) => {
+    if (notice.closedUntil && notice.kind !== "closure") {
+      ctx.addIssue({ code: "custom", path: ["closedUntil"], message: "Only a closure has a 'closed until' time." });
+    }
+  });
+export type NoticeFields = z.infer<typeof noticeFields>;
+
+export const subscriptionFields = z.strictObject({
+  parkSlug: z.string().trim().min(1, "Choose a park.").max(60),
+  trailIds: trailIds.default(null),
+  kinds: z
+    .array(kind)
+    .min(1, "Choose at least one kind of notice.")
+    .transform((kinds) => NOTICE_KINDS.filter((k) => kinds.includes(k))),
+});
+export type SubscriptionFields = z.infer<typeof subscriptionFields>;
+
+/** Signed link tokens arrive in a query string; anything else is refused before verifying. */
+export const linkToken = z.string().trim().min(20, "This link is incomplete.").max(1000, "This link is not valid.");

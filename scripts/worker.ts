@@ -1,0 +1,46 @@
+/**
+ * The notice worker: `npm run worker` (runs until SIGINT/SIGTERM) or `tsx scripts/worker.ts --once`
+ * (sends everything due now, then exits). Several may run at once; claims keep them apart.
+ */
+import { drainDue, newWorkerId } from "@/lib/notices/delivery-worker";
+import { createNoticeTransport } from "@/lib/notices/notice-transport";
+import { report, runWorkerLoop } from "@/lib/notices/worker-loop";
+import { workerSettings } from "@/lib/notices/worker-settings";
+import { sequelize } from "@/models";
+
+async function main() {
+  const settings = workerSettings();
+  const { connections, ...rest } = settings;
+  const transport = createNoticeTransport({ maxConnections: connections });
+  const options = { workerId: newWorkerId(), transport, ...rest };
+  const stopping = new AbortController();
+  const stop = (signal: string) => {
+    if (stopping.signal.aborted) return;
+    console.log(`[worker] ${signal}: finishing the batch in hand, then stopping`);
+    stopping.abort();
+  };
+  process.on("SIGINT", () => stop("SIGINT"));
+  process.on("SIGTERM", () => stop("SIGTERM"));
+
+  try {
+    if (process.argv.includes("--once")) {
+      const result = await drainDue(options, () => stopping.signal.aborted);
+      report(result, console.log);
+      console.log(`[worker] done: ${result.sent} sent, ${result.retrying} to retry later, ${result.failed} failed`);
+    } else {
+      console.log(`[worker] ${options.workerId} started (polling every ${settings.pollMs} ms)`);
+      await runWorkerLoop(options, { pollMs: settings.pollMs, signal: stopping.signal });
+    }
+  } finally {
+    transport.close();
+    await sequelize.close();
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (error) => {
+    console.error("[worker] stopped by an error:", error);
+    process.exit(1);
+  },
+);
