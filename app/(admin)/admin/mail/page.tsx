@@ -17,7 +17,7 @@ export default async function CapturedMailPage() {
           <li key={m.id} className="card">
             <p className="font-bold">{m.subject}</p>
             <p className="text-sm text-loam-600">to {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString("en-GB")}</p>
-            <pre className="mt-2 max-h-64 overflow-auto whitespace-pre-wrap rounded bg-loam-50 p-2 text-xs">{m.text}</pre>
+            <pre tabIndex={0} aria-label={`Body of ${m.subject}`} className="mt-2 max-h-64 overflow-auto whitespace-pre-wrap rounded bg-loam-50 p-2 text-xs">{m.text}</pre>
           </li>
         ))}
       </ul>

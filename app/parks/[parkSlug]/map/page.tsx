@@ -34,7 +34,7 @@ export default async function ParkMapPage({ params }: Props) {
       <header className="flex flex-wrap items-end justify-between gap-2">
         <div>
           <h1 className="text-2xl font-bold">{park.name}: map</h1>
-          {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-500">Fictional demo park</p>}
+          {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-700">Fictional demo park</p>}
         </div>
         <nav aria-label="Park pages" className="flex gap-2">
           <Link href={`/parks/${park.slug}`} className="btn-quiet">Conditions board</Link>
