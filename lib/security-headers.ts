@@ -1,0 +1,32 @@
+/**
+ * Security headers for every response (ASVS v5.0.0 3.4.x). The page CSP carries a fresh
+ * nonce per request; Next.js reads it from the request's CSP header and stamps its own scripts.
+ */
+export function contentSecurityPolicy(nonce: string, { dev = false } = {}): string {
+  const directives = [
+    "default-src 'self'",
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
+    // React style attributes and MapLibre's canvas containers set inline styles.
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data: blob:",
+    "font-src 'self'",
+    "connect-src 'self'",
+    "worker-src 'self' blob:",
+    "child-src 'self' blob:",
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ];
+  return directives.join("; ");
+}
+
+export function staticSecurityHeaders({ production }: { production: boolean }): Record<string, string> {
+  return {
+    "X-Content-Type-Options": "nosniff",
+    "Referrer-Policy": "strict-origin-when-cross-origin",
+    "X-Frame-Options": "DENY",
+    "Permissions-Policy": "camera=(), microphone=(), geolocation=(self)",
+    ...(production ? { "Strict-Transport-Security": "max-age=63072000; includeSubDomains" } : {}),
+  };
+}
