@@ -1,9 +1,28 @@
+import fs from "node:fs";
+import path from "node:path";
+
+// Worktrees may share one install through a node_modules link; Turbopack only reads files
+// under its root, so the root is the nearest folder holding both the app and the real install.
+function turbopackRoot() {
+  const here = process.cwd();
+  let modules;
+  try {
+    modules = path.dirname(fs.realpathSync(path.join(here, "node_modules")));
+  } catch {
+    return here;
+  }
+  let root = here;
+  while (!(modules + path.sep).startsWith(root + path.sep) && path.dirname(root) !== root) root = path.dirname(root);
+  return root;
+}
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
   serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "pg-boss", "nodemailer"],
   poweredByHeader: false,
   reactStrictMode: true,
+  turbopack: { root: turbopackRoot() },
   experimental: {
     serverActions: { bodySizeLimit: "25mb" },
   },
