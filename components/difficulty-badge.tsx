@@ -28,12 +28,13 @@ export function DifficultySymbol({ difficulty, size = 18 }: { difficulty: Diffic
 
 /**
  * A trail's difficulty as the sign plus its name, never the symbol or colour alone.
- * Usage: `<DifficultyBadge difficulty="intermediate" />`. An unknown value shows as text only.
+ * Usage: `<DifficultyBadge difficulty="intermediate" />` (`wrap` lets a long label break in narrow
+ * table cells). An unknown value shows as text only.
  */
-export function DifficultyBadge({ difficulty, className = "" }: { difficulty: Difficulty | string; className?: string }) {
+export function DifficultyBadge({ difficulty, className = "", wrap = false }: { difficulty: Difficulty | string; className?: string; wrap?: boolean }) {
   if (!isDifficulty(difficulty)) return <span className={className}>{difficulty}</span>;
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap ${className}`} data-difficulty={difficulty}>
+    <span className={`inline-flex items-center gap-1.5 ${wrap ? "" : "whitespace-nowrap"} ${className}`} data-difficulty={difficulty}>
       <DifficultySymbol difficulty={difficulty} />
       <span>{DIFFICULTIES[difficulty].label}</span>
     </span>

@@ -30,16 +30,15 @@ export function FileDrop({ label, hint, accept, onFile, disabled, testId }: {
       }}
       className={`rounded-xl border-2 border-dashed p-4 text-center ${over ? "border-moss-600 bg-moss-100" : "border-loam-300 bg-white"}`}
     >
-      <label htmlFor={id} className="block cursor-pointer space-y-2">
-        <span className="block font-semibold">{label}</span>
-        <span className="block text-sm text-loam-600">{hint}</span>
-      </label>
+      <label htmlFor={id} className="block cursor-pointer font-semibold">{label}</label>
+      <p id={`${id}-hint`} className="mt-1 text-sm text-loam-600">{hint}</p>
       <input
         id={id}
         type="file"
         accept={accept}
         disabled={disabled}
         data-testid={testId}
+        aria-describedby={`${id}-hint`}
         onChange={(e) => {
           const file = e.target.files?.[0];
           if (file) onFile(file);

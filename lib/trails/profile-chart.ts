@@ -41,8 +41,9 @@ export function ticksBetween(from: number, to: number, step: number): number[] {
 const one = (x: number) => Math.round(x * 10) / 10;
 const trimNumber = (x: number) => String(Number(x.toPrecision(6)));
 
-const SIZE = { width: 640, height: 220 };
-const MARGIN = { left: 56, right: 12, top: 12, bottom: 36 };
+/** Sized so the labels stay readable when a phone shrinks the chart to its width. */
+const SIZE = { width: 480, height: 220 };
+const MARGIN = { left: 52, right: 12, top: 24, bottom: 40 };
 
 /**
  * The elevation profile as SVG geometry in the viewer's units (km/m or mi/ft): distance along the
@@ -68,7 +69,7 @@ export function profileChart(profile: ProfilePoint[], system: DistanceSystem, si
   const points = xs.map((x, i) => `${px(x)},${py(ys[i])}`);
   const line = `M${points.join("L")}`;
   const area = `${line}L${px(xMax)},${plot.bottom}L${px(0)},${plot.bottom}Z`;
-  const xTicks = ticksBetween(0, xMax, niceStep(xMax, 5)).map((x) => ({ at: px(x), label: trimNumber(x) }));
+  const xTicks = ticksBetween(0, xMax, niceStep(xMax, 4)).map((x) => ({ at: px(x), label: trimNumber(x) }));
   const yTicks = ticksBetween(yLow, yHigh, yStep).map((y) => ({ at: py(y), label: trimNumber(y) }));
 
   const lowest = Math.min(...profile.map((p) => p.eleM));

@@ -33,7 +33,7 @@ describe("profileChart", () => {
     expect(chart.line.startsWith(`M${chart.plot.left},`)).toBe(true);
     expect(chart.line.endsWith(`L${chart.plot.right},${chart.plot.bottom - ((640 - 600) / (1400 - 600)) * (chart.plot.bottom - chart.plot.top)}`)).toBe(true);
     expect(chart.yTicks.map((t) => t.label)).toEqual(["600", "800", "1000", "1200", "1400"]);
-    expect(chart.xTicks.map((t) => t.label)).toEqual(["0", "0.5", "1", "1.5", "2"]);
+    expect(chart.xTicks.map((t) => t.label)).toEqual(["0", "1", "2"]);
     expect([chart.xUnit, chart.yUnit]).toEqual(["km", "m"]);
     expect(chart.area.endsWith("Z")).toBe(true);
     expect(chart.summary).toContain("1320 m at the start");

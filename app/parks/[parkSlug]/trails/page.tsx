@@ -13,10 +13,11 @@ export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ parkSlug: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
-const COLUMNS: { key: TrailSortKey; label: string; numeric?: boolean }[] = [
+/** Kind folds under the name on phones so the figures stay on screen without scrolling. */
+const COLUMNS: { key: TrailSortKey; label: string; numeric?: boolean; wideOnly?: boolean }[] = [
   { key: "difficulty", label: "Difficulty" },
   { key: "name", label: "Trail" },
-  { key: "kind", label: "Kind" },
+  { key: "kind", label: "Kind", wideOnly: true },
   { key: "length", label: "Length", numeric: true },
   { key: "descent", label: "Descent", numeric: true },
   { key: "grade", label: "Steepest", numeric: true },
@@ -54,15 +55,20 @@ export default async function ParkTrailsPage({ params, searchParams }: Props) {
         <p className="card">No trails have been uploaded for this park yet.</p>
       ) : (
         <div className="card overflow-x-auto p-0">
-          <table className="w-full min-w-[36rem] text-left text-sm" data-testid="trail-table">
+          <table className="w-full text-left text-sm" data-testid="trail-table">
             <caption className="sr-only">Trails of {park.name}; the column headings sort the table.</caption>
             <thead className="border-b border-loam-200 bg-loam-50">
               <tr>
                 {COLUMNS.map((c) => {
                   const active = query.sort === c.key;
                   return (
-                    <th key={c.key} scope="col" aria-sort={active ? (query.dir === "asc" ? "ascending" : "descending") : undefined} className={`px-3 py-2 ${c.numeric ? "text-right" : ""}`}>
-                      <Link href={sortHref(c.key)} className="inline-flex min-h-tap items-center gap-1 font-semibold underline-offset-4 hover:underline">
+                    <th
+                      key={c.key}
+                      scope="col"
+                      aria-sort={active ? (query.dir === "asc" ? "ascending" : "descending") : undefined}
+                      className={`px-1 py-1 sm:px-3 ${c.numeric ? "text-right" : ""} ${c.wideOnly ? "hidden sm:table-cell" : ""}`}
+                    >
+                      <Link href={sortHref(c.key)} className="inline-flex min-h-tap items-center gap-0.5 text-xs font-semibold underline-offset-4 hover:underline sm:text-sm">
                         {c.label}
                         <span aria-hidden="true" className="text-loam-500">{active ? (query.dir === "asc" ? "▲" : "▼") : "↕"}</span>
                       </Link>
@@ -74,14 +80,17 @@ export default async function ParkTrailsPage({ params, searchParams }: Props) {
             <tbody className="divide-y divide-loam-100">
               {trails.map((t) => (
                 <tr key={t.id}>
-                  <td className="px-3 py-2"><DifficultyBadge difficulty={t.difficulty} /></td>
-                  <td className="px-3 py-2 font-semibold">
-                    <Link href={`/trails/${t.id}`} className="inline-flex min-h-tap items-center text-moss-700 underline underline-offset-4">{t.name}</Link>
+                  <td className="px-1 py-2 sm:px-3">
+                    <DifficultyBadge difficulty={t.difficulty} wrap className="flex-col items-start gap-0.5 text-[11px] leading-tight sm:flex-row sm:items-center sm:text-sm" />
                   </td>
-                  <td className="px-3 py-2">{t.kind}</td>
-                  <td className="px-3 py-2 text-right tabular-nums">{formatDistance(t.lengthM, system)}</td>
-                  <td className="px-3 py-2 text-right tabular-nums">{t.descentM === null ? "—" : formatHeight(t.descentM, system)}</td>
-                  <td className="px-3 py-2 text-right tabular-nums">{t.maxGradePct === null ? "—" : formatGrade(t.maxGradePct, 0)}</td>
+                  <td className="px-1 py-2 sm:px-3">
+                    <Link href={`/trails/${t.id}`} className="inline-flex min-h-tap items-center font-semibold text-moss-700 underline underline-offset-4">{t.name}</Link>
+                    <span className="block text-xs text-loam-600 sm:hidden">{t.kind}</span>
+                  </td>
+                  <td className="hidden px-3 py-2 sm:table-cell">{t.kind}</td>
+                  <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{formatDistance(t.lengthM, system)}</td>
+                  <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{t.descentM === null ? "—" : formatHeight(t.descentM, system)}</td>
+                  <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{t.maxGradePct === null ? "—" : formatGrade(t.maxGradePct, 0)}</td>
                 </tr>
               ))}
             </tbody>

@@ -19,6 +19,7 @@ type Stage =
   | { step: "previewed" }
   | { step: "refused"; error: ApiError };
 
+const sizeOf = (bytes: number) => (bytes < 1024 ? `${bytes} bytes` : bytes < MB ? `${(bytes / 1024).toFixed(0)} KB` : `${(bytes / MB).toFixed(1)} MB`);
 const baseName = (filename: string) => filename.replace(/\.[^.]+$/, "").replace(/[-_]+/g, " ").trim().slice(0, 80);
 
 /** Choose a file → see what Loamcast measured → adjust the details → save. Nothing is stored before "Save trail". */
@@ -80,7 +81,7 @@ export function TrailUploadForm({ parkSlug, system }: { parkSlug: string; system
         disabled={busy}
         testId="trail-file"
       />
-      {file && <p className="text-sm">Chosen: <span className="font-semibold">{file.name}</span> ({(file.size / 1024).toFixed(0)} KB)</p>}
+      {file && <p className="text-sm">Chosen: <span className="font-semibold">{file.name}</span> ({sizeOf(file.size)})</p>}
       {stage.step === "sending" && <UploadProgress share={stage.share} phase={stage.phase} />}
       {stage.step === "refused" && (
         <div role="alert" className="rounded-lg bg-brick-100 p-3 text-brick-600" data-testid="upload-refused">
