@@ -21,7 +21,7 @@ export function ArchiveTrailButton({ trailId, trailName, parkSlug }: { trailId: 
   return (
     <section className="card space-y-2" aria-labelledby="archive-heading">
       <h2 id="archive-heading" className="text-lg font-bold">Archive</h2>
-      <p className="text-sm text-loam-600">For a trail that is decommissioned. It disappears from the list, the map and the board; its history stays.</p>
+      <p className="text-sm text-loam-600">For a trail that is decommissioned. Riders no longer see it; its versions and files stay for staff.</p>
       {error && <p role="alert" className="field-error">{error}</p>}
       <button type="button" onClick={archive} disabled={pending} className="btn border border-brick-500 bg-white text-brick-600 hover:bg-brick-100">
         {pending ? "Archiving…" : "Archive this trail"}
