@@ -34,7 +34,7 @@ export function DifficultySymbol({ difficulty, size = 18 }: { difficulty: Diffic
 export function DifficultyBadge({ difficulty, className = "", wrap = false }: { difficulty: Difficulty | string; className?: string; wrap?: boolean }) {
   if (!isDifficulty(difficulty)) return <span className={className}>{difficulty}</span>;
   return (
-    <span className={`inline-flex items-center gap-1.5 ${wrap ? "" : "whitespace-nowrap"} ${className}`} data-difficulty={difficulty}>
+    <span className={["inline-flex items-center gap-1.5", wrap ? "" : "whitespace-nowrap", className].filter(Boolean).join(" ")} data-difficulty={difficulty}>
       <DifficultySymbol difficulty={difficulty} />
       <span>{DIFFICULTIES[difficulty].label}</span>
     </span>

@@ -1,6 +1,7 @@
 import { afterAll, afterEach, describe, expect, it, vi } from "vitest";
 import { getTrailDetail, listParkTrails } from "@/lib/data/trails";
 import { AppError } from "@/lib/errors";
+import { toGpx } from "@/lib/trails";
 import { createTrailFromUpload, replaceTrailLine } from "@/lib/trail-records/save-upload";
 import { AuditEvent, Trail, TrailFeature, TrailVersion, sequelize } from "@/models";
 import { corpusFile, demoFile, manifest, personIn, trailPark } from "./fixtures";
@@ -57,6 +58,17 @@ describe("creating a trail from an upload", () => {
       expect((error as AppError).message).toContain(entry.message);
     }
     expect(await rowsOf(park.id)).toEqual({ trails: 0, versions: 0, features: 0, audits: 0 });
+  });
+
+  it("stores waypoint names longer than a feature name may be, cut to 80 characters", async () => {
+    const park = await trailPark();
+    const manager = await personIn(park.id, "manager");
+    const segment = Array.from({ length: 20 }, (_, i) => [-121.94, 47.3 + i * 0.0001, 900 - i]);
+    const text = toGpx({ name: "Long names", segments: [segment], waypoints: [{ name: `Berm ${"x".repeat(200)}`, type: "berm", lon: -121.94, lat: 47.3005 }] });
+    const { trail } = await createTrailFromUpload(manager, park, { bytes: Buffer.from(text), filename: "long-names.gpx" }, {});
+    const [feature] = await TrailFeature.findAll({ where: { trailId: trail.id } });
+    expect(feature.name).toHaveLength(80);
+    expect(feature.kind).toBe("berm");
   });
 
   it("refuses a name that is too long before writing anything", async () => {

@@ -12,7 +12,7 @@ const shape: Record<string, RegExp> = {
   easy: /<circle[^>]*fill="#15803d"/,
   intermediate: /<rect[^>]*fill="#1d4ed8"/,
   difficult: /^(?:(?!<path).)*<path[^>]*fill="#111827"(?:(?!<path).)*$/,
-  extreme: /<path[^>]*fill="#111827"[^>]*\/><path[^>]*translate\(14 0\)/,
+  extreme: /<path[^>]*fill="#111827"[^>]*><\/path><path[^>]*translate\(14 0\)[^>]*fill="#111827"/,
 };
 
 describe("DifficultyBadge", () => {

@@ -61,7 +61,11 @@ export function FeaturesEditor({ trailId, features, system }: { trailId: string;
     if (result.ok) router.refresh();
     return result.ok;
   }
-  const invalid = (d: Draft) => Number.isNaN(toMetres(d.distance)) && (setMessage({ ok: false, text: `Enter the distance from the trail's start in ${unit}.` }), true);
+  function invalid(d: Draft): boolean {
+    if (!Number.isNaN(toMetres(d.distance))) return false;
+    setMessage({ ok: false, text: `Enter the distance from the trail's start in ${unit}.` });
+    return true;
+  }
 
   return (
     <section className="card space-y-3" aria-labelledby="features-heading">
