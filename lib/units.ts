@@ -1,7 +1,7 @@
 /**
  * Unit conversions and display helpers. Factors from NIST Special Publication 811 (2008),
  * Appendix B.8: psi = 6 894.757 293 168 Pa, bar = 100 000 Pa, lb = 0.453 592 37 kg (exact),
- * ft = 0.3048 m (exact), in = 0.0254 m (exact). The engine works in SI; the rider picks units.
+ * ft = 0.3048 m (exact), in = 0.0254 m (exact), mile (international) = 1 609.344 m (exact). The engine works in SI; the rider picks units.
  */
 export const PA_PER_PSI = 6894.757293168;
 export const KPA_PER_PSI = PA_PER_PSI / 1000;
@@ -10,13 +10,17 @@ export const KPA_PER_ATM = 101.325;
 export const KG_PER_LB = 0.45359237;
 export const M_PER_FT = 0.3048;
 export const MM_PER_IN = 25.4;
+export const M_PER_MI = 1609.344;
 
 export const PRESSURE_UNITS = ["psi", "bar", "kPa"] as const;
 export const MASS_UNITS = ["kg", "lb"] as const;
 export const LENGTH_UNITS = ["m", "ft"] as const;
+/** A rider's choice for distances and heights (User.units.distance): m and km, or ft and mi. */
+export const DISTANCE_SYSTEMS = ["metric", "imperial"] as const;
 export type PressureUnit = (typeof PRESSURE_UNITS)[number];
 export type MassUnit = (typeof MASS_UNITS)[number];
 export type LengthUnit = (typeof LENGTH_UNITS)[number];
+export type DistanceSystem = (typeof DISTANCE_SYSTEMS)[number];
 
 export const psiToKpa = (psi: number) => psi * KPA_PER_PSI;
 export const kpaToPsi = (kPa: number) => kPa / KPA_PER_PSI;
@@ -26,6 +30,8 @@ export const lbToKg = (lb: number) => lb * KG_PER_LB;
 export const kgToLb = (kg: number) => kg / KG_PER_LB;
 export const ftToM = (ft: number) => ft * M_PER_FT;
 export const mToFt = (m: number) => m / M_PER_FT;
+export const miToM = (mi: number) => mi * M_PER_MI;
+export const mToMi = (m: number) => m / M_PER_MI;
 export const inToMm = (inches: number) => inches * MM_PER_IN;
 export const mmToIn = (mm: number) => mm / MM_PER_IN;
 export const celsiusToKelvin = (c: number) => c + 273.15;
@@ -75,3 +81,31 @@ export function formatTemperature(c: number): string {
   const decimals = Number.isInteger(Number(c.toFixed(1))) ? 0 : 1;
   return `${formatNumber(c, decimals, false)} °C`;
 }
+
+/** The unit for heights and short distances in a distance system. */
+export const lengthUnitOf = (system: DistanceSystem): LengthUnit => (system === "imperial" ? "ft" : "m");
+
+/** Anything that is not a known choice (a missing preference, an anonymous visitor) reads as metric. */
+export const distanceSystemOf = (value: unknown): DistanceSystem => (value === "imperial" ? "imperial" : "metric");
+
+/**
+ * A trail's length: "740 m" / "2.41 km" / "12.3 km", or "820 ft" / "1.24 mi" / "12.3 mi".
+ * Short distances stay in the small unit so a 300 m trail never reads "0.30 km".
+ */
+export function formatDistance(m: number, system: DistanceSystem): string {
+  if (system === "imperial") {
+    const ft = mToFt(m);
+    if (Math.round(ft) < 1000) return `${formatNumber(ft, 0, false)} ft`;
+    const mi = mToMi(m);
+    return `${formatNumber(mi, mi < 9.995 ? 2 : 1, false)} mi`;
+  }
+  if (Math.round(m) < 1000) return `${formatNumber(m, 0, false)} m`;
+  const km = m / 1000;
+  return `${formatNumber(km, km < 9.995 ? 2 : 1, false)} km`;
+}
+
+/** A height or a climb/descent in whole metres or feet: "412 m", "1352 ft". */
+export const formatHeight = (m: number, system: DistanceSystem) => formatLength(m, lengthUnitOf(system));
+
+/** A grade in percent: "8.4 %". */
+export const formatGrade = (pct: number, decimals = 1) => `${formatNumber(pct, decimals, false)} %`;

@@ -16,6 +16,11 @@ export const DIFFICULTIES = {
   extreme: { label: "Extremely difficult", symbol: "double-diamond", colour: "#111827", colourName: "black", outline: null },
 } as const satisfies Record<Difficulty, { label: string; symbol: string; colour: string; colourName: string; outline: string | null }>;
 
+/** Each grade's sign colour, for map lines and legends: the one place these colours are defined. */
+export const DIFFICULTY_COLOURS = Object.fromEntries(Object.entries(DIFFICULTIES).map(([key, d]) => [key, d.colour])) as Record<Difficulty, string>;
+
+export const isDifficulty = (value: string): value is Difficulty => value in DIFFICULTIES;
+
 /** IMBA grade limits, in percent. Average: white < 5, green ≤ 5, blue ≤ 10, black ≤ 15. Maximum: white 10, green 15. */
 export const IMBA_GRADE_LIMITS = {
   avg: { easy: 5, intermediate: 10, difficult: 15 },

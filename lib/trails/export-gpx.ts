@@ -46,7 +46,10 @@ export function toGpx(trail: ExportableTrail): string {
   }
   lines.push(`  <trk>${optional("name", trail.name)}`);
   for (const segment of trail.segments) {
-    lines.push("    <trkseg>", ...segment.map((p) => point("trkpt", p, "      ")), "    </trkseg>");
+    // One push per point: spreading 200,000 points into push() overflows the call stack.
+    lines.push("    <trkseg>");
+    for (const p of segment) lines.push(point("trkpt", p, "      "));
+    lines.push("    </trkseg>");
   }
   lines.push("  </trk>", "</gpx>", "");
   return lines.join("\n");

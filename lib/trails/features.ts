@@ -1,8 +1,10 @@
 import { lineString, nearestPointOnLine } from "@turf/turf";
+import { featureKindValues } from "@/lib/validations/trail";
 import { cumulativeDistancesM } from "./geo";
 import type { Position, TrailWaypoint } from "./types";
 
-export const FEATURE_KINDS = ["berm", "jump", "drop", "rock-garden", "roots", "wooden-feature", "unknown"] as const;
+/** The kinds live with the schema (lib/validations/trail.ts) so forms and handlers share them. */
+export const FEATURE_KINDS = featureKindValues;
 export type FeatureKind = (typeof FEATURE_KINDS)[number];
 
 export type SnappedFeature = {

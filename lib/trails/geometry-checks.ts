@@ -5,6 +5,9 @@ import type { LonLat, Position, RawTrail, TrailWaypoint } from "./types";
 
 const fail = (message: string) => new AppError(422, message, "file");
 
+/** Whitespace collapsed and cut to the length a name is stored with. */
+const tidyName = (name?: string) => name?.replace(/\s+/g, " ").trim().slice(0, TRAIL_LIMITS.maxNameLength).trim();
+
 export function singlePointError(): AppError {
   return fail("The file holds a single point, not a trail. A trail needs a line of at least two points.");
 }
@@ -109,6 +112,11 @@ export function checkTrailGeometry(raw: RawTrail, parkCenter?: LonLat): RawTrail
   if (parkCenter) checkNearPark(segments, parkCenter);
   checkSteps(segments);
 
-  const name = raw.name?.replace(/\s+/g, " ").trim().slice(0, TRAIL_LIMITS.maxNameLength).trim();
-  return { ...(name ? { name } : {}), segments, waypoints: raw.waypoints, warnings };
+  const name = tidyName(raw.name);
+  // Waypoint names become feature names, stored with the same length limit as a trail's name.
+  const waypoints = raw.waypoints.map(({ name: waypointName, ...w }) => {
+    const tidy = tidyName(waypointName);
+    return tidy ? { name: tidy, ...w } : w;
+  });
+  return { ...(name ? { name } : {}), segments, waypoints, warnings };
 }

@@ -1,4 +1,4 @@
-import { DOMParser, type Document } from "@xmldom/xmldom";
+import { DOMParser, type Document, type Element } from "@xmldom/xmldom";
 import { gpx } from "@tmcw/togeojson";
 import type { Feature, FeatureCollection } from "geojson";
 import { AppError } from "@/lib/errors";
@@ -63,6 +63,13 @@ function metadataName(doc: Document): string | undefined {
   return textOf(name?.textContent);
 }
 
+/** The text of an element's first descendant with this name, as the converter reads a track's name. */
+const descendantText = (name: string) => (el: Element) => {
+  const found = el.getElementsByTagName(name)[0];
+  found?.normalize();
+  return textOf(found?.textContent);
+};
+
 function linesOf(feature: Feature): Position[][] {
   const geometry = feature.geometry;
   if (geometry?.type === "LineString") return [geometry.coordinates];
@@ -84,11 +91,13 @@ export function parseGpx(text: string): RawTrail {
   const scan = scanGpxPoints(doc.documentElement!);
   warnings.push(...scan.warnings);
 
+  // Tracks were read by the scan; the converter gets the rest (routes, waypoints and their names).
+  const trackNames = scan.tracksWithLines.map(descendantText("name"));
+  for (const track of scan.trackElements) track.parentNode?.removeChild(track);
   const features = toGeoJson(doc).features;
-  const tracks = features.filter((f) => f.properties?._gpxType === "trk");
   const routes = features.filter((f) => f.properties?._gpxType === "rte");
-  const lines = tracks.length > 0 ? tracks : routes;
-  if (tracks.length > 0 && routes.length > 0) warnings.push(`The file also has ${routes.length} route(s); the recorded track was used and the route(s) ignored.`);
+  const hasTracks = scan.trackSegments.length > 0;
+  if (hasTracks && routes.length > 0) warnings.push(`The file also has ${routes.length} route(s); the recorded track was used and the route(s) ignored.`);
 
   const waypoints: TrailWaypoint[] = [];
   for (const f of features) {
@@ -98,11 +107,12 @@ export function parseGpx(text: string): RawTrail {
     const type = textOf(f.properties?.type) ?? textOf(f.properties?.sym);
     waypoints.push({ ...(name ? { name } : {}), ...(type ? { type } : {}), lon, lat, ...(ele === undefined ? {} : { ele }) });
   }
-  const segments = lines.flatMap(linesOf);
+  const segments = hasTracks ? scan.trackSegments : routes.flatMap(linesOf);
   // The converter drops one-point segments; a file whose only line points were such is a single point.
   if (segments.length === 0 && scan.linePoints > 0) throw singlePointError();
+  const lineNames = hasTracks ? trackNames : routes.map((f) => textOf(f.properties?.name));
   return {
-    name: lines.map((f) => textOf(f.properties?.name)).find(Boolean) ?? metadataName(doc),
+    name: lineNames.find(Boolean) ?? metadataName(doc),
     segments,
     waypoints,
     warnings,

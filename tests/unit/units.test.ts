@@ -1,6 +1,10 @@
 import { describe, expect, it } from "vitest";
 import {
   barToKpa,
+  distanceSystemOf,
+  formatDistance,
+  formatGrade,
+  formatHeight,
   formatLength,
   formatMass,
   formatPressure,
@@ -13,7 +17,10 @@ import {
   kpaToBar,
   kpaToPsi,
   lbToKg,
+  lengthUnitOf,
+  miToM,
   mToFt,
+  mToMi,
   mmToIn,
   psiToKpa,
 } from "@/lib/units";
@@ -77,5 +84,36 @@ describe("formatting helpers", () => {
     expect(formatLength(ftToM(4593), "ft")).toBe("4593 ft");
     expect(formatTemperature(6)).toBe("6 °C");
     expect(formatTemperature(-4.5)).toBe("\u22124.5 °C");
+  });
+});
+
+describe("distances for trails (NIST SP 811 B.8: mile = 1 609.344 m, ft = 0.3048 m, exact)", () => {
+  it("mile and foot factors", () => {
+    relClose(miToM(1), 1609.344);
+    relClose(mToMi(1609.344 * 2.5), 2.5);
+    relClose(mToFt(1609.344), 5280); // 1 mile = 5280 ft, both exact
+  });
+  it("metric lengths stay in metres below a kilometre", () => {
+    expect(formatDistance(740.4, "metric")).toBe("740 m");
+    expect(formatDistance(999.4, "metric")).toBe("999 m");
+    expect(formatDistance(999.6, "metric")).toBe("1.00 km");
+    expect(formatDistance(2413, "metric")).toBe("2.41 km");
+    expect(formatDistance(12_345, "metric")).toBe("12.3 km");
+  });
+  it("imperial lengths in feet below 1000 ft, then miles", () => {
+    expect(formatDistance(250, "imperial")).toBe("820 ft"); // 250 / 0.3048 = 820.2
+    expect(formatDistance(2000, "imperial")).toBe("1.24 mi"); // 2000 / 1609.344 = 1.2427
+    expect(formatDistance(miToM(12.34), "imperial")).toBe("12.3 mi");
+  });
+  it("heights and grades", () => {
+    expect(formatHeight(412.3, "metric")).toBe("412 m");
+    expect(formatHeight(412.3, "imperial")).toBe("1353 ft"); // 412.3 / 0.3048 = 1352.7
+    expect(formatGrade(8.44)).toBe("8.4 %");
+  });
+  it("reads a missing or unknown preference as metric", () => {
+    expect(distanceSystemOf(undefined)).toBe("metric");
+    expect(distanceSystemOf("furlongs")).toBe("metric");
+    expect(distanceSystemOf("imperial")).toBe("imperial");
+    expect(lengthUnitOf("imperial")).toBe("ft");
   });
 });

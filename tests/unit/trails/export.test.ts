@@ -1,7 +1,7 @@
 import gjv from "geojson-validation";
 import { DOMParser } from "@xmldom/xmldom";
 import { describe, expect, it } from "vitest";
-import { escapeXml, parseTrailFile, toGeoJson, toGpx, type ExportableTrail } from "@/lib/trails";
+import { escapeXml, parseTrailFile, toGeoJson, toGpx, TRAIL_LIMITS, type ExportableTrail } from "@/lib/trails";
 import { bytes, meridianLine } from "./helpers";
 
 const trail: ExportableTrail = {
@@ -44,6 +44,12 @@ describe("toGpx (GPX 1.1 writer)", () => {
     expect(gpx).toContain('lat="0.0000003" lon="0"');
     expect(gpx).toContain('lat="0.5" lon="-0.0000001"');
     expect(gpx).toContain("<name>Bell line</name>");
+  });
+
+  it("writes a trail at the point limit (200,000 points) without running out of stack", () => {
+    const segment = meridianLine(TRAIL_LIMITS.maxPoints, 2, (i) => 900 - i * 0.01);
+    const gpx = toGpx({ name: "Long", segments: [segment] });
+    expect(gpx.match(/<trkpt /g)?.length).toBe(TRAIL_LIMITS.maxPoints);
   });
 
   it("escapes the five XML special characters", () => {

@@ -29,6 +29,11 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
           ))}
         </ul>
       </div>
+      <div className="card flex flex-wrap items-center gap-2">
+        <h2 className="mr-auto text-lg font-bold">Trails</h2>
+        <Link href={`/parks/${park.slug}/trails`} className="btn-quiet">Trail list</Link>
+        {can(actor, "trail:write", { parkId: park.id }) && <Link href={`/staff/${park.slug}/trails/new`} className="btn-primary">Upload a trail</Link>}
+      </div>
       {can(actor, "staff:invite", { parkId: park.id }) && <InviteStaffForm parkSlug={park.slug} />}
     </section>
   );

@@ -1,0 +1,29 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { getActor } from "@/lib/auth/actor";
+import { can } from "@/lib/auth/permissions";
+import { distanceSystemFor } from "@/lib/data/user-units";
+import { Park } from "@/models";
+import { TrailUploadForm } from "./upload-form";
+
+export const dynamic = "force-dynamic";
+export const metadata = { title: "Upload a trail" };
+
+export default async function NewTrailPage({ params }: { params: Promise<{ parkSlug: string }> }) {
+  const { parkSlug } = await params;
+  const actor = await getActor();
+  const park = await Park.findOne({ where: { slug: parkSlug } });
+  if (!park || !can(actor, "trail:write", { parkId: park.id })) notFound();
+  return (
+    <section className="space-y-4">
+      <p className="text-sm font-semibold text-loam-600">
+        <Link href={`/staff/${park.slug}`} className="underline-offset-4 hover:underline">{park.name}: staff desk</Link>
+      </p>
+      <h1 className="text-2xl font-bold">Upload a trail</h1>
+      <p className="text-sm">
+        Export the line from your GPS or mapping app as GPX 1.1 or GeoJSON. Loamcast checks it, measures length, climb, descent and grades, and suggests a rating before anything is saved.
+      </p>
+      <TrailUploadForm parkSlug={park.slug} system={await distanceSystemFor(actor)} />
+    </section>
+  );
+}

@@ -1,0 +1,15 @@
+// PATCH /api/trail-features/{id}: staff move, retype, rename or resize a feature.
+// DELETE /api/trail-features/{id}: staff remove a feature.
+import { handler, readJson } from "@/lib/api/handler";
+import { featureView } from "@/lib/data/trails";
+import { deleteTrailFeature, updateTrailFeature } from "@/lib/trail-records/edit-features";
+
+export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) => {
+  const feature = await updateTrailFeature(actor, params.id, await readJson(request, 10_000));
+  return Response.json({ feature: featureView(feature) });
+});
+
+export const DELETE = handler<{ id: string }>(async ({ params, actor }) => {
+  await deleteTrailFeature(actor, params.id);
+  return new Response(null, { status: 204 });
+});
