@@ -4,12 +4,18 @@ import { demo, signInAs } from "./helpers";
 
 // axe-core (Deque) WCAG 2.x rules: no serious or critical violations on any page.
 type Visit = { path: string; as?: "admin" | "manager" | "ranger" | "rider" };
+// "{trail}" stands for the id of a demo trail, looked up through the public API.
+const TRAIL = "{trail}";
 const PAGES: Visit[] = [
   { path: "/" },
   { path: "/sign-in" },
   { path: "/sign-up" },
   { path: "/parks/harrow-ridge" },
   { path: "/parks/harrow-ridge/map" },
+  { path: "/parks/harrow-ridge/trails" },
+  { path: `/trails/${TRAIL}` },
+  { path: "/staff/harrow-ridge/trails/new", as: "manager" },
+  { path: `/staff/harrow-ridge/trails/${TRAIL}/edit`, as: "manager" },
   { path: "/staff/harrow-ridge/map", as: "ranger" },
   { path: "/me", as: "rider" },
   { path: "/pressure" },
@@ -37,7 +43,12 @@ async function seriousViolations(page: Page) {
 for (const visit of PAGES) {
   test(`accessible: ${visit.path}${visit.as ? ` as ${visit.as}` : ""}`, async ({ page }) => {
     if (visit.as) await signInAs(page, demo(visit.as));
-    await page.goto(visit.path);
+    let path = visit.path;
+    if (path.includes(TRAIL)) {
+      const { trails } = await (await page.request.get("/api/parks/harrow-ridge/trails")).json();
+      path = path.replace(TRAIL, trails[0].id);
+    }
+    await page.goto(path);
     await page.waitForLoadState("load");
     expect(await seriousViolations(page)).toEqual([]);
   });
