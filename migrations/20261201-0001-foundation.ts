@@ -1,10 +1,5 @@
 import { DataTypes, type QueryInterface } from "sequelize";
-
-const id = { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 };
-const timestamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-  updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-};
+import { timestamps, uuidId as id } from "@/lib/migration-columns";
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {

@@ -1,16 +1,5 @@
 import { DataTypes, type QueryInterface } from "sequelize";
-
-const id = { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 };
-const timestamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-  updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-};
-const ref = (model: string, onDelete = "CASCADE", allowNull = false) => ({
-  type: DataTypes.UUID,
-  allowNull,
-  references: { model, key: "id" },
-  onDelete,
-});
+import { ref, timestamps, uuidId as id } from "@/lib/migration-columns";
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {
