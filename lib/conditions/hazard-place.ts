@@ -9,6 +9,8 @@ import { formatDistance } from "@/lib/trails/geo";
 /** A pin further than this from the park's centre is refused as a typo or swapped coordinates. */
 export const MAX_HAZARD_DISTANCE_FROM_PARK_M = 20_000;
 
+const END_TOLERANCE_M = 1;
+
 export type LonLat = { lon: number; lat: number };
 
 export function assertWithinPark(point: LonLat, center: LonLat, maxM = MAX_HAZARD_DISTANCE_FROM_PARK_M): void {
@@ -37,5 +39,8 @@ export function pointAlongTrail(geometry: GeoJSON.LineString | GeoJSON.MultiLine
     }
     remaining -= segmentM;
   }
+  // Within a metre of the end (rounding in the caller's figure) is the end.
+  const last = segments.at(-1)?.at(-1);
+  if (last && remaining <= END_TOLERANCE_M) return { lon: last[0], lat: last[1] };
   throw new AppError(422, `The trail is ${formatDistance(total)} long; choose a distance up to that.`, "distanceAlongM");
 }

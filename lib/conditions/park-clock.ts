@@ -18,10 +18,17 @@ function offsetMs(instant: Date, timeZone: string): number {
   return asUtc - Math.floor(instant.getTime() / 1000) * 1000;
 }
 
-/** A wall-clock time that does not exist (skipped by a DST change) lands just after the gap. */
+/**
+ * A wall-clock time that happens twice (autumn) resolves to the first; one that does not exist
+ * (skipped in spring) lands just after the gap, as a clock moved forward would read.
+ */
 export function parkLocalInstant(date: string, time: string, timeZone: string): Date {
   const wall = Date.parse(`${date}T${time.length === 5 ? `${time}:00` : time}Z`);
-  let guess = wall - offsetMs(new Date(wall), timeZone);
-  guess = wall - offsetMs(new Date(guess), timeZone);
-  return new Date(guess);
+  const firstOffset = offsetMs(new Date(wall), timeZone);
+  const first = wall - firstOffset;
+  const secondOffset = offsetMs(new Date(first), timeZone);
+  if (secondOffset === firstOffset) return new Date(first);
+  const second = wall - secondOffset;
+  if (offsetMs(new Date(second), timeZone) === secondOffset) return new Date(second);
+  return new Date(Math.max(first, second));
 }
