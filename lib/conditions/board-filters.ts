@@ -28,17 +28,6 @@ export function parseBoardFilters(params: SearchParams): BoardFilters {
   };
 }
 
-type Filterable = { difficulty: string; kind: string; effectiveStatus: string | null };
-
-export function filterTrails<T extends Filterable>(trails: T[], filters: BoardFilters): T[] {
-  return trails.filter(
-    (t) =>
-      (!filters.status || (filters.status === "not-inspected" ? t.effectiveStatus === null : t.effectiveStatus === filters.status)) &&
-      (!filters.difficulty || t.difficulty === filters.difficulty) &&
-      (!filters.kind || t.kind === filters.kind),
-  );
-}
-
 /** The link that sets one filter (or clears it with undefined) and keeps the others. */
 export function filterHref(path: string, current: BoardFilters, key: FilterKey, value: string | undefined): string {
   const next = new URLSearchParams();

@@ -1,6 +1,6 @@
 /** Plain words for every value a ranger picks or a rider reads. One place, so screens agree. */
 import type { HazardKind } from "@/lib/validations/hazard";
-import type { FEATURE_STATES, ParkStateKind, ReportStatus } from "@/lib/validations/report";
+import type { FEATURE_STATES, ParkStateKind, ReportStatus } from "./vocabulary";
 
 export const STATUS_LABELS: Record<ReportStatus, string> = { open: "Open", caution: "Caution", closed: "Closed" };
 /** A sign that carries the status without colour: ✓, ! and ✕. */

@@ -3,17 +3,9 @@
  * screen and the seeder all send. Strict objects: an unknown or misspelt key is refused.
  */
 import { z } from "zod";
-import { SURFACES } from "./pressure";
+import { FEATURE_STATES, PARK_STATES, STATUSES, SURFACES } from "@/lib/conditions/vocabulary";
 
-export const STATUSES = ["open", "caution", "closed"] as const;
-export { SURFACES };
-/** The state of each kind of built feature a ranger judges. */
-export const FEATURE_STATES = {
-  berms: ["firm", "soft", "rutted"],
-  jumps: ["good", "worn-lips", "rutted-landings"],
-  wood: ["dry", "slick"],
-} as const;
-export const PARK_STATES = ["closed", "delayed", "advisory"] as const;
+export { FEATURE_STATES, PARK_STATES, STATUSES, SURFACES };
 
 // Control characters other than line breaks and tabs have no place in a note.
 const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
@@ -122,12 +114,9 @@ export const dateRangeSchema = z
   .object({ from: dateSchema.optional(), to: dateSchema.optional() })
   .refine((r) => !r.from || !r.to || r.from <= r.to, { error: "from must not be after to.", path: ["from"] });
 
-export type ReportStatus = z.infer<typeof statusSchema>;
-export type Surface = z.infer<typeof surfaceSchema>;
-export type FeatureStates = z.infer<typeof featuresSchema>;
+export type { FeatureStates, ParkStateKind, ReportStatus, Surface } from "@/lib/conditions/vocabulary";
 export type ReportInput = z.infer<typeof reportInputSchema>;
 export type ReportPost = z.infer<typeof reportPostSchema>;
 export type SweepEntry = z.infer<typeof sweepEntrySchema>;
 export type SweepInput = z.infer<typeof sweepSchema>;
 export type ParkStateInput = z.infer<typeof parkStateSchema>;
-export type ParkStateKind = (typeof PARK_STATES)[number];

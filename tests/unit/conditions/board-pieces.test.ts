@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { filterHref, filterTrails, parseBoardFilters } from "@/lib/conditions/board-filters";
+import { filterHref, parseBoardFilters } from "@/lib/conditions/board-filters";
+import { filterTrails } from "@/lib/conditions/filter-trails";
 import { monthGrid, shiftMonth } from "@/lib/conditions/calendar";
 import { describeFeatures } from "@/lib/conditions/labels";
 import { closureNoticeHref } from "@/lib/conditions/notice-link";

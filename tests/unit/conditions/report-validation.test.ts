@@ -94,3 +94,11 @@ describe("hazard validation", () => {
     expect(hazardPatchSchema.safeParse({ lockVersion: 0 }).success).toBe(false);
   });
 });
+
+describe("one vocabulary", () => {
+  it("reports name surfaces exactly as the pressure engine reads them", async () => {
+    const { SURFACES: pressureSurfaces } = await import("@/lib/validations/pressure");
+    const { SURFACES: reportSurfaces } = await import("@/lib/conditions/vocabulary");
+    expect([...reportSurfaces]).toEqual([...pressureSurfaces]);
+  });
+});

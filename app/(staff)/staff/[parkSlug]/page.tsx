@@ -1,4 +1,5 @@
 import { notFound } from "next/navigation";
+import { StaffConditionsLinks } from "@/components/board/staff-conditions-links";
 import { getActor } from "@/lib/auth/actor";
 import { can, roleInPark } from "@/lib/auth/permissions";
 import { listParkStaff } from "@/lib/data/parks";
@@ -16,6 +17,7 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">{park.name}: staff desk</h1>
+      <StaffConditionsLinks parkSlug={park.slug} />
       <div className="card">
         <h2 className="mb-2 text-lg font-bold">Team</h2>
         <ul className="divide-y divide-loam-100">
