@@ -85,7 +85,7 @@ export function HazardForm({ parkSlug, trails }: { parkSlug: string; trails: Tra
         <div className="grid grid-cols-2 gap-2">
           {KINDS.map(([value, label]) => (
             <label key={value} className="btn-quiet has-[:checked]:border-loam-900 has-[:checked]:bg-loam-800 has-[:checked]:text-white">
-              <input type="radio" name="kind" value={value} required className="h-5 w-5" defaultChecked={value === "fallen-tree"} />
+              <input type="radio" name="kind" value={value} required className="h-5 w-5 shrink-0" defaultChecked={value === "fallen-tree"} />
               {label}
             </label>
           ))}
@@ -96,7 +96,7 @@ export function HazardForm({ parkSlug, trails }: { parkSlug: string; trails: Tra
         <div className="grid grid-cols-2 gap-2">
           {(["coordinates", "along"] as const).map((w) => (
             <label key={w} className="btn-quiet has-[:checked]:border-loam-900 has-[:checked]:bg-loam-800 has-[:checked]:text-white">
-              <input type="radio" name="where" value={w} checked={where === w} onChange={() => setWhere(w)} className="h-5 w-5" />
+              <input type="radio" name="where" value={w} checked={where === w} onChange={() => setWhere(w)} className="h-5 w-5 shrink-0" />
               {w === "coordinates" ? "A point" : "Along a trail"}
             </label>
           ))}

@@ -1,6 +1,7 @@
 "use client";
 /** A trail's reports as a sortable table (TanStack Table v9: useTable with the sorting feature). */
 import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from "@tanstack/react-table";
+import { useMemo } from "react";
 import { StatusLabel } from "@/components/board/status-label";
 import { describeFeatures } from "@/lib/conditions/labels";
 import type { HistoryRow } from "@/lib/data/report-history";
@@ -32,7 +33,8 @@ function columnsFor(timeZone: string, showRevisions: boolean) {
 }
 
 export function HistoryTable({ rows, timeZone, showRevisions }: { rows: HistoryRow[]; timeZone: string; showRevisions: boolean }) {
-  const table = useTable({ features, columns: columnsFor(timeZone, showRevisions), data: rows, initialState: { sorting: [{ id: "date", desc: true }] } });
+  const columns = useMemo(() => columnsFor(timeZone, showRevisions), [timeZone, showRevisions]);
+  const table = useTable({ features, columns, data: rows, enableSortingRemoval: false, initialState: { sorting: [{ id: "date", desc: true }] } });
   return (
     <div className="overflow-x-auto">
       <table className="w-full min-w-[640px] border-collapse text-left text-sm" data-testid="history-table">

@@ -36,7 +36,7 @@ export function ParkStateForm({ parkSlug, active }: { parkSlug: string; active: 
             <div className="grid grid-cols-1 gap-2 sm:grid-cols-3">
               {PARK_STATES.map((kind) => (
                 <label key={kind} className="btn-quiet has-[:checked]:border-loam-900 has-[:checked]:bg-loam-800 has-[:checked]:text-white">
-                  <input type="radio" name="state" value={kind} defaultChecked={kind === "advisory"} className="h-5 w-5" />
+                  <input type="radio" name="state" value={kind} defaultChecked={kind === "advisory"} className="h-5 w-5 shrink-0" />
                   {PARK_STATE_LABELS[kind]}
                 </label>
               ))}

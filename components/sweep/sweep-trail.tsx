@@ -1,6 +1,6 @@
 "use client";
 import { DifficultyMark } from "@/components/board/difficulty-mark";
-import { FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/labels";
+import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/labels";
 import { applyChange, type DraftChange, type SweepDraft } from "@/lib/conditions/sweep-draft";
 import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type Surface } from "@/lib/conditions/vocabulary";
 import type { SweepTrail } from "@/lib/data/sweep-start";
@@ -15,6 +15,7 @@ export function SweepTrailCard(props: { trail: SweepTrail; draft: SweepDraft; on
   const { trail, draft } = props;
   const change = (c: DraftChange) => props.onChange(applyChange(draft, c));
   const id = `trail-${trail.id}`;
+  const featureLine = describeFeatures(draft.features);
   const startFrom = trail.start ? (trail.inspectedToday ? "today's report" : `the report of ${trail.startDate}`) : null;
   return (
     <li className={`card space-y-3 ${draft.mode !== "untouched" ? "border-2 border-loam-800" : ""}`} aria-labelledby={`${id}-name`} data-testid="sweep-trail" data-trail-name={trail.name}>
@@ -78,8 +79,10 @@ export function SweepTrailCard(props: { trail: SweepTrail; draft: SweepDraft; on
         selected={draft.surfaces}
         onToggle={(value, on) => change({ type: "surface", surface: value as Surface, on })}
       />
-      <details open={Object.keys(draft.features).length > 0}>
-        <summary className="min-h-tap cursor-pointer content-center font-semibold">Berms, jumps, wooden features</summary>
+      <details>
+        <summary className="min-h-tap cursor-pointer content-center font-semibold">
+          Berms, jumps, wooden features{featureLine ? <span className="font-normal text-loam-700">: {featureLine}</span> : null}
+        </summary>
         <div className="mt-2 space-y-3">
           {(Object.keys(FEATURE_STATES) as FeatureKind[]).map((kind) => (
             <ToggleGroup

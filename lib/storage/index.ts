@@ -6,7 +6,7 @@ import type { BlobStorage } from "./types";
 export type { BlobStorage, StoredObject } from "./types";
 
 /** The folder photos are written to: PHOTO_STORAGE_DIR, relative to the app folder. */
-export const photoStorageDir = () => path.resolve(process.cwd(), env().PHOTO_STORAGE_DIR);
+export const photoStorageDir = () => path.resolve(/* turbopackIgnore: true */ process.cwd(), env().PHOTO_STORAGE_DIR);
 
 let cached: BlobStorage | undefined;
 
