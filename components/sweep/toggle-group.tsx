@@ -34,6 +34,8 @@ export function ToggleGroup(props: {
                 value={option.value}
                 checked={checked}
                 onChange={(e) => props.onToggle(option.value, e.target.checked)}
+                // Tapping the status already shown confirms it: the trail counts as inspected.
+                onClick={() => props.type === "radio" && checked && props.onToggle(option.value, true)}
                 className="absolute h-px w-px opacity-0"
               />
               {option.sign && <span aria-hidden="true">{option.sign}</span>}

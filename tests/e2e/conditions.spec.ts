@@ -54,13 +54,14 @@ test("the ranger sweeps on a phone: one closure after rain, others open; the boa
   await expect(page.getByTestId("sweep-trail")).toHaveCount(10);
 
   const gnarlroot = sweepCard(page, "Gnarlroot");
-  await gnarlroot.getByRole("radio", { name: "Closed" }).check();
+  await gnarlroot.getByRole("radio", { name: "Closed" }).click();
   await gnarlroot.getByLabel("Reason (closed)").fill("Saturated after the night's rain");
   await setSurfaces(gnarlroot, ["wet", "muddy"]);
 
   for (const name of ["Mossback Ramble", "Cedar Skip"]) {
     const card = sweepCard(page, name);
-    await card.getByRole("radio", { name: "Open" }).check();
+    // A tap on the status, even the one already shown, marks the trail inspected.
+    await card.getByRole("radio", { name: "Open" }).click();
     await setSurfaces(card, ["tacky", "damp"]);
   }
   await sweepCard(page, "Tumblewire").getByRole("button", { name: "Unchanged" }).click();
@@ -68,7 +69,7 @@ test("the ranger sweeps on a phone: one closure after rain, others open; the boa
 
   // With the keyboard: arrow keys move through the status buttons.
   const slatebelt = sweepCard(page, "Slatebelt Flow");
-  await slatebelt.getByRole("radio", { name: "Open" }).check();
+  await slatebelt.getByRole("radio", { name: "Open" }).click();
   await slatebelt.getByRole("radio", { name: "Open" }).focus();
   await page.keyboard.press("ArrowRight");
   await expect(slatebelt.getByRole("radio", { name: "Caution" })).toBeChecked();
