@@ -13,7 +13,7 @@ const STATUS_ORDER = { open: 0, caution: 1, closed: 2 } as const;
 
 function columnsFor(timeZone: string, showRevisions: boolean) {
   return helper.columns([
-    helper.accessor("date", { header: "Date", sortFn: "alphanumeric" }),
+    helper.accessor("date", { header: "Date", sortFn: "alphanumeric", cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span> }),
     helper.accessor((r) => STATUS_ORDER[r.status], {
       id: "status",
       header: "Status",
