@@ -1,7 +1,8 @@
 /**
  * Benchmark: the board API (GET /api/parks/{slug}/board) against a bare Node `http` + `pg`
  * server running the same SQL (lib/data/board-sql.ts) on the same database, in the same run.
- * Prints requests per second, p99 latency and the ratio; asserts nothing.
+ * Each server runs in its own process; autocannon runs here. Prints requests per second,
+ * p99 latency and the ratio; asserts nothing.
  *
  * Run with the database up and the app built (`npm start` does both), e.g.
  *   npx tsx bench/board-api.ts --url http://localhost:3000      # against the running app
@@ -46,8 +47,8 @@ async function waitFor(url: string, timeoutMs = 60_000) {
   throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
 }
 
-/** The bare server: one pool, the same SQL and parameters, rows straight to JSON. */
-async function startBareServer(): Promise<{ url: string; close: () => Promise<void> }> {
+/** The bare server: one pool, the same SQL and parameters, rows straight to JSON. Runs in its own process. */
+async function serveBare(port: number) {
   const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 10 });
   const server = http.createServer(async (_req, res) => {
     try {
@@ -58,15 +59,15 @@ async function startBareServer(): Promise<{ url: string; close: () => Promise<vo
       res.writeHead(500).end(String(error));
     }
   });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const { port } = server.address() as AddressInfo;
-  return {
-    url: `http://127.0.0.1:${port}/`,
-    close: async () => {
-      await new Promise((resolve) => server.close(resolve));
-      await pool.end();
-    },
-  };
+  server.listen(port, "127.0.0.1");
+}
+
+async function startBareServer(): Promise<{ url: string; child: ChildProcess }> {
+  const port = await freePort();
+  const child = spawn("node_modules/.bin/tsx", ["bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
+  const url = `http://127.0.0.1:${port}/`;
+  await waitFor(url);
+  return { url, child };
 }
 
 async function startNext(): Promise<{ base: string; child: ChildProcess }> {
@@ -86,6 +87,7 @@ async function measure(label: string, url: string) {
 }
 
 async function main() {
+  if (args.includes("--serve-bare")) return serveBare(Number(option("serve-bare", "0")));
   const given = option("url", "");
   const next = given ? { base: given.replace(/\/$/, ""), child: null } : await startNext();
   const bare = await startBareServer();
@@ -97,7 +99,7 @@ async function main() {
     const ratio = nextResult.requests.average / bareResult.requests.average;
     console.log(`ratio (Next.js / bare): ${(ratio * 100).toFixed(0)} % of the bare server's throughput; p99 ${nextResult.latency.p99} ms vs ${bareResult.latency.p99} ms`);
   } finally {
-    await bare.close();
+    bare.child.kill("SIGTERM");
     next.child?.kill("SIGTERM");
   }
 }
