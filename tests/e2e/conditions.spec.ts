@@ -186,3 +186,24 @@ test("the API: board public, writes need staff of the park, CSV for staff", asyn
   expect(bad.status()).toBe(400);
   expect((await bad.json()).error).toEqual({ message: "Give a reason when a trail is closed.", field: "reason" });
 });
+
+test("a park-wide closure overrides every trail on the board until staff clear it", async ({ page }) => {
+  await signInAs(page, demo("manager"), undefined, "/staff/harrow-ridge/sweep");
+  await page.goto("/staff/harrow-ridge/sweep");
+  await page.getByText("Park-wide notice").first().click();
+  await page.getByRole("radio", { name: "Whole park closed" }).check();
+  await page.getByLabel("Message").fill("Lightning on the ridge: lifts stopped");
+  await page.getByRole("button", { name: "Set park-wide notice" }).click();
+  await expect(page.getByText("Park-wide notice set. The board shows it now.")).toBeVisible();
+
+  await page.goto(BOARD);
+  await expect(page.getByTestId("park-state")).toContainText("Lightning on the ridge: lifts stopped");
+  await expect(page.getByTestId("board-trail").locator('[data-status="closed"]')).toHaveCount(10);
+  await shot(page, "board-park-closed");
+
+  await page.goto("/staff/harrow-ridge/sweep");
+  await page.getByRole("button", { name: "Clear the park-wide notice" }).click();
+  await expect(page.getByText("Cleared. Trails show their own status again.")).toBeVisible();
+  await page.goto(BOARD);
+  await expect(page.getByTestId("park-state")).toHaveCount(0);
+});
