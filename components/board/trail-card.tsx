@@ -45,7 +45,7 @@ export function TrailCard({ trail, timeZone }: { trail: BoardTrail; timeZone: st
       <p className="text-sm text-loam-700" data-testid="inspected">
         {lastSeen(trail, timeZone)}
       </p>
-      {trail.status && trail.effectiveStatus !== trail.status && <p className="text-sm">Staff report for the trail itself: {trail.status}.</p>}
+      {trail.status && trail.effectiveStatus !== trail.status && <p className="text-sm">Trail report: {trail.status} (the park-wide notice comes first).</p>}
       {trail.reason && <p className="font-semibold">{trail.reason}</p>}
       {trail.inspectedToday && trail.surfaces.length > 0 && (
         <ul className="flex flex-wrap gap-1.5" aria-label="Surfaces">

@@ -199,6 +199,8 @@ test("a park-wide closure overrides every trail on the board until staff clear i
   await page.goto(BOARD);
   await expect(page.getByTestId("park-state")).toContainText("Lightning on the ridge: lifts stopped");
   await expect(page.getByTestId("board-trail").locator('[data-status="closed"]')).toHaveCount(10);
+  await page.waitForLoadState("networkidle");
+  await expect(page.getByTestId("park-state")).toBeVisible();
   await shot(page, "board-park-closed");
 
   await page.goto("/staff/harrow-ridge/sweep");
