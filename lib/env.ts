@@ -14,7 +14,7 @@ const envSchema = z.object({
   SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
   FAKE_SMTP_CONTROL_URL: z.string().url().optional(),
   MAIL_FROM: z.string().default("Loamcast <no-reply@loamcast.test>"),
-  PHOTO_STORAGE_DIR: z.string().default(".local/photos"),
+  PHOTO_STORAGE_DIR: z.string().min(1).default(".local/photos-dev"),
   MAP_STYLE_URL: z.string().url().optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SECURE_COOKIES: z.enum(["true", "false"]).optional(),

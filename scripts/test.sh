@@ -20,8 +20,9 @@ cleanup() { trap - EXIT INT TERM; stop_children; pg_stop test; }
 trap cleanup EXIT INT TERM
 
 pg_start test "$PG_PORT" "$PG_PASSWORD" || exit 1
-node_modules/.bin/tsx scripts/db.ts fresh || exit 1
+# Photos first: the demo seed writes its hazard photos into the fresh folder.
 rm -rf "$PHOTO_STORAGE_DIR"
+node_modules/.bin/tsx scripts/db.ts fresh || exit 1
 start_fake_smtp
 rm -rf .local/test-results && mkdir -p .local/test-results
 

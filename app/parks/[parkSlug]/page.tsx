@@ -1,19 +1,55 @@
+import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
-import { Park } from "@/models";
+import { BoardFilterLinks } from "@/components/board/board-filters";
+import { BoardLive } from "@/components/board/board-live";
+import { parseBoardFilters } from "@/lib/conditions/board-filters";
+import { boardForPark } from "@/lib/data/board";
 
 export const dynamic = "force-dynamic";
 
-export default async function ParkPage({ params }: { params: Promise<{ parkSlug: string }> }) {
+type Props = { params: Promise<{ parkSlug: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { parkSlug } = await params;
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park) notFound();
+  return { title: `Today's conditions · ${parkSlug}` };
+}
+
+const longDate = (date: string) =>
+  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
+
+/** The public conditions board: rendered on the server for a fast first paint, refreshed by a small client part. */
+export default async function ParkBoardPage({ params, searchParams }: Props) {
+  const { parkSlug } = await params;
+  const [board, query] = await Promise.all([boardForPark(parkSlug), searchParams]);
+  if (!board) notFound();
+  const filters = parseBoardFilters(query);
+  const path = `/parks/${board.park.slug}`;
   return (
-    <section className="space-y-3">
-      <h1 className="text-2xl font-bold">{park.name}</h1>
-      {park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-700">Fictional demo park</p>}
-      <p>
-        Base {park.baseElevationM} m · summit {park.summitElevationM} m · {park.timeZone}
-      </p>
+    <section className="space-y-4">
+      <header className="space-y-1">
+        {board.park.fictional && <p className="text-xs font-semibold uppercase tracking-wide text-flare-700">Fictional demo park</p>}
+        <h1 className="text-2xl font-bold">{board.park.name}</h1>
+        <p className="text-loam-700">
+          Conditions for <strong>{longDate(board.date)}</strong> (park time)
+        </p>
+        <p className="flex flex-wrap gap-2">
+          <Link href={`${path}/map`} className="btn-quiet">
+            Map
+          </Link>
+          <Link href={`${path}/trails`} className="btn-quiet">
+            All trails
+          </Link>
+          <Link href={`/pressure?park=${board.park.slug}`} className="btn-quiet">
+            Today&apos;s tyre pressure
+          </Link>
+          <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet">
+            Get closure e-mails
+          </Link>
+        </p>
+      </header>
+      <BoardFilterLinks path={path} filters={filters} />
+      <BoardLive initial={board} filters={filters} />
     </section>
   );
 }

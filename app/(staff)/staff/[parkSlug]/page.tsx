@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { StaffConditionsLinks } from "@/components/board/staff-conditions-links";
 import { getActor } from "@/lib/auth/actor";
 import { can, roleInPark } from "@/lib/auth/permissions";
 import { listParkStaff } from "@/lib/data/parks";
@@ -17,6 +18,7 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">{park.name}: staff desk</h1>
+      <StaffConditionsLinks parkSlug={park.slug} />
       <Link href={`/staff/${park.slug}/notices`} className="btn-quiet">Notices to riders</Link>
       <div className="card">
         <h2 className="mb-2 text-lg font-bold">Team</h2>

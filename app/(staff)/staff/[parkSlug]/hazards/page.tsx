@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { HazardList } from "@/components/board/hazard-list";
+import { HazardForm } from "@/components/hazards/hazard-form";
+import { ResolveHazardButton } from "@/components/hazards/resolve-button";
+import { getActor } from "@/lib/auth/actor";
+import { can } from "@/lib/auth/permissions";
+import { openHazards, trailChoices } from "@/lib/data/hazards";
+import { Park } from "@/models";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Hazards" };
+
+export default async function HazardsPage({ params }: { params: Promise<{ parkSlug: string }> }) {
+  const { parkSlug } = await params;
+  const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
+  if (!park || !can(actor, "hazard:write", { parkId: park.id })) notFound();
+  const [hazards, trails] = await Promise.all([openHazards(park.id), trailChoices(park.id)]);
+  return (
+    <section className="space-y-4">
+      <header>
+        <h1 className="text-2xl font-bold">Hazards at {park.name}</h1>
+        <p className="flex flex-wrap gap-x-4 text-sm font-semibold">
+          <Link href={`/staff/${park.slug}/sweep`} className="inline-flex min-h-tap items-center text-moss-700 underline">
+            Morning sweep
+          </Link>
+          <Link href={`/parks/${park.slug}`} className="inline-flex min-h-tap items-center text-moss-700 underline">
+            Public board
+          </Link>
+        </p>
+      </header>
+      <HazardForm parkSlug={park.slug} trails={trails} />
+      <section className="card space-y-3" aria-labelledby="open-hazards">
+        <h2 id="open-hazards" className="text-lg font-bold">
+          Open hazards ({hazards.length})
+        </h2>
+        {hazards.length === 0 && <p>None open.</p>}
+        <ul className="space-y-3">
+          {hazards.map((h) => (
+            <li key={h.id} className="space-y-2 border-b border-loam-100 pb-3">
+              <p className="text-sm text-loam-600">{h.trailName ? `On ${h.trailName}` : "Off the trails"} · {h.lat.toFixed(5)}, {h.lon.toFixed(5)}</p>
+              <HazardList hazards={[h]} />
+              <ResolveHazardButton hazardId={h.id} lockVersion={h.lockVersion} />
+            </li>
+          ))}
+        </ul>
+      </section>
+    </section>
+  );
+}

@@ -1,0 +1,41 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { ParkStateForm } from "@/components/sweep/park-state-form";
+import { SweepForm } from "@/components/sweep/sweep-form";
+import { getActor } from "@/lib/auth/actor";
+import { can } from "@/lib/auth/permissions";
+import { activeParkState } from "@/lib/conditions/park-state";
+import { sweepStart } from "@/lib/data/sweep-start";
+import { Park } from "@/models";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Morning sweep" };
+
+/** The ranger's morning sweep on a phone: every trail, one save. */
+export default async function SweepPage({ params }: { params: Promise<{ parkSlug: string }> }) {
+  const { parkSlug } = await params;
+  const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
+  if (!park || !can(actor, "report:write", { parkId: park.id })) notFound();
+  const [start, active] = await Promise.all([sweepStart(park), activeParkState(park.id)]);
+  return (
+    <section className="space-y-4">
+      <header>
+        <h1 className="text-2xl font-bold">Morning sweep</h1>
+        <p className="text-loam-700">
+          {park.name} · {start.date} (park time). Tap <strong>Unchanged</strong> for a trail as it was, or set what you found; then save once.
+        </p>
+        <p className="mt-1 flex flex-wrap gap-x-4 text-sm font-semibold">
+          <Link href={`/parks/${park.slug}`} className="inline-flex min-h-tap items-center text-moss-700 underline">
+            Public board
+          </Link>
+          <Link href={`/staff/${park.slug}/hazards`} className="inline-flex min-h-tap items-center text-moss-700 underline">
+            Pin a hazard
+          </Link>
+        </p>
+      </header>
+      <ParkStateForm parkSlug={park.slug} active={active} />
+      {start.trails.length === 0 ? <p className="card">This park has no trails yet.</p> : <SweepForm parkSlug={park.slug} start={start} />}
+    </section>
+  );
+}

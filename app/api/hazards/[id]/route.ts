@@ -1,0 +1,8 @@
+// PATCH /api/hazards/{id}: resolve, reopen or edit a hazard ({lockVersion, resolved?, kind?, note?}) — staff of its park.
+import { handler, readJson } from "@/lib/api/handler";
+import { updateHazard } from "@/lib/conditions/hazards";
+
+export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) => {
+  const hazard = await updateHazard(actor, params.id, await readJson(request, 10_000));
+  return Response.json({ hazard });
+});

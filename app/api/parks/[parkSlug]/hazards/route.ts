@@ -1,0 +1,16 @@
+// POST /api/parks/{parkSlug}/hazards: pin a hazard (multipart: kind, note, lon+lat or trailId+distanceAlongM, photos) — staff of the park.
+import { handler } from "@/lib/api/handler";
+import { readHazardForm } from "@/lib/api/multipart";
+import { authorize } from "@/lib/auth/permissions";
+import { createHazard } from "@/lib/conditions/hazards";
+import { getParkBySlug } from "@/lib/data/parks";
+import { MAX_HAZARD_BODY_BYTES } from "@/lib/photos/limits";
+
+export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
+  const park = await getParkBySlug(params.parkSlug);
+  // Refuse strangers before reading megabytes of photos.
+  authorize(actor, "hazard:write", { parkId: park.id });
+  const { fields, photos } = await readHazardForm(request, MAX_HAZARD_BODY_BYTES);
+  const hazard = await createHazard(actor, park, fields, photos);
+  return Response.json({ hazard }, { status: 201 });
+});

@@ -1,0 +1,25 @@
+// GET /api/parks/{parkSlug}/reports.csv?from=&to=: current reports of every trail as CSV (staff of the park).
+import { handler } from "@/lib/api/handler";
+import { authorize } from "@/lib/auth/permissions";
+import { reportsCsv } from "@/lib/conditions/report-csv";
+import { getParkBySlug } from "@/lib/data/parks";
+import { parkReportsForExport, resolveRange } from "@/lib/data/report-history";
+
+export const dynamic = "force-dynamic";
+
+export const GET = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
+  const park = await getParkBySlug(params.parkSlug);
+  authorize(actor, "reports:export", { parkId: park.id });
+  const query = new URL(request.url).searchParams;
+  const range = resolveRange({ from: query.get("from"), to: query.get("to") }, park);
+  const csv = reportsCsv(await parkReportsForExport(park.id, range), park.timeZone);
+  return new Response(csv, {
+    headers: {
+      // RFC 4180 §3 registers text/csv with the optional "header" parameter.
+      "Content-Type": "text/csv; charset=utf-8; header=present",
+      "Content-Disposition": `attachment; filename="${park.slug}-reports-${range.from}-to-${range.to}.csv"`,
+      "X-Content-Type-Options": "nosniff",
+      "Cache-Control": "private, no-store",
+    },
+  });
+});

@@ -1,0 +1,10 @@
+// POST /api/parks/{parkSlug}/sweep: the morning sweep, every marked trail in one transaction (staff of the park).
+import { handler, readJson } from "@/lib/api/handler";
+import { saveSweep } from "@/lib/conditions/sweep";
+import { getParkBySlug } from "@/lib/data/parks";
+
+export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
+  const park = await getParkBySlug(params.parkSlug);
+  const result = await saveSweep(actor, park, await readJson(request, 500_000));
+  return Response.json(result, { status: 201 });
+});

@@ -1,0 +1,110 @@
+/**
+ * Benchmark: the board API (GET /api/parks/{slug}/board) against a bare Node `http` + `pg`
+ * server running the same SQL (lib/data/board-sql.ts) on the same database, in the same run.
+ * Each server runs in its own process; autocannon runs here. Prints requests per second,
+ * p99 latency and the ratio; asserts nothing.
+ *
+ * Run with the database up and the app built (`npm start` does both), e.g.
+ *   npx tsx bench/board-api.ts --url http://localhost:3000      # against the running app
+ *   npx tsx bench/board-api.ts                                  # starts `next start` itself on a free port
+ * Options: --slug harrow-ridge --duration 10 --connections 10. DATABASE_URL as for the app.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import http from "node:http";
+import type { AddressInfo } from "node:net";
+import autocannon from "autocannon";
+import pg from "pg";
+import { BOARD_SQL } from "@/lib/data/board-sql";
+import { env } from "@/lib/env";
+
+const args = process.argv.slice(2);
+const option = (name: string, fallback: string) => {
+  const i = args.indexOf(`--${name}`);
+  return i >= 0 && args[i + 1] ? args[i + 1] : fallback;
+};
+const SLUG = option("slug", "harrow-ridge");
+const DURATION = Number(option("duration", "10"));
+const CONNECTIONS = Number(option("connections", "10"));
+
+async function freePort(): Promise<number> {
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const { port } = server.address() as AddressInfo;
+  await new Promise((resolve) => server.close(resolve));
+  return port;
+}
+
+async function waitFor(url: string, timeoutMs = 60_000) {
+  const start = Date.now();
+  while (Date.now() - start < timeoutMs) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // not up yet
+    }
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
+}
+
+/** The bare server: one pool, the same SQL and parameters, rows straight to JSON. Runs in its own process. */
+async function serveBare(port: number) {
+  const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 10 });
+  const server = http.createServer(async (_req, res) => {
+    try {
+      const { rows } = await pool.query(BOARD_SQL, [SLUG, new Date().toISOString()]);
+      res.writeHead(rows.length ? 200 : 404, { "content-type": "application/json" });
+      res.end(JSON.stringify(rows));
+    } catch (error) {
+      res.writeHead(500).end(String(error));
+    }
+  });
+  server.listen(port, "127.0.0.1");
+}
+
+async function startBareServer(): Promise<{ url: string; child: ChildProcess }> {
+  const port = await freePort();
+  const child = spawn("node_modules/.bin/tsx", ["bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
+  const url = `http://127.0.0.1:${port}/`;
+  await waitFor(url);
+  return { url, child };
+}
+
+async function startNext(): Promise<{ base: string; child: ChildProcess }> {
+  const port = await freePort();
+  const child = spawn("node_modules/.bin/next", ["start", "-H", "127.0.0.1", "-p", String(port)], { stdio: "ignore", env: process.env });
+  const base = `http://127.0.0.1:${port}`;
+  await waitFor(`${base}/api/health`);
+  return { base, child };
+}
+
+async function measure(label: string, url: string) {
+  await autocannon({ url, connections: 2, duration: 2 }); // warm-up
+  const result = await autocannon({ url, connections: CONNECTIONS, duration: DURATION });
+  const errors = result.errors + result.non2xx;
+  console.log(`${label.padEnd(24)} ${result.requests.average.toFixed(0).padStart(7)} req/s   p99 ${String(result.latency.p99).padStart(5)} ms   errors ${errors}`);
+  return result;
+}
+
+async function main() {
+  if (args.includes("--serve-bare")) return serveBare(Number(option("serve-bare", "0")));
+  const given = option("url", "");
+  const next = given ? { base: given.replace(/\/$/, ""), child: null } : await startNext();
+  const bare = await startBareServer();
+  try {
+    const trails = ((await (await fetch(`${next.base}/api/parks/${SLUG}/board`)).json()) as { trails?: unknown[] }).trails?.length ?? 0;
+    console.log(`Board of "${SLUG}" (${trails} trails), ${CONNECTIONS} connections, ${DURATION} s each, on ${new Date().toISOString().slice(0, 10)}`);
+    const bareResult = await measure("bare http + pg", bare.url);
+    const nextResult = await measure("Next.js board API", `${next.base}/api/parks/${SLUG}/board`);
+    const ratio = nextResult.requests.average / bareResult.requests.average;
+    console.log(`ratio (Next.js / bare): ${(ratio * 100).toFixed(0)} % of the bare server's throughput; p99 ${nextResult.latency.p99} ms vs ${bareResult.latency.p99} ms`);
+  } finally {
+    bare.child.kill("SIGTERM");
+    next.child?.kill("SIGTERM");
+  }
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -1,0 +1,107 @@
+/**
+ * The morning sweep: every trail a ranger marked, saved in ONE transaction. Either all of it
+ * is written or none: one invalid trail or one stale revision refuses the whole sweep, and
+ * the refusal lists every trail that needs attention.
+ */
+import { UniqueConstraintError } from "sequelize";
+import type { ZodError } from "zod";
+import { authorize, type Actor } from "@/lib/auth/permissions";
+import { AppError } from "@/lib/errors";
+import { parkLocalDate } from "@/lib/time";
+import { sweepSchema, type SweepInput } from "@/lib/validations/report";
+import { Trail, sequelize, type Park } from "@/models";
+import { closureNoticeHref } from "./notice-link";
+import { reportView, type ReportView } from "./report-view";
+import { currentReportView, saveRevision } from "./write-report";
+
+export type SweepProblem = { trailId: string | null; field: string; message: string };
+export type SweepConflict = { trailId: string; trailName: string; current: ReportView | null };
+export type SweepResult = { date: string; saved: ReportView[]; closureNoticeHref: string | null };
+
+/** Zod issues regrouped per trail: "entries.3.report.reason" → trail 3's reason. */
+function problemsFrom(error: ZodError, body: unknown): SweepProblem[] {
+  const entries = (body as { entries?: { trailId?: unknown }[] })?.entries;
+  return error.issues.map((issue) => {
+    const [head, index, ...rest] = issue.path;
+    if (head === "entries" && typeof index === "number") {
+      const trailId = entries?.[index]?.trailId;
+      return { trailId: typeof trailId === "string" ? trailId : null, field: rest.filter((p) => p !== "report").join(".") || "entry", message: issue.message };
+    }
+    return { trailId: null, field: issue.path.join(".") || "entries", message: issue.message };
+  });
+}
+
+function refuseProblems(problems: SweepProblem[]): never {
+  const trails = new Set(problems.map((p) => p.trailId).filter(Boolean)).size;
+  const message = trails > 0 ? `${trails} trail${trails === 1 ? "" : "s"} need${trails === 1 ? "s" : ""} attention. Nothing was saved.` : `${problems[0].message} Nothing was saved.`;
+  const first = problems[0];
+  throw new AppError(400, message, first.field, { problems });
+}
+
+function refuseConflicts(conflicts: SweepConflict[]): never {
+  if (!conflicts.length) throw new AppError(409, "Another save reached these trails at the same moment. Nothing was saved; reload and save again.", "baseRevision", { conflicts });
+  const names = conflicts.map((c) => c.trailName).join(", ");
+  throw new AppError(409, `Someone else saved ${names} since you opened the sweep. Nothing was saved; check their values and save again.`, "baseRevision", { conflicts });
+}
+
+async function loadTrails(park: Park, input: SweepInput): Promise<Map<string, Trail>> {
+  const ids = input.entries.map((e) => e.trailId);
+  const trails = await Trail.findAll({ where: { id: ids, parkId: park.id, archivedAt: null } });
+  const byId = new Map(trails.map((t) => [t.id, t]));
+  const unknown = input.entries.filter((e) => !byId.has(e.trailId));
+  if (unknown.length) refuseProblems(unknown.map((e) => ({ trailId: e.trailId, field: "trailId", message: "Not a trail of this park." })));
+  return byId;
+}
+
+/** POST /api/parks/{slug}/sweep. */
+export async function saveSweep(actor: Actor | null, park: Park, body: unknown, options: { now?: Date } = {}): Promise<SweepResult> {
+  authorize(actor, "report:write", { parkId: park.id });
+  const parsed = sweepSchema.safeParse(body);
+  if (!parsed.success) refuseProblems(problemsFrom(parsed.error, body));
+  const input = parsed.data;
+  const now = options.now ?? new Date();
+  const date = parkLocalDate(now, park.timeZone);
+  if (input.date && input.date !== date) {
+    throw new AppError(409, `The sweep was for ${input.date}, but it is now ${date} at the park. Reload to start today's sweep; nothing was saved.`, "date");
+  }
+  const trails = await loadTrails(park, input);
+  // A fixed locking order (by trail id) so two overlapping sweeps cannot deadlock.
+  const entries = [...input.entries].sort((a, b) => a.trailId.localeCompare(b.trailId));
+
+  let saved: ReportView[];
+  try {
+    saved = await sequelize.transaction(async (transaction) => {
+      const reports: ReportView[] = [];
+      const conflicts: SweepConflict[] = [];
+      const problems: SweepProblem[] = [];
+      for (const entry of entries) {
+        const trail = trails.get(entry.trailId)!;
+        const values = entry.unchanged ? ("unchanged" as const) : entry.report!;
+        try {
+          const result = await saveRevision({ trail, park, actorId: actor.id, date, baseRevision: entry.baseRevision, values, now }, transaction);
+          if (result.ok) reports.push(reportView(result.report));
+          else conflicts.push({ trailId: trail.id, trailName: trail.name, current: result.current });
+        } catch (error) {
+          if (!(error instanceof AppError)) throw error;
+          problems.push({ trailId: trail.id, field: error.field ?? "entry", message: error.message });
+        }
+      }
+      // Throwing inside the callback rolls every revision of this sweep back.
+      if (conflicts.length) refuseConflicts(conflicts);
+      if (problems.length) refuseProblems(problems);
+      return reports;
+    });
+  } catch (error) {
+    if (!(error instanceof UniqueConstraintError)) throw error;
+    // Another writer inserted a first revision at the same moment: report who is now ahead.
+    const conflicts: SweepConflict[] = [];
+    for (const entry of entries) {
+      const current = await currentReportView(entry.trailId, date);
+      if ((current?.revision ?? 0) !== entry.baseRevision) conflicts.push({ trailId: entry.trailId, trailName: trails.get(entry.trailId)!.name, current });
+    }
+    refuseConflicts(conflicts);
+  }
+
+  const closed = saved.filter((r) => r.status === "closed").map((r) => ({ id: r.trailId, name: trails.get(r.trailId)!.name, reason: r.reason }));
+  return { date, saved, closureNoticeHref: closed.length ? closureNoticeHref(park.slug, park.name, closed) : null };
+}
