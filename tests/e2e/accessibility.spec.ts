@@ -16,6 +16,7 @@ const PAGES: Visit[] = [
   { path: `/trails/${TRAIL}/history` },
   { path: "/staff/harrow-ridge/sweep", as: "ranger" },
   { path: "/staff/harrow-ridge/activity", as: "ranger" },
+  { path: "/staff/harrow-ridge/hazards", as: "ranger" },
   { path: `/trails/${TRAIL}` },
   { path: "/staff/harrow-ridge/trails/new", as: "manager" },
   { path: `/staff/harrow-ridge/trails/${TRAIL}/edit`, as: "manager" },
