@@ -11,41 +11,18 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import http from "node:http";
-import type { AddressInfo } from "node:net";
 import autocannon from "autocannon";
 import pg from "pg";
 import { BOARD_SQL } from "@/lib/data/board-sql";
 import { env } from "@/lib/env";
+import { freePort, option as optionIn, startNext, stopChild, waitFor } from "./lib/processes";
+import { emitResult } from "./lib/result";
 
 const args = process.argv.slice(2);
-const option = (name: string, fallback: string) => {
-  const i = args.indexOf(`--${name}`);
-  return i >= 0 && args[i + 1] ? args[i + 1] : fallback;
-};
+const option = (name: string, fallback: string) => optionIn(args, name, fallback);
 const SLUG = option("slug", "harrow-ridge");
 const DURATION = Number(option("duration", "10"));
 const CONNECTIONS = Number(option("connections", "10"));
-
-async function freePort(): Promise<number> {
-  const server = http.createServer();
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const { port } = server.address() as AddressInfo;
-  await new Promise((resolve) => server.close(resolve));
-  return port;
-}
-
-async function waitFor(url: string, timeoutMs = 60_000) {
-  const start = Date.now();
-  while (Date.now() - start < timeoutMs) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
-}
 
 /** The bare server: one pool, the same SQL and parameters, rows straight to JSON. Runs in its own process. */
 async function serveBare(port: number) {
@@ -70,14 +47,6 @@ async function startBareServer(): Promise<{ url: string; child: ChildProcess }> 
   return { url, child };
 }
 
-async function startNext(): Promise<{ base: string; child: ChildProcess }> {
-  const port = await freePort();
-  const child = spawn("node_modules/.bin/next", ["start", "-H", "127.0.0.1", "-p", String(port)], { stdio: "ignore", env: process.env });
-  const base = `http://127.0.0.1:${port}`;
-  await waitFor(`${base}/api/health`);
-  return { base, child };
-}
-
 async function measure(label: string, url: string) {
   await autocannon({ url, connections: 2, duration: 2 }); // warm-up
   const result = await autocannon({ url, connections: CONNECTIONS, duration: DURATION });
@@ -98,9 +67,15 @@ async function main() {
     const nextResult = await measure("Next.js board API", `${next.base}/api/parks/${SLUG}/board`);
     const ratio = nextResult.requests.average / bareResult.requests.average;
     console.log(`ratio (Next.js / bare): ${(ratio * 100).toFixed(0)} % of the bare server's throughput; p99 ${nextResult.latency.p99} ms vs ${bareResult.latency.p99} ms`);
+    const failures = nextResult.errors + nextResult.non2xx + bareResult.errors + bareResult.non2xx;
+    if (failures > 0) throw new Error(`${failures} failed requests: the figures above do not measure the board`);
+    emitResult([
+      { benchmark: "board API vs bare Node http + pg: throughput", ours: nextResult.requests.average, bare: bareResult.requests.average, unit: "req/s" },
+      { benchmark: "board API vs bare Node http + pg: p99 latency", ours: nextResult.latency.p99, bare: bareResult.latency.p99, unit: "ms" },
+    ]);
   } finally {
-    bare.child.kill("SIGTERM");
-    next.child?.kill("SIGTERM");
+    await stopChild(bare.child);
+    await stopChild(next.child);
   }
 }
 

@@ -19,6 +19,7 @@ import { trailLabelPoints } from "@/lib/map/trail-labels";
 import { simplifyLine } from "@/lib/trails";
 import { seededRandom, synthesizeTrail } from "@/lib/trails/synthetic";
 import { difficultyValues } from "@/lib/validations/trail";
+import { emitResult } from "./lib/result";
 
 const COUNTS = [10, 300];
 const ROUNDS = Number(process.argv[2] ?? 5);
@@ -140,6 +141,7 @@ async function main() {
   }
   const [small, large] = COUNTS.map((n) => median(results.get(n)!.created));
   console.log(`ratio ${COUNTS[1]} / ${COUNTS[0]} trails (map created → idle): ${(large / small).toFixed(2)}×`);
+  emitResult([{ benchmark: `map idle: ${COUNTS[1]} trails vs ${COUNTS[0]} (map created → idle, median of ${ROUNDS})`, ours: large, bare: small, unit: "ms" }]);
 }
 
 main().catch((error) => {

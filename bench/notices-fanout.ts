@@ -19,6 +19,7 @@ import { subscriptionLinks, unsubscribeToken } from "@/lib/notices/link-tokens";
 import { createNoticeTransport, socketWithoutDelay } from "@/lib/notices/notice-transport";
 import { sendNotice } from "@/lib/notices/send-notice";
 import { Notice, NoticeDelivery, Park, ParkMembership, Subscription, User, sequelize } from "@/models";
+import { emitResult } from "./lib/result";
 
 const SUBSCRIBERS = Number(process.env.BENCH_SUBSCRIBERS ?? 10_000);
 const CONNECTIONS = 4;
@@ -122,6 +123,16 @@ async function main() {
   console.log(`queueing (notice + ${SUBSCRIBERS} deliveries in one transaction): ${queueTimes.map((t) => `${t.toFixed(0)} ms`).join(", ")}`);
   console.table(rows.map((r) => ({ sender: r.label, messages: r.messages, seconds: +r.seconds.toFixed(2), "msg/s": Math.round(r.messages / r.seconds), duplicates: r.duplicates, lost: r.lost })));
   console.log("delivery rows by state:", JSON.stringify(states));
+  const [plain, nagleOff, worker, twoWorkers] = rows;
+  const rate = (r: Row) => r.messages / r.seconds;
+  const total = (rs: Row[], key: "duplicates" | "lost") => rs.reduce((sum, r) => sum + r[key], 0);
+  emitResult([
+    { benchmark: `notice to ${SUBSCRIBERS.toLocaleString("en-US")} subscribers: worker vs bare pooled nodemailer`, ours: rate(worker), bare: rate(plain), unit: "msg/s" },
+    { benchmark: "notice fan-out: worker vs bare pooled nodemailer, Nagle off", ours: rate(worker), bare: rate(nagleOff), unit: "msg/s" },
+    { benchmark: "notice fan-out: two workers vs bare pooled nodemailer", ours: rate(twoWorkers), bare: rate(plain), unit: "msg/s" },
+    { benchmark: "notice fan-out: duplicates (workers vs bare, all runs)", ours: total([worker, twoWorkers], "duplicates"), bare: total([plain, nagleOff], "duplicates"), unit: "messages" },
+    { benchmark: "notice fan-out: losses (workers vs bare, all runs)", ours: total([worker, twoWorkers], "lost"), bare: total([plain, nagleOff], "lost"), unit: "messages" },
+  ]);
 
   await Park.destroy({ where: { id: park.id } });
   await User.destroy({ where: { email: { [Op.like]: `${TAG}-%` } } });

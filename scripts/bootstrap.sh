@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Shared first steps of `npm start`, `npm run dev` and `npm test` (sourced).
-# Installs what is missing, prepares secrets and exports the environment for PURPOSE (dev|test).
+# Installs what is missing, prepares secrets and exports the environment for PURPOSE (dev|test|bench).
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export NEXT_TELEMETRY_DISABLED=1
@@ -37,7 +37,7 @@ ensure_secrets() {
   . .local/secrets.env
 }
 
-# load_env PURPOSE: defaults for dev or test; anything already set (or in .env) wins.
+# load_env PURPOSE: defaults for dev, test or bench; anything already set (or in .env) wins.
 load_env() {
   local purpose="$1"
   if [ -f .env ]; then set -a; . ./.env; set +a; fi
@@ -47,6 +47,9 @@ load_env() {
   local off=${LOAMCAST_PORT_OFFSET:-0}
   if [ "$purpose" = "test" ]; then
     pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}
+  elif [ "$purpose" = "bench" ]; then
+    # Its own cluster and database, so `npm run bench` never meets a test run's data (or its pg_stop).
+    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=${BENCH_PORT:-$((3200 + off))}
   else
     pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}
   fi
