@@ -11,7 +11,7 @@
  * Run with the database up and the app built (`npm start` does both), e.g.
  *   npx tsx bench/page-js.ts --url http://localhost:3000   # against the running app
  *   npx tsx bench/page-js.ts                               # starts `next start` itself on a free port
- * Options: --slug harrow-ridge --loads 2.
+ * Options: --slug harrow-ridge --loads 2 --list (print each script).
  */
 import { chromium, type Browser } from "playwright-core";
 import { ensureBareNextBuilt } from "./lib/bare-next";
@@ -22,6 +22,7 @@ const args = process.argv.slice(2);
 const option = (name: string, fallback: string) => optionIn(args, name, fallback);
 const SLUG = option("slug", "harrow-ridge");
 const LOADS = Number(option("loads", "2"));
+const LIST = args.includes("--list");
 
 type Load = { scripts: number; wireBytes: number; decodedBytes: number; encodings: Set<string> };
 
@@ -29,15 +30,15 @@ type Load = { scripts: number; wireBytes: number; decodedBytes: number; encoding
 async function firstLoad(browser: Browser, url: string): Promise<Load> {
   const context = await browser.newContext({ viewport: { width: 412, height: 915 }, deviceScaleFactor: 1 });
   const page = await context.newPage();
-  const pending: Promise<{ wire: number; decoded: number; encoding: string }>[] = [];
+  const pending: Promise<{ url: string; wire: number; decoded: number; encoding: string }>[] = [];
   page.on("requestfinished", (request) => {
     pending.push(
       (async () => {
         const response = await request.response();
         const type = response?.headers()["content-type"] ?? "";
-        if (!response || !/javascript/.test(type)) return { wire: -1, decoded: 0, encoding: "" };
+        if (!response || !/javascript/.test(type)) return { url: request.url(), wire: -1, decoded: 0, encoding: "" };
         const [sizes, body] = await Promise.all([request.sizes(), response.body()]);
-        return { wire: sizes.responseBodySize, decoded: body.length, encoding: response.headers()["content-encoding"] ?? "identity" };
+        return { url: request.url(), wire: sizes.responseBodySize, decoded: body.length, encoding: response.headers()["content-encoding"] ?? "identity" };
       })(),
     );
   });
@@ -46,6 +47,7 @@ async function firstLoad(browser: Browser, url: string): Promise<Load> {
     if (!response?.ok()) throw new Error(`${url} answered ${response?.status()}`);
     await page.waitForLoadState("networkidle", { timeout: 30_000 });
     const scripts = (await Promise.all(pending)).filter((s) => s.wire >= 0);
+    if (LIST) for (const s of scripts) console.log(`  ${String(s.wire).padStart(7)} B wire ${String(s.decoded).padStart(7)} B decoded  ${s.encoding.padEnd(8)} ${new URL(s.url).pathname}`);
     return {
       scripts: scripts.length,
       wireBytes: scripts.reduce((sum, s) => sum + s.wire, 0),
