@@ -49,7 +49,7 @@ load_env() {
     pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}
   elif [ "$purpose" = "bench" ]; then
     # Its own cluster and database, so `npm run bench` never meets a test run's data (or its pg_stop).
-    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=${BENCH_PORT:-$((3200 + off))}
+    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off))
   else
     pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}
   fi
