@@ -23,6 +23,8 @@ pg_start test "$PG_PORT" "$PG_PASSWORD" || exit 1
 # Photos first: the demo seed writes its hazard photos into the fresh folder.
 rm -rf "$PHOTO_STORAGE_DIR"
 node_modules/.bin/tsx scripts/db.ts fresh || exit 1
+INTEGRATION_DATABASE_URL="${DATABASE_URL%/*}/loamcast_integration"
+DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/tsx scripts/db.ts fresh || exit 1
 start_fake_smtp
 rm -rf .local/test-results && mkdir -p .local/test-results
 
@@ -35,7 +37,8 @@ run_step() {
 
 run_step typecheck node_modules/.bin/tsc --noEmit
 run_step unit node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile=.local/test-results/unit.json
-run_step integration node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile=.local/test-results/integration.json
+# Integration tests get a database of their own, so what they create never shows in the browser tests.
+run_step integration env DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile=.local/test-results/integration.json
 run_step build node_modules/.bin/next build
 if [ "${RESULT[build]}" = pass ]; then
   run_step browser node_modules/.bin/playwright test

@@ -3,8 +3,9 @@
  * current. Optimistic locking: the client names the revision it started from, and the
  * current row is read with SELECT … FOR UPDATE inside the transaction, so of two writers
  * starting from the same revision exactly one wins. When no row exists yet there is nothing
- * to lock; the unique indexes on (trail, date, revision) and "one current per (trail, date)"
- * then refuse the second insert.
+ * to lock, so writers of one trail and date first take a transaction-scoped advisory lock;
+ * the unique indexes on (trail, date, revision) and "one current per (trail, date)" stay as
+ * the last line of defence.
  */
 import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
@@ -44,6 +45,9 @@ export async function currentReportView(trailId: string, date: string): Promise<
 /** One revision inside the caller's transaction. A stale base revision is returned, not thrown, so a sweep can list them all. */
 export async function saveRevision(request: RevisionRequest, transaction: Transaction): Promise<RevisionResult> {
   const { trail, park, date, now } = request;
+  // Writers of one trail and date take turns, so even the first save of the day (no row to
+  // lock yet) cannot race: the second writer sees the first one's revision and gets a 409.
+  await sequelize.query("SELECT pg_advisory_xact_lock(hashtextextended($1, 0))", { bind: [`trail-report:${trail.id}:${date}`], transaction });
   const current = await TrailReport.findOne({ where: currentWhere(trail.id, date), lock: transaction.LOCK.UPDATE, transaction });
   if ((current?.revision ?? 0) !== request.baseRevision) {
     // The locked read can come back empty when another writer moved isCurrent meanwhile: read again.
