@@ -1,9 +1,8 @@
 /**
  * Telling "the database is away" (a restart, a failover, the network) from every other error.
- * Pure: no connection is opened here. Checked by name and SQLSTATE rather than instanceof, so it
- * holds for errors from another copy of the driver too.
+ * Pure and import-free: form-state.ts, which client components import, uses it too. Checked by
+ * name and SQLSTATE rather than instanceof, so it also holds for another copy of the driver.
  */
-import { ConnectionRefusedError, ConnectionTimedOutError, HostNotReachableError } from "sequelize";
 
 /** Sequelize's ConnectionError and its subclasses: the connection could not be opened or acquired. */
 const CONNECTION_ERROR_NAMES = new Set([
@@ -39,16 +38,3 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   const message = e.parent?.message ?? e.message;
   return typeof message === "string" && DROPPED_CONNECTION.test(message);
 }
-
-/**
- * Which failed queries Sequelize may try again (its `retry.match`): only those that never reached
- * the server, because the connection could not be opened. A query that did reach it may have
- * done its work; inside a transaction a retry would only hide the first error behind "current
- * transaction is aborted". (A `retry` option without `match` retries every error.)
- */
-export const RETRY_WHEN_NOT_SENT: (typeof ConnectionRefusedError | RegExp)[] = [
-  ConnectionRefusedError,
-  ConnectionTimedOutError,
-  HostNotReachableError,
-  /the database system is (starting up|shutting down|in recovery mode)/,
-];

@@ -1,6 +1,5 @@
 import pg from "pg";
-import { Sequelize, type Options } from "sequelize";
-import { RETRY_WHEN_NOT_SENT } from "./db-errors";
+import { ConnectionRefusedError, ConnectionTimedOutError, HostNotReachableError, Sequelize, type Options } from "sequelize";
 import { env } from "./env";
 
 /**
@@ -19,6 +18,14 @@ const asConfig = (url: string) => {
     database: u.pathname.slice(1),
   };
 };
+
+/**
+ * Which failed queries Sequelize may try again (its `retry.match`): only those that never reached
+ * the server, because the connection could not be opened. A query that did reach it may have
+ * done its work, and inside a transaction a retry would only hide the first error behind "current
+ * transaction is aborted". (A `retry` option without `match` retries every error.)
+ */
+export const RETRY_WHEN_NOT_SENT = [ConnectionRefusedError, ConnectionTimedOutError, HostNotReachableError, /the database system is (starting up|shutting down|in recovery mode)/];
 
 export const replicaUrlsFrom = (list: string | undefined) => (list ?? "").split(",").map((s) => s.trim()).filter(Boolean);
 
