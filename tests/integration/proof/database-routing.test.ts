@@ -58,7 +58,7 @@ describe("read replicas through Sequelize's replication option", () => {
   });
 });
 
-describe("retries (lib/db-errors.ts RETRY_WHEN_NOT_SENT)", () => {
+describe("retries (RETRY_WHEN_NOT_SENT in lib/db.ts)", () => {
   const counting = () => {
     const tries: string[] = [];
     return { tries, retry: { max: 3, report: (message: string) => void (message.startsWith("Trying") && tries.push(message)) } };
