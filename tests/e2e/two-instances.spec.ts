@@ -28,6 +28,13 @@ test("a report posted through instance A is on instance B's board, and A's sessi
   // B reads the same database: its API and its board page show the report.
   const onB = await trailOf(await anonymousB.get(`/api/parks/${PARK}/board`), "Cedar Skip");
   expect(onB).toMatchObject({ note, status: "open", revision: before.revision + 1 });
+  // Photos live behind the storage interface, here one folder both instances share.
+  const board = await (await anonymousB.get(`/api/parks/${PARK}/board`)).json();
+  const photoId = [...board.trails, { hazards: board.parkHazards }].flatMap((t: { hazards: { photoIds: string[] }[] }) => t.hazards.flatMap((h) => h.photoIds))[0];
+  const photo = await anonymousB.get(`/api/photos/${photoId}?size=thumb`);
+  expect(photo.status()).toBe(200);
+  expect(photo.headers()["content-type"]).toBe("image/jpeg");
+
   const visitor = await browser.newContext({ ...test.info().project.use, baseURL: B });
   const boardOnB = await visitor.newPage();
   await boardOnB.goto(`/parks/${PARK}`);
