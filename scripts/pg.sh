@@ -65,7 +65,7 @@ pg_start() {
 }
 
 pg_stop() {
-  local dir; dir="$(pg_cluster_dir "$1")"
+  local dir; pg_ensure_installed; dir="$(pg_cluster_dir "$1")"
   [ -f "$dir/data/postmaster.pid" ] && pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w stop >/dev/null 2>&1 || true
 }
 
