@@ -1,5 +1,5 @@
 "use client";
-import { useId, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 
 /**
  * A file picker that also takes a dropped file. The input stays a real, labelled file input,
@@ -15,6 +15,17 @@ export function FileDrop({ label, hint, accept, onFile, disabled, testId }: {
 }) {
   const id = useId();
   const [over, setOver] = useState(false);
+  const input = useRef<HTMLInputElement>(null);
+  // A file chosen before the page finished loading fired its change event before React listened
+  // (seen on a slow phone): take it up once we are ready instead of ignoring it.
+  useEffect(() => {
+    const early = input.current?.files?.[0];
+    if (early && !disabled) {
+      onFile(early);
+      input.current!.value = "";
+    }
+    // Only on mount: later choices arrive through onChange.
+  }, []);
   return (
     <div
       onDragOver={(e) => {
@@ -33,6 +44,7 @@ export function FileDrop({ label, hint, accept, onFile, disabled, testId }: {
       <label htmlFor={id} className="block cursor-pointer font-semibold">{label}</label>
       <p id={`${id}-hint`} className="mt-1 text-sm text-loam-600">{hint}</p>
       <input
+        ref={input}
         id={id}
         type="file"
         accept={accept}

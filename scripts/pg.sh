@@ -65,12 +65,21 @@ pg_start() {
 }
 
 pg_stop() {
-  local dir; dir="$(pg_cluster_dir "$1")"
+  local dir; pg_ensure_installed; dir="$(pg_cluster_dir "$1")"
   [ -f "$dir/data/postmaster.pid" ] && pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w stop >/dev/null 2>&1 || true
 }
 
-# pg_restart_fast NAME: used by fault tests.
+# pg_restart NAME [SECONDS_DOWN]: a fast restart (open sessions are terminated), used by the fault
+# test (tests/integration/proof/postgres-restart.test.ts). With SECONDS_DOWN the server stays
+# stopped that long before it starts again (PG_PORT and PG_PASSWORD from load_env). Either way
+# the server keeps logging to its file, so the caller's pipes are not held open by it.
 pg_restart() {
-  local dir; dir="$(pg_cluster_dir "$1")"
-  pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w restart >/dev/null
+  local name="$1" down="${2:-0}" dir; pg_ensure_installed; dir="$(pg_cluster_dir "$name")"
+  if [ "$down" = 0 ]; then
+    pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -l "$dir/server.log" -m fast -w -t 30 restart >/dev/null
+  else
+    pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w -t 30 stop >/dev/null
+    sleep "$down"
+    pg_start "$name" "$PG_PORT" "$PG_PASSWORD" >/dev/null
+  fi
 }

@@ -6,6 +6,9 @@ import type { TrailMapProperties } from "@/lib/validations/map";
 import { DifficultySymbol } from "./difficulty-symbol";
 import { StatusBadge } from "./status-swatch";
 
+/** The list item starts with the hazard's kind, which the map data words in lower case. */
+const sentenceCase = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
 /**
  * Everything the map shows, as text: each trail with its status, and the open hazards. Rendered
  * on the server, so it reads with a screen reader, a keyboard, or before the map has loaded.
@@ -18,7 +21,8 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
       <ul className="divide-y divide-loam-200 rounded-xl border border-loam-200 bg-white">
         {trails.map((t) => (
           <li key={t.id} className="flex flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2" data-trail-row={t.id}>
-            <Link href={`/trails/${t.id}`} className="min-w-40 flex-1 font-semibold text-loam-900 underline-offset-2 hover:underline">
+            {/* On a phone the name takes its own line, so difficulty and status always sit together below it. */}
+            <Link href={`/trails/${t.id}`} className="basis-full font-semibold text-loam-900 underline-offset-2 hover:underline sm:min-w-40 sm:flex-1 sm:basis-auto">
               {t.name}
             </Link>
             <DifficultySymbol difficulty={t.difficulty} label="visible" />
@@ -37,7 +41,7 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
         <ul className="list-disc space-y-1 pl-5">
           {hazards.map((h) => (
             <li key={h.id}>
-              <strong>{h.kindLabel}</strong>
+              <strong>{sentenceCase(h.kindLabel)}</strong>
               {h.trailId && trailNames.get(h.trailId) ? ` on ${trailNames.get(h.trailId)}` : ""}
               {h.note ? `: ${h.note}` : ""} <span className="text-sm text-loam-600">(pinned {formatParkTime(h.reportedAt, timeZone)})</span>
             </li>

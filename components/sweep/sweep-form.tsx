@@ -101,7 +101,7 @@ export function SweepForm({ parkSlug, start }: { parkSlug: string; start: SweepS
           <SweepTrailCard key={trail.id} trail={trail} draft={drafts[trail.id]} onChange={(d) => setDraft(trail.id, d)} message={messages[trail.id]} />
         ))}
       </ul>
-      <div className="sticky bottom-0 -mx-4 border-t border-loam-200 bg-loam-50/95 px-4 py-3">
+      <div className="sticky bottom-0 -mx-4 border-t border-loam-200 bg-loam-50/95 px-4 py-3" data-sticky-bottom>
         <button type="submit" className="btn-primary w-full text-lg" disabled={pending}>
           {pending ? "Saving…" : `Save ${marked.length} trail${marked.length === 1 ? "" : "s"}`}
         </button>

@@ -1,4 +1,5 @@
 import { ZodError } from "zod";
+import { isDatabaseUnavailable } from "@/lib/db-errors";
 import { AppError } from "@/lib/errors";
 
 /** What every form's server action returns to `useActionState`. */
@@ -27,6 +28,10 @@ function describeError(error: unknown): FormState {
     const fieldErrors: Record<string, string> = {};
     for (const issue of error.issues) fieldErrors[issue.path.join(".") || "form"] ??= issue.message;
     return { ok: false, message: "Check the highlighted fields.", fieldErrors };
+  }
+  if (isDatabaseUnavailable(error)) {
+    console.error("[action] database unavailable:", (error as Error).message);
+    return { ok: false, message: "The service is briefly unavailable. Nothing was saved; try again in a moment." };
   }
   console.error("[action] unexpected error:", error);
   return { ok: false, message: "Something went wrong on our side. Nothing was saved." };

@@ -1,4 +1,5 @@
 import { ZodError } from "zod";
+import { isDatabaseUnavailable } from "@/lib/db-errors";
 import { AppError } from "@/lib/errors";
 
 export type ErrorBody = { error: { message: string; field?: string; details?: unknown } };
@@ -17,10 +18,9 @@ export function errorResponse(error: unknown): Response {
   if (error instanceof SyntaxError) {
     return Response.json({ error: { message: "The request body is not valid JSON." } } satisfies ErrorBody, { status: 400 });
   }
-  const name = (error as { name?: string })?.name ?? "";
-  if (name.startsWith("SequelizeConnection") || name === "ConnectionError") {
+  if (isDatabaseUnavailable(error)) {
     console.error("[api] database unavailable:", (error as Error).message);
-    return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } }, { status: 503 });
+    return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } } satisfies ErrorBody, { status: 503, headers: { "retry-after": "5" } });
   }
   console.error("[api] unexpected error:", error);
   return Response.json({ error: { message: "Something went wrong on our side." } } satisfies ErrorBody, { status: 500 });

@@ -17,6 +17,8 @@ export async function getActor(): Promise<Actor | null> {
 export async function loadActor(userId: string): Promise<Actor | null> {
   const user = await User.findByPk(userId, {
     include: [{ model: ParkMembership, as: "memberships", attributes: ["parkId", "role"] }],
+    // From the primary, so a role change or a disabled account counts from the next request.
+    useMaster: true,
   });
   if (!user || user.disabledAt) return null;
   const memberships = ((user as unknown as { memberships?: ParkMembership[] }).memberships ?? []).map((m) => ({

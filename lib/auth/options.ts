@@ -36,7 +36,7 @@ export const authOptions: NextAuthOptions = {
           await AuditEvent.create({ parkId: null, actorId: null, action: "auth.sign-in.throttled", subjectType: "email", subjectId: null, data: { ip } });
           throw new Error("Too many failed attempts. Wait 15 minutes and try again.");
         }
-        const user = await User.findOne({ where: { email } });
+        const user = await User.findOne({ where: { email }, useMaster: true }); // an account made a moment ago
         const ok = Boolean(user && !user.disabledAt && (await verifyPassword(password, user.passwordHash)));
         await recordSignIn(email, ip, ok);
         await AuditEvent.create({

@@ -12,8 +12,9 @@ export const MAX_FAILURES_PER_ADDRESS = 30;
 export async function signInBlocked(email: string, ip: string): Promise<boolean> {
   const since = new Date(Date.now() - SIGN_IN_WINDOW_MINUTES * 60_000);
   const [pair, address] = await Promise.all([
-    SignInAttempt.count({ where: { email, ip, succeeded: false, attemptedAt: { [Op.gte]: since } } }),
-    SignInAttempt.count({ where: { ip, succeeded: false, attemptedAt: { [Op.gte]: since } } }),
+    // From the primary: a replica a moment behind would miss the latest failures.
+    SignInAttempt.count({ where: { email, ip, succeeded: false, attemptedAt: { [Op.gte]: since } }, useMaster: true }),
+    SignInAttempt.count({ where: { ip, succeeded: false, attemptedAt: { [Op.gte]: since } }, useMaster: true }),
   ]);
   return pair >= MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS || address >= MAX_FAILURES_PER_ADDRESS;
 }

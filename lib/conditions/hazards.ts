@@ -93,7 +93,8 @@ export async function createHazard(
 /** PATCH /api/hazards/{id}: resolve, reopen or edit, refused with 409 if someone changed it meanwhile. */
 export async function updateHazard(actor: Actor | null, hazardId: string, body: unknown, options: { now?: Date } = {}): Promise<HazardView> {
   if (!/^[0-9a-f-]{36}$/i.test(hazardId)) throw notFound("Hazard not found.");
-  const hazard = await Hazard.findByPk(hazardId);
+  // Its lockVersion decides the write: read it from the primary (README, Scaling out).
+  const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
   if (!hazard) throw notFound("Hazard not found.");
   authorize(actor, "hazard:write", { parkId: hazard.parkId });
   const patch = hazardPatchSchema.parse(body);
@@ -116,7 +117,7 @@ export async function updateHazard(actor: Actor | null, hazardId: string, body: 
     });
   } catch (error) {
     if (error instanceof OptimisticLockError) {
-      await hazard.reload();
+      await hazard.reload({ useMaster: true });
       throw stale();
     }
     throw error;

@@ -37,8 +37,9 @@ export function latestBefore(trailId: string, date: string, transaction?: Transa
   });
 }
 
+/** Read after losing a race to another writer: from the primary, which has that writer's commit. */
 export async function currentReportView(trailId: string, date: string): Promise<ReportView | null> {
-  const row = await TrailReport.findOne({ where: currentWhere(trailId, date) });
+  const row = await TrailReport.findOne({ where: currentWhere(trailId, date), useMaster: true });
   return row ? reportView(row) : null;
 }
 

@@ -47,7 +47,8 @@ export async function moveHazard(actor: Actor | null, hazardId: string, body: un
   if (!actor) throw unauthorized();
   const to = moveHazardSchema.parse(body);
   if (!isUuid(hazardId)) throw notFound("Hazard not found.");
-  const hazard = await Hazard.findByPk(hazardId);
+  // Its lockVersion decides the write: read it from the primary (README, Scaling out).
+  const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
   if (!hazard) throw notFound("Hazard not found.");
   authorize(actor, "hazard:write", { parkId: hazard.parkId });
   if (hazard.resolvedAt) throw conflict("This hazard has been resolved; it can no longer be moved.");

@@ -77,7 +77,8 @@ export function composeNoticeEmail(input: NoticeEmailInput) {
 
   const e = escapeHtml;
   const html = `<!doctype html>
-<html lang="en"><body style="font-family:system-ui,sans-serif;color:#221c16;max-width:560px">
+<html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"></head>
+<body style="font-family:system-ui,sans-serif;color:#221c16;max-width:560px;margin:0 auto;padding:16px;line-height:1.5">
 <h1 style="font-size:20px">${e(subject)}</h1>
 <p style="white-space:pre-line">${e(message)}</p>
 ${until ? `<p><strong>Closed until:</strong> ${e(until)}</p>` : ""}

@@ -42,7 +42,9 @@ async function loadContexts(noticeIds: string[]): Promise<Map<string, NoticeCont
   const missing = noticeIds.filter((id) => !contextCache.has(id));
   if (missing.length > 0) {
     if (contextCache.size > 1000) contextCache.clear();
-    const notices = await Notice.findAll({ where: { id: missing }, include: [{ model: Park, as: "park" }] });
+    // From the primary: the web app may have committed the notice a moment ago, and a notice not
+    // found here fails its deliveries for good.
+    const notices = await Notice.findAll({ where: { id: missing }, include: [{ model: Park, as: "park" }], useMaster: true });
     for (const notice of notices) contextCache.set(notice.id, { notice, park: (notice as Notice & { park: Park }).park });
   }
   return new Map(noticeIds.flatMap((id) => (contextCache.has(id) ? [[id, contextCache.get(id)!] as const] : [])));

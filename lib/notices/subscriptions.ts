@@ -37,7 +37,7 @@ export async function saveSubscription(actor: Actor | null, input: unknown) {
     const found = await Trail.count({ where: { id: fields.trailIds, parkId: park.id, archivedAt: null } });
     if (found !== fields.trailIds.length) throw new AppError(422, "Choose trails of this park.", "trailIds");
   }
-  const existing = await Subscription.findOne({ where: { userId: actor.id, parkId: park.id } });
+  const existing = await Subscription.findOne({ where: { userId: actor.id, parkId: park.id }, useMaster: true });
   const needsConfirmation = !existing?.confirmedAt || existing.email !== actor.email;
   const values = {
     email: actor.email,
@@ -97,7 +97,7 @@ function tokenText(token: unknown, what: string): string {
 export async function confirmSubscription(token: unknown) {
   const payload = readConfirmToken(tokenText(token, "confirmation"));
   if (!payload) throw invalidLink("confirmation");
-  const sub = await Subscription.findByPk(payload.subscriptionId, { include: [{ model: Park, as: "park", attributes: ["slug", "name"] }] });
+  const sub = await Subscription.findByPk(payload.subscriptionId, { include: [{ model: Park, as: "park", attributes: ["slug", "name"] }], useMaster: true });
   // The link confirms the address it was sent to, and only while the rider still wants the mail.
   if (!sub || sub.email !== payload.email || sub.unsubscribedAt) throw invalidLink("confirmation");
   if (!sub.confirmedAt) await sub.update({ confirmedAt: new Date() });
@@ -109,7 +109,7 @@ async function subscriptionForUnsubscribe(token: unknown) {
   if (!payload) throw invalidLink("unsubscribe");
   const park = await Park.findByPk(payload.parkId, { attributes: ["id", "slug", "name"] });
   if (!park) throw invalidLink("unsubscribe");
-  const sub = await Subscription.findOne({ where: { userId: payload.userId, parkId: park.id } });
+  const sub = await Subscription.findOne({ where: { userId: payload.userId, parkId: park.id }, useMaster: true });
   return { park, sub };
 }
 

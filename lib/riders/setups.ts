@@ -33,7 +33,7 @@ export async function updateSetup(actor: Actor | null, id: unknown, raw: unknown
   try {
     await setup.update(columns(merged));
   } catch (error) {
-    if (error instanceof OptimisticLockError) throw staleSetup((await Setup.findByPk(setup.id))?.lockVersion ?? lockVersion + 1);
+    if (error instanceof OptimisticLockError) throw staleSetup((await Setup.findByPk(setup.id, { useMaster: true }))?.lockVersion ?? lockVersion + 1);
     throw error;
   }
   return setupView(setup);

@@ -38,6 +38,7 @@ export async function findOpenInvitation(token: string) {
   const invitation = await Invitation.findOne({
     where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
     include: [{ model: Park, as: "park", attributes: ["name", "slug"] }],
+    useMaster: true, // the link is often opened seconds after it was sent
   });
   return invitation as (Invitation & { park?: Park }) | null;
 }
@@ -50,7 +51,7 @@ export async function acceptInvitation(input: unknown) {
   const fields = acceptInvitationFields.parse(input);
   const invitation = await findOpenInvitation(fields.token);
   if (!invitation) throw new AppError(400, "This invitation link is not valid any more. Ask your manager for a new one.", "token");
-  const existing = await User.findOne({ where: { email: invitation.email } });
+  const existing = await User.findOne({ where: { email: invitation.email }, useMaster: true });
   let passwordHash: string | null = null;
   if (!existing) {
     const password = passwordSchema.safeParse(fields.password);

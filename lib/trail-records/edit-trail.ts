@@ -37,7 +37,7 @@ export async function updateTrailMetadata(actor: Actor | null, trailId: string, 
   } catch (error) {
     // Only reachable if a writer slipped past the row lock; answer the same way.
     if (error instanceof OptimisticLockError) {
-      const fresh = await Trail.findByPk(trailId);
+      const fresh = await Trail.findByPk(trailId, { useMaster: true });
       throw new AppError(409, "Someone else changed this trail since you opened it. Check the values and save again.", undefined, { current: fresh ? currentValues(fresh) : null });
     }
     throw error;

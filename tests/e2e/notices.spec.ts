@@ -2,6 +2,7 @@ import { execFile } from "node:child_process";
 import { promisify } from "node:util";
 import { expect, request as apiRequest, test } from "@playwright/test";
 import { demo, shot, signInAs } from "./helpers";
+import { linkIn, mailTo, readable } from "./mail-helpers";
 
 /**
  * A rider subscribes and confirms by the e-mailed link; a ranger sends a closure from the staff
@@ -13,16 +14,6 @@ import { demo, shot, signInAs } from "./helpers";
  */
 const run = promisify(execFile);
 const PASSWORD = "switchback-dawn-patrol-8";
-
-type Captured = { to: string[]; raw: string };
-async function mailTo(address: string): Promise<Captured[]> {
-  const response = await fetch(`${process.env.FAKE_SMTP_CONTROL_URL}/messages`);
-  return ((await response.json()) as { messages: Captured[] }).messages.filter((m) => m.to.includes(address));
-}
-/** Quoted-printable (RFC 2045 §6.7) undone, headers unfolded (RFC 5322 §2.2.3). */
-const readable = (raw: string) =>
-  raw.replace(/=\r?\n/g, "").replace(/=([0-9A-F]{2})/g, (_, h: string) => String.fromCharCode(parseInt(h, 16))).replace(/\r\n[ \t]+/g, " ");
-const linkIn = (raw: string, path: string) => new RegExp(`https?://[^\\s"<>]+${path.replace(/[/?]/g, "\\$&")}\\?token=[A-Za-z0-9._%-]+`).exec(readable(raw))?.[0] ?? null;
 
 test("a rider subscribes and confirms, staff send a closure, the rider's e-mail arrives and unsubscribes in one click", async ({ page, browser, baseURL }) => {
   test.setTimeout(120_000);

@@ -21,7 +21,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">Join {invitation.park?.name}</h1>
       <p>
-        You were invited as <strong>{invitation.role}</strong> with the address <strong>{invitation.email}</strong>.
+        You were invited as <strong>{invitation.role}</strong> with the address <strong className="[overflow-wrap:anywhere]">{invitation.email}</strong>.
         {existing > 0 && " You already have an account: after joining, sign in with your usual password."}
       </p>
       <AcceptInvitationForm token={token} needsPassword={existing === 0} />

@@ -24,9 +24,13 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
         <h2 className="mb-2 text-lg font-bold">Team</h2>
         <ul className="divide-y divide-loam-100">
           {staff.map((member) => (
-            <li key={member.userId} className="flex justify-between py-2">
-              <span>{member.name} <span className="text-sm text-loam-600">{member.email}</span></span>
-              <span className="font-semibold">{member.role}</span>
+            <li key={member.userId} className="flex items-start justify-between gap-3 py-2">
+              {/* Name over address: a long address wraps on its own line instead of splitting at a hyphen beside the name. */}
+              <span className="min-w-0">
+                <span className="block">{member.name}</span>
+                <span className="block text-sm text-loam-600 [overflow-wrap:anywhere]">{member.email}</span>
+              </span>
+              <span className="shrink-0 font-semibold">{member.role}</span>
             </li>
           ))}
         </ul>
