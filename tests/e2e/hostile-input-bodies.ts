@@ -40,6 +40,12 @@ export const BODY_CASES: HostileCase[] = [
   { name: "prototype pollution: constructor.prototype", as: "parkRanger", method: "POST", path: REPORTS, raw: { body: '{"status":"open","constructor":{"prototype":{"siteRole":"admin"}}}', type: "application/json" }, expect: 400 },
   { name: "prototype pollution: a __proto__ form field", as: "parkRanger", method: "POST", path: () => "/api/parks/harrow-ridge/hazards", multipart: () => formOf({ ...hazardFields, ["__proto__"]: "x" }), expect: 400 },
 
+  // Another park's trail, named through a route of one's own park.
+  { name: "another park's trail in a hazard pin", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/hazards", multipart: (t) => ({ kind: "other", trailId: t.demoTrailId, distanceAlongM: "10" }), expect: 422, field: "trailId" },
+  { name: "another park's trail in a notice", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/notices", json: (t) => ({ ...notice, trailIds: [t.demoTrailId] }), expect: 422, field: "trailIds" },
+  { name: "another park's trail in a sweep", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/sweep", json: (t) => ({ entries: [{ trailId: t.demoTrailId, report: { status: "closed", reason: "Taken over" } }] }), expect: 400, field: "trailId" },
+  { name: "another park's trail in a ride log", as: "rider", method: "POST", path: () => "/api/me/ride-logs", json: (t) => rideLog(t, { parkSlug: "cinder-hollow", trailIds: [t.demoTrailId] }), expect: 422, field: "trailIds" },
+
   // Numbers out of range.
   { name: "a negative rider mass", as: "rider", method: "POST", path: SETUPS, json: () => ({ ...valid, riderMassKg: -80 }), expect: 400, field: "riderMassKg" },
   { name: "a tyre maximum of 10,000 psi", as: "rider", method: "POST", path: SETUPS, json: () => ({ ...valid, front: { ...valid.front, maxKpa: 68_948 } }), expect: 400, field: "front.maxKpa" },

@@ -37,24 +37,28 @@ test.afterAll(async ({}, testInfo) => {
   for (const context of Object.values(as ?? {})) await context.dispose();
 });
 
-/** Everything a hostile request could have written shows in one of these listings. */
+/** Everything a hostile request could have written shows in one of these listings (both parks). */
+const LISTINGS: [Caller, string][] = [
+  ["anonymous", "/api/parks/harrow-ridge/board"],
+  ["anonymous", "/api/parks/cinder-hollow/board"],
+  ["anonymous", "/api/parks/harrow-ridge/trails"],
+  ["anonymous", "/api/parks/harrow-ridge/hazards.geojson"],
+  ["anonymous", "/api/parks/harrow-ridge/features.geojson"],
+  ["manager", "/api/parks/harrow-ridge/notices"],
+  ["otherParkRanger", "/api/parks/cinder-hollow/notices"],
+  ["rider", "/api/me/setups"],
+  ["rider", "/api/me/ride-logs"],
+  ["rider", "/api/me/subscriptions"],
+];
+
 async function listings() {
-  const read = async (caller: Caller, path: string) => {
+  const read = async ([caller, path]: [Caller, string]) => {
     const response = await as[caller].get(path);
-    return response.ok() ? response.json() : response.status();
+    if (!response.ok()) return response.status();
+    const body = await response.json();
+    return path.endsWith("/board") ? { ...body, generatedAt: null } : body;
   };
-  const [board, ...rest] = await Promise.all([
-    read("anonymous", "/api/parks/harrow-ridge/board"),
-    read("anonymous", "/api/parks/harrow-ridge/trails"),
-    read("anonymous", "/api/parks/harrow-ridge/hazards.geojson"),
-    read("anonymous", "/api/parks/harrow-ridge/features.geojson"),
-    read("manager", `/api/trails/${targets.trailId}`),
-    read("manager", "/api/parks/harrow-ridge/notices"),
-    read("rider", "/api/me/setups"),
-    read("rider", "/api/me/ride-logs"),
-    read("rider", "/api/me/subscriptions"),
-  ]);
-  return { board: { ...board, generatedAt: null }, rest };
+  return Promise.all([...LISTINGS.map(read), read(["manager", `/api/trails/${targets.trailId}`])]);
 }
 
 function send(c: HostileCase, multipart: unknown): Promise<APIResponse> {
