@@ -2,8 +2,8 @@ import { ZodError } from "zod";
 import { isDatabaseUnavailable } from "@/lib/db-errors";
 import { AppError } from "@/lib/errors";
 
-/** What every form's server action returns to `useActionState`. */
-export type FormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string>; values?: Record<string, string> };
+/** What every form's server action returns to `useActionState`; `status` is the HTTP status a route would have answered. */
+export type FormState = { ok: boolean; status?: number; message?: string; fieldErrors?: Record<string, string>; values?: Record<string, string> };
 export const initialFormState: FormState = { ok: false };
 
 /** Turns a refusal into per-field messages; anything unexpected becomes a generic message. */
@@ -22,17 +22,17 @@ function echoValues(form: FormData): Record<string, string> {
 
 function describeError(error: unknown): FormState {
   if (error instanceof AppError) {
-    return { ok: false, message: error.message, fieldErrors: error.field ? { [error.field]: error.message } : undefined };
+    return { ok: false, status: error.status, message: error.message, fieldErrors: error.field ? { [error.field]: error.message } : undefined };
   }
   if (error instanceof ZodError) {
     const fieldErrors: Record<string, string> = {};
     for (const issue of error.issues) fieldErrors[issue.path.join(".") || "form"] ??= issue.message;
-    return { ok: false, message: "Check the highlighted fields.", fieldErrors };
+    return { ok: false, status: 400, message: "Check the highlighted fields.", fieldErrors };
   }
   if (isDatabaseUnavailable(error)) {
     console.error("[action] database unavailable:", (error as Error).message);
     return { ok: false, message: "The service is briefly unavailable. Nothing was saved; try again in a moment." };
   }
   console.error("[action] unexpected error:", error);
-  return { ok: false, message: "Something went wrong on our side. Nothing was saved." };
+  return { ok: false, status: 500, message: "Something went wrong on our side. Nothing was saved." };
 }

@@ -50,9 +50,34 @@ export async function readJson(request: Request, maxBytes = 1_000_000): Promise<
   if (!type.includes("application/json")) throw new AppError(415, "Send the body as application/json.");
   const text = await request.text();
   if (text.length > maxBytes) throw new AppError(413, `The body is larger than ${maxBytes} bytes.`);
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError(400, "The request body is not valid JSON.");
   }
+  const where = pathOfNul(value);
+  if (where !== null) throw new AppError(400, "Text may not contain the NUL character (\\u0000).", where || undefined);
+  return value;
+}
+
+/**
+ * Where a U+0000 hides in a parsed body (a key or a string), or null. PostgreSQL cannot store it
+ * in text or jsonb, so it is refused here for every JSON route at once. Iterative: a deeply
+ * nested body cannot exhaust the stack.
+ */
+function pathOfNul(root: unknown): string | null {
+  const stack: { value: unknown; path: string }[] = [{ value: root, path: "" }];
+  while (stack.length > 0) {
+    const { value, path } = stack.pop()!;
+    if (typeof value === "string") {
+      if (value.includes("\u0000")) return path;
+    } else if (value !== null && typeof value === "object") {
+      for (const [key, child] of Object.entries(value)) {
+        if (key.includes("\u0000")) return path;
+        stack.push({ value: child, path: path ? `${path}.${key}` : key });
+      }
+    }
+  }
+  return null;
 }

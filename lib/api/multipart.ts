@@ -34,11 +34,12 @@ export async function readMultipart(request: Request, maxBytes: number): Promise
   } catch {
     throw new AppError(400, "The form could not be read.");
   }
-  const fields: Record<string, string> = {};
+  // No prototype: a field named "__proto__" or "constructor" is just an unknown field, refused by the schema.
+  const fields: Record<string, string> = Object.create(null);
   const files: MultipartBody["files"] = [];
   for (const [field, value] of form.entries()) {
     if (typeof value === "string") {
-      if (field in fields) throw new AppError(400, `The field ${field} was sent twice.`, field);
+      if (Object.hasOwn(fields, field)) throw new AppError(400, `The field ${field} was sent twice.`, field);
       fields[field] = value;
     } else if (value.size > 0 || value.name) {
       files.push({ field, name: value.name, bytes: Buffer.from(await value.arrayBuffer()) });

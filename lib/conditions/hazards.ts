@@ -2,6 +2,7 @@
 import { OptimisticLockError } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
 import { AppError, notFound } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import { PHOTO_LIMITS } from "@/lib/photos/limits";
 import { processPhoto, type PhotoUpload, type ProcessedPhoto } from "@/lib/photos/process-photo";
 import { deleteStored, storeHazardPhotos } from "@/lib/photos/store-photos";
@@ -92,7 +93,7 @@ export async function createHazard(
 
 /** PATCH /api/hazards/{id}: resolve, reopen or edit, refused with 409 if someone changed it meanwhile. */
 export async function updateHazard(actor: Actor | null, hazardId: string, body: unknown, options: { now?: Date } = {}): Promise<HazardView> {
-  if (!/^[0-9a-f-]{36}$/i.test(hazardId)) throw notFound("Hazard not found.");
+  if (!isUuid(hazardId)) throw notFound("Hazard not found.");
   // Its lockVersion decides the write: read it from the primary (README, Scaling out).
   const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
   if (!hazard) throw notFound("Hazard not found.");

@@ -10,6 +10,7 @@
 import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
 import { AppError, notFound } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import { parkLocalDate } from "@/lib/time";
 import { reportPostSchema, type ReportInput } from "@/lib/validations/report";
 import { AuditEvent, Park, Trail, TrailReport, sequelize } from "@/models";
@@ -88,7 +89,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
 }
 
 export async function loadTrailWithPark(trailId: string): Promise<{ trail: Trail; park: Park }> {
-  if (!/^[0-9a-f-]{36}$/i.test(trailId)) throw notFound("Trail not found.");
+  if (!isUuid(trailId)) throw notFound("Trail not found.");
   const trail = await Trail.findOne({ where: { id: trailId, archivedAt: null }, include: [{ model: Park, as: "park" }] });
   if (!trail) throw notFound("Trail not found.");
   return { trail, park: (trail as Trail & { park: Park }).park };

@@ -1,6 +1,7 @@
 import { QueryTypes } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import type { DeliveryState } from "@/models/notice-delivery";
 import { Notice, NoticeDelivery, Park, Trail, sequelize } from "@/models";
 
@@ -43,7 +44,7 @@ export async function listParkNotices(actor: Actor | null, parkId: string, limit
 }
 
 export async function getNotice(actor: Actor | null, noticeId: string) {
-  const notice = /^[0-9a-f-]{36}$/i.test(noticeId) ? await Notice.findByPk(noticeId, { include: [{ model: Park, as: "park" }] }) : null;
+  const notice = isUuid(noticeId) ? await Notice.findByPk(noticeId, { include: [{ model: Park, as: "park" }] }) : null;
   if (!notice) throw new AppError(404, "Notice not found.");
   authorize(actor, "notice:read", { parkId: notice.parkId });
   const park = (notice as Notice & { park: Park }).park;

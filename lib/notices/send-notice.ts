@@ -2,6 +2,7 @@ import { Op } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import { noticeFields, type NoticeFields } from "@/lib/validations/notice";
 import { AuditEvent, Notice, Park, Trail, sequelize } from "@/models";
 import { countAudience, queueDeliveries } from "./audience";
@@ -79,7 +80,7 @@ export async function sendNotice(actor: Actor | null, parkId: string, input: unk
 
 /** Staff "retry failed": the notice's failed deliveries go back to the queue with fresh attempts. */
 export async function retryFailedDeliveries(actor: Actor | null, noticeId: string) {
-  const notice = /^[0-9a-f-]{36}$/i.test(noticeId) ? await Notice.findByPk(noticeId) : null;
+  const notice = isUuid(noticeId) ? await Notice.findByPk(noticeId) : null;
   if (!notice) throw new AppError(404, "Notice not found.");
   authorize(actor, "notice:send", { parkId: notice.parkId });
   const requeued = await requeueFailed(notice.id);

@@ -2,6 +2,7 @@ import { UniqueConstraintError } from "sequelize";
 import { authorize, type Actor } from "@/lib/auth/permissions";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import { headerSafe, sendMail } from "@/lib/mail/transport";
 import { linkToken, subscriptionFields } from "@/lib/validations/notice";
 import { Park, Subscription, Trail } from "@/models";
@@ -76,11 +77,11 @@ async function mailConfirmationLink(sub: Subscription, park: Park): Promise<bool
   return true;
 }
 
+/** Someone else's subscription reads exactly like a missing one (404), as setups and ride logs do. */
 export async function removeSubscription(actor: Actor | null, id: string) {
-  if (!actor) throw new AppError(401, "Sign in first.");
-  const sub = /^[0-9a-f-]{36}$/i.test(id) ? await Subscription.findByPk(id) : null;
+  authorize(actor, "own:subscriptions", { ownerId: actor?.id });
+  const sub = isUuid(id) ? await Subscription.findOne({ where: { id, userId: actor.id } }) : null;
   if (!sub) throw new AppError(404, "Subscription not found.");
-  authorize(actor, "own:subscriptions", { ownerId: sub.userId });
   await sub.destroy();
 }
 

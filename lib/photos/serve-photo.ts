@@ -1,4 +1,5 @@
 import { notFound } from "@/lib/errors";
+import { isUuid } from "@/lib/ids";
 import { photoStorage } from "@/lib/storage";
 import { Photo } from "@/models";
 
@@ -7,7 +8,7 @@ import { Photo } from "@/models";
  * type, nosniff, inline with a file name of ours, and a long cache (an id's bytes never change).
  */
 export async function photoResponse(id: string, size: string | null): Promise<Response> {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound("Photo not found.");
+  if (!isUuid(id)) throw notFound("Photo not found.");
   if (size !== null && size !== "full" && size !== "thumb") throw notFound("Photo not found.");
   const photo = await Photo.findByPk(id);
   if (!photo) throw notFound("Photo not found.");

@@ -39,6 +39,18 @@ async function readBodyWithin(request: Request, maxBytes: number): Promise<Uint8
   return body;
 }
 
+const FORM_FIELDS = new Set(["file", "name", "difficulty", "kind", "direction"]);
+
+/** Only the fields we read, each once: an extra field (say "parkId") is refused, never silently dropped. */
+function refuseUnexpectedFields(form: FormData) {
+  const seen = new Set<string>();
+  for (const key of form.keys()) {
+    if (!FORM_FIELDS.has(key)) throw new AppError(400, `The upload form has no field "${key.slice(0, 40)}".`, key.slice(0, 40));
+    if (seen.has(key)) throw new AppError(400, `The field ${key} was sent twice.`, key);
+    seen.add(key);
+  }
+}
+
 /**
  * The checks that cost nothing, in order: who is asking (401/403), multipart at all (415), the
  * declared size before a byte is read (413), then the hourly quota (429). Then the body is read
@@ -61,6 +73,7 @@ export async function receiveTrailUpload(request: Request, actor: Actor | null, 
   } catch {
     throw new AppError(400, "The upload could not be read as a form. Choose the file again and retry.", "file");
   }
+  refuseUnexpectedFields(form);
   const file = form.get("file");
   if (!(file instanceof File) || (file.size === 0 && file.name === "")) throw new AppError(400, "Choose a GPX or GeoJSON file to upload.", "file");
   if (file.size > TRAIL_LIMITS.maxFileBytes) throw tooLarge();

@@ -1,6 +1,7 @@
 /** A ride log as the API takes it: what was run (kPa), how each tyre felt, where and when. */
 import { z } from "zod";
 import { boundedNumber, rideSymptomsSchema, surfaceList, todayRequestSchema } from "./pressure";
+import { noteCheck } from "./text";
 
 /** "Felt fine" cannot sit beside a problem on the same wheel. */
 const symptomsSchema = rideSymptomsSchema.superRefine((s, ctx) => {
@@ -21,7 +22,7 @@ export const rideLogSchema = z.strictObject({
   symptoms: symptomsSchema,
   /** The ground it was ridden on; becomes the baseline's reference if the setup has none yet. */
   surfaces: surfaceList.optional(),
-  note: z.string({ error: "The note must be text." }).trim().max(1000, { error: "Keep the note under 1000 characters." }).optional(),
+  note: z.string({ error: "The note must be text." }).trim().max(1000, { error: "Keep the note under 1000 characters." }).superRefine(noteCheck("The note")).optional(),
 });
 
 export type RideLogInput = z.infer<typeof rideLogSchema>;

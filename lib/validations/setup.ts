@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { ceilingKpa } from "@/lib/pressure/band";
 import { baselineSchema, boundedNumber, pressureRequestSchema, wheelSchema } from "./pressure";
+import { nameCheck } from "./text";
 
 /** Shock stroke, not rear-wheel travel: sag is measured on the shock's shaft. */
 export const SHOCK_STROKE_MM = { min: 20, max: 100 } as const;
@@ -37,7 +38,8 @@ const setupShape = {
     .string({ error: "Give the setup a name." })
     .trim()
     .min(1, { error: "Give the setup a name." })
-    .max(60, { error: "Use at most 60 characters for the name." }),
+    .max(60, { error: "Use at most 60 characters for the name." })
+    .superRefine(nameCheck("The name")),
   riderMassKg: request.riderMassKg,
   bikeMassKg: request.bikeMassKg,
   pace: request.pace,

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { nameCheck } from "./text";
 
 /** The trade's five difficulty grades (circle / square / diamond scale), easiest first. */
 export const difficultyValues = ["easiest", "easy", "intermediate", "difficult", "extreme"] as const;
@@ -9,7 +10,7 @@ export const difficultySchema = z.enum(difficultyValues, { message: "Choose a di
 export const trailKindSchema = z.enum(trailKindValues, { message: "Choose a kind: flow, jump, technical, climb, cross-country or downhill." });
 export const trailDirectionSchema = z.enum(trailDirectionValues, { message: "Choose a direction: downhill, uphill or both." });
 
-export const trailNameSchema = z.string().trim().min(1, "Enter the trail's name.").max(80, "Use at most 80 characters.");
+export const trailNameSchema = z.string().trim().min(1, "Enter the trail's name.").max(80, "Use at most 80 characters.").superRefine(nameCheck("The name"));
 
 /** What staff type about a trail when uploading or editing it. */
 export const trailMetadataSchema = z
@@ -66,7 +67,7 @@ export const featureSizeSchema = z.enum(featureSizeValues, { message: "Choose a 
 const longitude = z.number({ message: "Longitude must be a number." }).min(-180, "Longitude is −180…180.").max(180, "Longitude is −180…180.");
 const latitude = z.number({ message: "Latitude must be a number." }).min(-90, "Latitude is −90…90.").max(90, "Latitude is −90…90.");
 const distanceAlong = z.number({ message: "Distance along the trail must be a number of metres." }).nonnegative("Distance along the trail cannot be negative.");
-const featureName = z.string().trim().max(80, "Use at most 80 characters.").nullable();
+const featureName = z.string().trim().max(80, "Use at most 80 characters.").superRefine(nameCheck("The name")).nullable();
 
 const lonLatTogether = (p: { lon?: number; lat?: number }) => (p.lon === undefined) === (p.lat === undefined);
 const together = { message: "Send longitude and latitude together.", path: ["lat"] };

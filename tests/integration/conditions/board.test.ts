@@ -4,11 +4,23 @@ import { parkLocalInstant } from "@/lib/conditions/park-clock";
 import { clearParkState, setParkState } from "@/lib/conditions/park-state";
 import { postTrailReport } from "@/lib/conditions/write-report";
 import { boardForPark } from "@/lib/data/board";
-import { sequelize } from "@/models";
-import { createTrail, parkWithTrails } from "./fixtures";
+import { Park, sequelize } from "@/models";
+import { createTrail, parkWithTrails as makeParkWithTrails } from "./fixtures";
 import { solidJpeg } from "./photos";
 
-afterAll(() => sequelize.close());
+// The parks made here are removed at the end: a 40-trail park left behind would become the
+// park with the most trails, which the pressure page offers first to the browser tests.
+const madeParks: string[] = [];
+const parkWithTrails: typeof makeParkWithTrails = async (...args) => {
+  const made = await makeParkWithTrails(...args);
+  madeParks.push(made.park.id);
+  return made;
+};
+
+afterAll(async () => {
+  await Park.destroy({ where: { id: madeParks } });
+  await sequelize.close();
+});
 
 const ZONE = "America/Los_Angeles";
 const at = (date: string, time: string) => parkLocalInstant(date, time, ZONE);

@@ -1,0 +1,213 @@
+import { CALLERS, CALLER_EMAIL, type Caller } from "./api-callers";
+import { bikeFields, gpxFile, MatrixFixtures, OTHER_PARK, PARK, setupBody, unique } from "./authorization-matrix-fixtures";
+import type { Method } from "../inventory";
+
+/**
+ * Every route handler method × every caller, with the answer each must get. Adding a route under
+ * app/api means adding its row here: tests/e2e/authorization-matrix.spec.ts reads the routes from
+ * app/ and fails for a method without a row (and for a row whose route is gone).
+ *
+ * "2xx" accepts any success; otherwise the exact status. Rows run in this order, callers in
+ * CALLERS order; `call` builds the request for one caller (fresh objects where a call uses one up).
+ */
+export type Expect = number | "2xx";
+export type Expectations = Record<Caller, Expect>;
+type FilePart = { name: string; mimeType: string; buffer: Buffer };
+export type Call = { path: string; data?: unknown; multipart?: Record<string, string | FilePart>; form?: Record<string, string> };
+export type MatrixRow = {
+  method: Method;
+  route: string;
+  variant?: string;
+  expect: Expectations;
+  call: (fx: MatrixFixtures, caller: Caller) => Call | Promise<Call>;
+  /** Keeps what an allowed call created, so it is removed at the end. */
+  made?: (fx: MatrixFixtures, caller: Caller, body: any) => void; // eslint-disable-line @typescript-eslint/no-explicit-any
+  /** Why this state-changing route does not check the Origin (it is then left out of the cross-site check). */
+  crossSiteExempt?: string;
+};
+
+const everyone = (status: Expect) => Object.fromEntries(CALLERS.map((c) => [c, status])) as Expectations;
+/** Any signed-in caller, on their own things. */
+const signedIn = (ok: Expect): Expectations => ({ ...everyone(ok), anonymous: 401 });
+/** rider@'s own object: everyone else gets 404, exactly as for a missing id (admins too: it is private). */
+const ownerOnly = (ok: Expect): Expectations => ({ ...everyone(404), anonymous: 401, rider: ok });
+/** Rangers and managers of the park, and admins. */
+const parkStaff = (ok: Expect): Expectations => ({ anonymous: 401, rider: 403, otherRider: 403, parkRanger: ok, otherParkRanger: 403, manager: ok, admin: ok });
+const parkManagers = (ok: Expect): Expectations => ({ ...parkStaff(ok), parkRanger: 403 });
+const adminOnly = (ok: Expect): Expectations => ({ ...everyone(403), anonymous: 401, admin: ok });
+/** An archived trail: its park's staff still see it; to anyone else it does not exist. */
+const archivedTrail = (ok: Expect): Expectations => ({ ...everyone(404), parkRanger: ok, manager: ok, admin: ok });
+
+const NOTICE = (fx: MatrixFixtures) => ({ kind: "advisory", trailIds: [fx.trailId], message: "Matrix check: an advisory for the matrix trail." });
+const DAY = 86_400_000;
+const FORGED_TOKEN = "forged.forged.forged.forged";
+
+export const MATRIX: MatrixRow[] = [
+  // Public reads.
+  { method: "GET", route: "/api/health", expect: everyone(200), call: () => ({ path: "/api/health" }) },
+  { method: "GET", route: "/api/parks", expect: everyone(200), call: () => ({ path: "/api/parks" }) },
+  { method: "GET", route: "/api/parks/[parkSlug]", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/board", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/board` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/trails", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/trails` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/trails.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/trails.geojson` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/trail-labels.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/trail-labels.geojson` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/features.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/features.geojson` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/hazards.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/hazards.geojson` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/park-layers.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/park-layers.geojson` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/map-style.json", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/map-style.json` }) },
+  { method: "GET", route: "/api/photos/[id]", expect: everyone(200), call: (fx) => ({ path: `/api/photos/${fx.photoId}?size=thumb` }) },
+  { method: "GET", route: "/api/trails/[id]", expect: everyone(200), call: (fx) => ({ path: `/api/trails/${fx.demoTrailId}` }) },
+  { method: "GET", route: "/api/trails/[id]", variant: "archived", expect: archivedTrail(200), call: (fx) => ({ path: `/api/trails/${fx.archivedTrailId}` }) },
+  { method: "GET", route: "/api/trails/[id]/download", expect: everyone(200), call: (fx) => ({ path: `/api/trails/${fx.demoTrailId}/download?format=gpx` }) },
+  { method: "GET", route: "/api/trails/[id]/download", variant: "archived", expect: archivedTrail(200), call: (fx) => ({ path: `/api/trails/${fx.archivedTrailId}/download` }) },
+  { method: "GET", route: "/api/trails/[id]/reports", expect: everyone(200), call: (fx) => ({ path: `/api/trails/${fx.demoTrailId}/reports` }) },
+  { method: "GET", route: "/api/trails/[id]/reports", variant: "every revision", expect: parkStaff(200), call: (fx) => ({ path: `/api/trails/${fx.demoTrailId}/reports?revisions=all` }) },
+  { method: "POST", route: "/api/pressure", expect: everyone(200), call: () => ({ path: "/api/pressure", data: { ...bikeFields, today: { parkSlug: PARK } } }) },
+  { method: "POST", route: "/api/pressure", variant: "rider@'s saved setup", expect: ownerOnly(200), call: (fx) => ({ path: "/api/pressure", data: { setupId: fx.setupId } }) },
+
+  // Accounts and next-auth's own endpoints.
+  { method: "POST", route: "/api/account", expect: everyone(201), call: (_fx, c) => ({ path: "/api/account", data: { name: "Matrix Newcomer", email: `${unique(`matrix-${c}`)}@tests.loamcast.test`, password: "switchback-dawn-patrol-8" } }) },
+  { method: "GET", route: "/api/auth/[...nextauth]", expect: everyone(200), call: () => ({ path: "/api/auth/session" }) },
+  {
+    method: "POST",
+    route: "/api/auth/[...nextauth]",
+    variant: "sign-in without the CSRF token",
+    expect: everyone(302),
+    call: () => ({ path: "/api/auth/callback/credentials", form: { email: CALLER_EMAIL.rider, password: "ridgeline-demo-7" } }),
+    crossSiteExempt: "next-auth's endpoints check their own double-submit CSRF token (the row above shows a POST without it refused)",
+  },
+  { method: "GET", route: "/api/dev/mail", expect: adminOnly(200), call: () => ({ path: "/api/dev/mail" }) },
+
+  // Signed links: the token is the authority, a session adds nothing.
+  { method: "GET", route: "/api/subscriptions/confirm", expect: everyone(200), call: (fx) => ({ path: `/api/subscriptions/confirm?token=${encodeURIComponent(fx.confirmToken)}` }) },
+  { method: "GET", route: "/api/unsubscribe", variant: "forged token", expect: everyone(400), call: () => ({ path: `/api/unsubscribe?token=${FORGED_TOKEN}` }) },
+  {
+    method: "POST",
+    route: "/api/unsubscribe",
+    variant: "forged token",
+    expect: everyone(400),
+    call: () => ({ path: `/api/unsubscribe?token=${FORGED_TOKEN}`, form: { "List-Unsubscribe": "One-Click" } }),
+    crossSiteExempt: "RFC 8058 one-click unsubscribe is posted by mail providers from their own servers; the signed token is the authority",
+  },
+
+  // A rider's own things.
+  { method: "GET", route: "/api/me/setups", expect: signedIn(200), call: () => ({ path: "/api/me/setups" }) },
+  { method: "POST", route: "/api/me/setups", expect: signedIn(201), call: () => ({ path: "/api/me/setups", data: setupBody("Matrix own setup") }), made: (fx, c, body) => fx.trackOwn("setup", c, body.setup.id) },
+  { method: "GET", route: "/api/me/setups/[setupId]", expect: ownerOnly(200), call: (fx) => ({ path: `/api/me/setups/${fx.setupId}` }) },
+  {
+    method: "PATCH",
+    route: "/api/me/setups/[setupId]",
+    expect: ownerOnly(200),
+    call: async (fx) => {
+      const setup = await fx.freshSetup();
+      return { path: `/api/me/setups/${setup.id}`, data: { lockVersion: setup.lockVersion, name: "Matrix setup, renamed" } };
+    },
+  },
+  { method: "DELETE", route: "/api/me/setups/[setupId]", expect: ownerOnly(204), call: async (fx) => ({ path: `/api/me/setups/${(await fx.freshSetup()).id}` }) },
+  { method: "GET", route: "/api/me/ride-logs", expect: signedIn(200), call: () => ({ path: "/api/me/ride-logs" }) },
+  { method: "POST", route: "/api/me/ride-logs", expect: ownerOnly(201), call: (fx) => ({ path: "/api/me/ride-logs", data: fx.rideLogBody() }) },
+  { method: "POST", route: "/api/me/ride-logs/[rideLogId]/apply", expect: ownerOnly(200), call: async (fx) => ({ path: `/api/me/ride-logs/${await fx.freshRideLog()}/apply` }) },
+  { method: "GET", route: "/api/me/subscriptions", expect: signedIn(200), call: () => ({ path: "/api/me/subscriptions" }) },
+  {
+    method: "POST",
+    route: "/api/me/subscriptions",
+    expect: signedIn("2xx"),
+    call: () => ({ path: "/api/me/subscriptions", data: { parkSlug: OTHER_PARK, trailIds: null, kinds: ["advisory"] } }),
+    made: (fx, c, body) => fx.trackOwn("subscription", c, body.subscription.id),
+  },
+  { method: "DELETE", route: "/api/me/subscriptions/[subscriptionId]", expect: ownerOnly(204), call: async (fx) => ({ path: `/api/me/subscriptions/${await fx.freshSubscription()}` }) },
+
+  // Trails: staff of the park write.
+  { method: "POST", route: "/api/parks/[parkSlug]/trails/preview", expect: parkStaff(200), call: () => ({ path: `/api/parks/${PARK}/trails/preview`, multipart: { file: gpxFile() } }) },
+  {
+    method: "POST",
+    route: "/api/parks/[parkSlug]/trails",
+    expect: parkStaff(201),
+    call: (_fx, c) => ({ path: `/api/parks/${PARK}/trails`, multipart: { file: gpxFile(), name: `Matrix upload by ${c}` } }),
+    made: (fx, _c, body) => fx.track("trail", body.trail.id),
+  },
+  {
+    method: "PATCH",
+    route: "/api/trails/[id]",
+    expect: parkStaff(200),
+    call: async (fx, c) => ({ path: `/api/trails/${fx.trailId}`, data: { name: `Matrix trail edited by ${c}`, lockVersion: await fx.trailLockVersion() } }),
+  },
+  { method: "DELETE", route: "/api/trails/[id]", expect: parkStaff(200), call: async (fx) => ({ path: `/api/trails/${await fx.freshTrail()}` }) },
+  { method: "POST", route: "/api/trails/[id]/line", expect: parkStaff(200), call: (fx) => ({ path: `/api/trails/${fx.trailId}/line`, multipart: { file: gpxFile() } }) },
+  {
+    method: "POST",
+    route: "/api/trails/[id]/features",
+    expect: parkStaff(201),
+    call: (fx) => ({ path: `/api/trails/${fx.trailId}/features`, data: { kind: "jump", size: "small", distanceAlongM: 60 } }),
+    made: (fx, _c, body) => fx.track("feature", body.feature.id),
+  },
+  { method: "PATCH", route: "/api/trail-features/[id]", expect: parkStaff(200), call: async (fx) => ({ path: `/api/trail-features/${(await fx.freshFeature()).id}`, data: { kind: "drop" } }) },
+  {
+    method: "PATCH",
+    route: "/api/trail-features/[id]/position",
+    expect: parkStaff(200),
+    call: async (fx) => {
+      const feature = await fx.freshFeature();
+      return { path: `/api/trail-features/${feature.id}/position`, data: { lon: feature.lon, lat: feature.lat } };
+    },
+  },
+  { method: "DELETE", route: "/api/trail-features/[id]", expect: parkStaff(204), call: async (fx) => ({ path: `/api/trail-features/${(await fx.freshFeature()).id}` }) },
+
+  // Conditions: reports, sweep, park-wide state, hazards.
+  { method: "POST", route: "/api/trails/[id]/reports", expect: parkStaff(201), call: async (fx) => ({ path: `/api/trails/${fx.trailId}/reports`, data: { status: "open", baseRevision: await fx.currentRevision() } }) },
+  {
+    method: "POST",
+    route: "/api/parks/[parkSlug]/sweep",
+    expect: parkStaff(201),
+    call: async (fx) => ({ path: `/api/parks/${PARK}/sweep`, data: { entries: [{ trailId: fx.trailId, baseRevision: await fx.currentRevision(), report: { status: "open" } }] } }),
+  },
+  {
+    method: "POST",
+    route: "/api/parks/[parkSlug]/state",
+    expect: parkStaff(201),
+    // Starts the day after tomorrow, so the board other tests read is never affected; cleared below and at the end.
+    call: () => ({ path: `/api/parks/${PARK}/state`, data: { state: "advisory", message: "Matrix check", startsAt: new Date(Date.now() + 2 * DAY).toISOString(), endsAt: new Date(Date.now() + 2 * DAY + 3_600_000).toISOString() } }),
+  },
+  { method: "DELETE", route: "/api/parks/[parkSlug]/state", expect: parkStaff(200), call: () => ({ path: `/api/parks/${PARK}/state` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/reports.csv", expect: parkStaff(200), call: () => ({ path: `/api/parks/${PARK}/reports.csv` }) },
+  {
+    method: "POST",
+    route: "/api/parks/[parkSlug]/hazards",
+    expect: parkStaff(201),
+    call: (fx) => ({ path: `/api/parks/${PARK}/hazards`, multipart: { kind: "machinery", note: "Matrix check", lon: String(fx.center.lon), lat: String(fx.center.lat) } }),
+    made: (fx, _c, body) => fx.track("hazard", body.hazard.id),
+  },
+  {
+    method: "POST",
+    route: "/api/trails/[id]/hazards",
+    expect: parkStaff(201),
+    call: (fx) => ({ path: `/api/trails/${fx.trailId}/hazards`, multipart: { kind: "washout", note: "Matrix check", distanceAlongM: "30" } }),
+    made: (fx, _c, body) => fx.track("hazard", body.hazard.id),
+  },
+  {
+    method: "PATCH",
+    route: "/api/hazards/[id]",
+    expect: parkStaff(200),
+    call: async (fx) => {
+      const hazard = await fx.freshHazard();
+      return { path: `/api/hazards/${hazard.id}`, data: { lockVersion: hazard.lockVersion, note: "Matrix check, edited" } };
+    },
+  },
+  {
+    method: "PATCH",
+    route: "/api/hazards/[id]/position",
+    expect: parkStaff(200),
+    call: async (fx) => {
+      const hazard = await fx.freshHazard();
+      return { path: `/api/hazards/${hazard.id}/position`, data: { lon: hazard.lon + 0.0001, lat: hazard.lat, lockVersion: hazard.lockVersion } };
+    },
+  },
+
+  // Staff and notices.
+  { method: "POST", route: "/api/parks/[parkSlug]/invitations", expect: parkManagers(201), call: (_fx, c) => ({ path: `/api/parks/${PARK}/invitations`, data: { email: `${unique(`invitee-${c}`)}@tests.loamcast.test`, role: "ranger" } }) },
+  { method: "POST", route: "/api/parks/[parkSlug]/notices/preview", expect: parkStaff(200), call: (fx) => ({ path: `/api/parks/${PARK}/notices/preview`, data: NOTICE(fx) }) },
+  { method: "POST", route: "/api/parks/[parkSlug]/notices", expect: parkStaff(202), call: (fx) => ({ path: `/api/parks/${PARK}/notices`, data: NOTICE(fx) }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/notices", expect: parkStaff(200), call: () => ({ path: `/api/parks/${PARK}/notices` }) },
+  { method: "GET", route: "/api/notices/[noticeId]", expect: parkStaff(200), call: (fx) => ({ path: `/api/notices/${fx.noticeId}` }) },
+  { method: "POST", route: "/api/notices/[noticeId]/retry", expect: parkStaff(200), call: (fx) => ({ path: `/api/notices/${fx.noticeId}/retry` }) },
+];
