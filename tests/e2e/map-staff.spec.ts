@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { demo, shot, signInAs } from "./helpers";
 import { openMap, PARK } from "./map-helpers";
 
-type Feature = { properties: { id: string; label: string; trailName: string; distanceAlongM: number }; geometry: { coordinates: number[] } };
+type Feature = { properties: { id: string; label: string; trailId: string; trailName: string; distanceAlongM: number }; geometry: { coordinates: number[] } };
 const features = async (request: import("@playwright/test").APIRequestContext): Promise<Feature[]> => (await (await request.get(`/api/parks/${PARK}/features.geojson`)).json()).features;
 const metres = (a: number[], b: number[]) => Math.hypot((a[0] - b[0]) * 111_195 * Math.cos((a[1] * Math.PI) / 180), (a[1] - b[1]) * 111_195);
 
@@ -26,10 +26,21 @@ test("a ranger drags a feature on the staff map, it snaps onto its trail, and Un
   const id = (await pin.getAttribute("data-pin"))!.split(":")[1];
   const original = before.find((f) => f.properties.id === id)!;
 
+  // Drag the pin along its trail (a drag straight across the line would snap back to where it was):
+  // to a vertex of the trail's line about 40 m further on, projected to the screen.
+  const trails = (await (await page.request.get(`/api/parks/${PARK}/trails.geojson`)).json()).features as { properties: { id: string }; geometry: { type: string; coordinates: number[][] | number[][][] } }[];
+  const trail = trails.find((t) => t.properties.id === original.properties.trailId)!;
+  const line = (trail.geometry.type === "LineString" ? trail.geometry.coordinates : (trail.geometry.coordinates as number[][][]).flat()) as number[][];
+  const nearest = line.reduce((best, p, i) => (metres(p, original.geometry.coordinates) < metres(line[best], original.geometry.coordinates) ? i : best), 0);
+  let far = nearest;
+  while (far < line.length - 1 && metres(line[far], line[nearest]) < 40) far++;
+  if (metres(line[far], line[nearest]) < 40) while (far > 0 && metres(line[far], line[nearest]) < 40) far--;
+  const target = await page.evaluate(([lon, lat]) => (window as unknown as { __loamcastMap: { project: (p: [number, number]) => { x: number; y: number } } }).__loamcastMap.project([lon, lat]), line[far] as [number, number]);
+  const canvas = (await page.getByTestId("pin-map").boundingBox())!;
   const box = (await pin.boundingBox())!;
   await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
   await page.mouse.down();
-  await page.mouse.move(box.x + box.width / 2 + 24, box.y + box.height / 2 + 18, { steps: 8 });
+  await page.mouse.move(canvas.x + target.x, canvas.y + target.y, { steps: 8 });
   await page.mouse.up();
   await expect(page.getByTestId("pin-status")).toContainText("snapped onto its trail");
   const moved = (await features(page.request)).find((f) => f.properties.id === id)!;
