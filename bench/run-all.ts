@@ -105,7 +105,7 @@ async function main() {
   }
 
   const minutes = ((Date.now() - started.getTime()) / 60_000).toFixed(1);
-  const header = `${started.toISOString().slice(0, 10)}, ${m.cores} cores (nproc; ${m.model}), ${m.memoryGb} GB, Node ${m.node}${QUICK ? ", --quick" : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
+  const header = `${started.toISOString().slice(0, 10)}, nproc ${m.cores}, CPU ${m.model}, ${m.memoryGb} GB RAM, Node ${m.node}${QUICK ? ", --quick" : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
   console.log(`\nRatios measured in this run (ratio = ours ÷ bare), ${header}\n`);
   console.log(formatTextTable(rows));
   const reportDir = path.join(process.cwd(), ".local/bench");
