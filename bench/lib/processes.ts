@@ -53,13 +53,8 @@ export function spawnTracked(command: string, args: string[], options: SpawnOpti
 }
 
 /** Ctrl-C or SIGTERM ends this process; the exit hook above stops its children. */
-export function exitOnSignal(onSignal?: () => void) {
-  for (const signal of ["SIGINT", "SIGTERM"] as const) {
-    process.once(signal, () => {
-      onSignal?.();
-      process.exit(130);
-    });
-  }
+export function exitOnSignal() {
+  for (const signal of ["SIGINT", "SIGTERM"] as const) process.once(signal, () => process.exit(130));
 }
 
 /** SIGTERM to the child's group, then SIGKILL if the child has not gone within `graceMs`. */
