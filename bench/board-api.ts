@@ -9,13 +9,13 @@
  *   npx tsx bench/board-api.ts                                  # starts `next start` itself on a free port
  * Options: --slug harrow-ridge --duration 10 --connections 10. DATABASE_URL as for the app.
  */
-import { spawn, type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import http from "node:http";
 import autocannon from "autocannon";
 import pg from "pg";
 import { BOARD_SQL } from "@/lib/data/board-sql";
 import { env } from "@/lib/env";
-import { freePort, option as optionIn, startNext, stopChild, waitFor } from "./lib/processes";
+import { exitOnSignal, freePort, option as optionIn, spawnTracked, startNext, stopChild, waitFor } from "./lib/processes";
 import { emitResult } from "./lib/result";
 
 const args = process.argv.slice(2);
@@ -41,7 +41,7 @@ async function serveBare(port: number) {
 
 async function startBareServer(): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();
-  const child = spawn("node_modules/.bin/tsx", ["bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
+  const child = spawnTracked("node_modules/.bin/tsx", ["bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
   const url = `http://127.0.0.1:${port}/`;
   await waitFor(url);
   return { url, child };
@@ -57,6 +57,7 @@ async function measure(label: string, url: string) {
 
 async function main() {
   if (args.includes("--serve-bare")) return serveBare(Number(option("serve-bare", "0")));
+  exitOnSignal();
   const given = option("url", "");
   const next = given ? { base: given.replace(/\/$/, ""), child: null } : await startNext();
   const bare = await startBareServer();

@@ -15,7 +15,7 @@
  */
 import { chromium, type Browser } from "playwright-core";
 import { ensureBareNextBuilt } from "./lib/bare-next";
-import { option as optionIn, startNext, stopChild, type Server } from "./lib/processes";
+import { exitOnSignal, option as optionIn, startNext, stopChild, type Server } from "./lib/processes";
 import { emitResult } from "./lib/result";
 
 const args = process.argv.slice(2);
@@ -73,6 +73,7 @@ async function measure(browser: Browser, label: string, url: string): Promise<Lo
 }
 
 async function main() {
+  exitOnSignal();
   const given = option("url", "");
   const app: Server | { base: string; child: null } = given ? { base: given.replace(/\/$/, ""), child: null } : await startNext();
   let bare: Server | null = null;

@@ -5,11 +5,11 @@
  * prints one table of ratios measured in this run and stops everything it started.
  * --quick shortens every benchmark (fewer rounds, shorter load, fewer subscribers).
  */
-import { spawn, type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { startNext, stopChild, type Server } from "./lib/processes";
+import { exitOnSignal, spawnTracked, startNext, stopChild, type Server } from "./lib/processes";
 import { formatMarkdownTable, formatTextTable, parseResultLines, type BenchRow } from "./lib/result";
 
 const QUICK = process.argv.includes("--quick");
@@ -44,13 +44,13 @@ let running: ChildProcess | null = null;
 /** Runs one benchmark, echoing its output, and returns the rows of its BENCH_RESULT lines. */
 function runBench(bench: Bench, base: string): Promise<BenchRow[]> {
   return new Promise((resolve, reject) => {
-    const child = spawn(path.join(process.cwd(), "node_modules/.bin/tsx"), [path.join("bench", bench.file), ...bench.args(base)], {
+    const child = spawnTracked(path.join(process.cwd(), "node_modules/.bin/tsx"), [path.join("bench", bench.file), ...bench.args(base)], {
       stdio: ["ignore", "pipe", "inherit"],
       env: { ...process.env, ...bench.env, BENCH_JSON: "1" },
     });
     running = child;
     let output = "";
-    child.stdout.on("data", (chunk: Buffer) => {
+    child.stdout?.on("data", (chunk: Buffer) => {
       output += chunk.toString();
       process.stdout.write(chunk);
     });
@@ -83,9 +83,7 @@ async function main() {
     await stopChild(running);
     await stopChild(app?.child);
   };
-  for (const signal of ["SIGINT", "SIGTERM"] as const) {
-    process.once(signal, () => void stopAll().then(() => process.exit(130)));
-  }
+  exitOnSignal(); // the children are stopped by the exit hook in bench/lib/processes.ts
   try {
     app = await startNext();
     console.log(`next start on ${app.base}`);
@@ -105,7 +103,7 @@ async function main() {
   }
 
   const minutes = ((Date.now() - started.getTime()) / 60_000).toFixed(1);
-  const header = `${started.toISOString().slice(0, 10)}, ${m.cores} cores (nproc; ${m.model}), ${m.memoryGb} GB, Node ${m.node}${QUICK ? ", --quick" : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
+  const header = `${started.toISOString().slice(0, 10)}, nproc ${m.cores}, CPU ${m.model}, ${m.memoryGb} GB RAM, Node ${m.node}${QUICK ? ", --quick" : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
   console.log(`\nRatios measured in this run (ratio = ours ÷ bare), ${header}\n`);
   console.log(formatTextTable(rows));
   const reportDir = path.join(process.cwd(), ".local/bench");

@@ -1,4 +1,4 @@
-import { spawn, type ChildProcess } from "node:child_process";
+import { spawn, type ChildProcess, type SpawnOptions } from "node:child_process";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import path from "node:path";
@@ -31,12 +31,38 @@ export async function waitFor(url: string, timeoutMs = 60_000) {
   throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
 }
 
-/** SIGTERM, then SIGKILL if the process has not gone within `graceMs`. */
+// Children started here lead process groups of their own, so stopping one reaches whatever it
+// started in turn (a bare server, `next start`). Whatever is still running when this process
+// exits, by any path, is sent SIGTERM.
+const started = new Set<ChildProcess>();
+const signalGroup = (child: ChildProcess, signal: NodeJS.Signals) => {
+  try {
+    if (child.pid) process.kill(-child.pid, signal);
+  } catch {
+    // already gone
+  }
+};
+process.on("exit", () => started.forEach((child) => signalGroup(child, "SIGTERM")));
+
+/** `spawn` in a process group of its own, stopped with this process at the latest. */
+export function spawnTracked(command: string, args: string[], options: SpawnOptions): ChildProcess {
+  const child = spawn(command, args, { ...options, detached: true });
+  started.add(child);
+  child.once("exit", () => started.delete(child));
+  return child;
+}
+
+/** Ctrl-C or SIGTERM ends this process; the exit hook above stops its children. */
+export function exitOnSignal() {
+  for (const signal of ["SIGINT", "SIGTERM"] as const) process.once(signal, () => process.exit(130));
+}
+
+/** SIGTERM to the child's group, then SIGKILL if the child has not gone within `graceMs`. */
 export async function stopChild(child: ChildProcess | null | undefined, graceMs = 10_000) {
   if (!child || child.exitCode !== null || child.signalCode !== null) return;
   const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
-  child.kill("SIGTERM");
-  const timer = setTimeout(() => child.kill("SIGKILL"), graceMs);
+  signalGroup(child, "SIGTERM");
+  const timer = setTimeout(() => signalGroup(child, "SIGKILL"), graceMs);
   await exited;
   clearTimeout(timer);
 }
@@ -51,7 +77,7 @@ export async function startNext(opts: { dir?: string; readyPath?: string } = {})
   const dir = opts.dir ?? process.cwd();
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
-  const child = spawn(path.join(process.cwd(), "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  const child = spawnTracked(path.join(process.cwd(), "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: dir,
     stdio: "ignore",
     env: { ...process.env, PORT: String(port), APP_URL: base, NEXTAUTH_URL: base },
