@@ -4,10 +4,12 @@
 # because the postgres user may not be able to enter the clone's folder.
 set -euo pipefail
 
+# "return 0", not a bare "return": inside a trap handler (the EXIT cleanup) a bare return gives
+# back the status from before the trap, which read as "not installed".
 pg_bin_dir() {
   local d
-  for d in /usr/lib/postgresql/*/bin; do [ -x "$d/initdb" ] && { echo "$d"; return; }; done
-  command -v initdb >/dev/null 2>&1 && { dirname "$(command -v initdb)"; return; }
+  for d in /usr/lib/postgresql/*/bin; do [ -x "$d/initdb" ] && { echo "$d"; return 0; }; done
+  command -v initdb >/dev/null 2>&1 && { dirname "$(command -v initdb)"; return 0; }
   return 1
 }
 
@@ -65,7 +67,7 @@ pg_start() {
 }
 
 pg_stop() {
-  local dir; pg_ensure_installed; dir="$(pg_cluster_dir "$1")"
+  local dir; [ -n "${PG_BIN:-}" ] || pg_ensure_installed; dir="$(pg_cluster_dir "$1")"
   [ -f "$dir/data/postmaster.pid" ] && pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m fast -w stop >/dev/null 2>&1 || true
 }
 

@@ -54,6 +54,10 @@ for (const visit of PAGES) {
     }
     await page.goto(path);
     await page.waitForLoadState("load");
+    // A map is checked once drawn: MapLibre labels its locate button only after an asynchronous
+    // check that the browser can share a location, and axe must not catch the moment before.
+    const map = page.locator("[data-map-state]");
+    if (await map.count()) await expect(map.first()).not.toHaveAttribute("data-map-state", "loading", { timeout: 30_000 });
     expect(await seriousViolations(page)).toEqual([]);
   });
 }

@@ -28,12 +28,15 @@ test.describe("park map", () => {
 
   test("a tap on a trail opens its card with status, inspection, length and a link", async ({ page }) => {
     const trails = await trailsFromApi(page.request);
-    // The trail whose middle lies furthest from every other trail, so the tap cannot land on another.
+    // Hazard pins sit on top of trails (other tests pin some): keep the tap away from them too.
+    const pins: number[][] = (await (await page.request.get(`/api/parks/${PARK}/hazards.geojson`)).json()).features.map((f: { geometry: { coordinates: number[] } }) => f.geometry.coordinates);
+    // The trail whose middle lies furthest from every other trail and pin, so the tap cannot land on another.
     const lines = (t: TrailFeature) => (t.geometry.type === "LineString" ? [t.geometry.coordinates as number[][]] : (t.geometry.coordinates as number[][][]));
     const middle = (t: TrailFeature) => lines(t)[0][Math.floor(lines(t)[0].length / 2)];
     const gap = (t: TrailFeature) => {
       const m = middle(t);
-      return Math.min(...trails.filter((o) => o !== t).flatMap((o) => lines(o).flat().map((p) => Math.hypot((p[0] - m[0]) * 0.68, p[1] - m[1]))));
+      const others = [...trails.filter((o) => o !== t).flatMap((o) => lines(o).flat()), ...pins];
+      return Math.min(...others.map((p) => Math.hypot((p[0] - m[0]) * 0.68, p[1] - m[1])));
     };
     const target = trails.reduce((best, t) => (gap(t) > gap(best) ? t : best));
 

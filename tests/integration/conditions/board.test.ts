@@ -100,6 +100,9 @@ describe("the conditions board", () => {
     const now = at("2026-12-02", "08:00");
     const smallCount = await countQueries(() => boardForPark(small.park.slug, now));
     const largeCount = await countQueries(async () => expect((await boardForPark(large.park.slug, now))!.trails).toHaveLength(40));
+    // Gone again (with everything on them): a 40-trail park left behind would become the pressure
+    // page's default park ("the one with the most trails") in the browser tests that follow.
+    await Promise.all([small.park.destroy(), large.park.destroy()]);
     expect(smallCount).toBe(1);
     expect(largeCount).toBe(1);
   });

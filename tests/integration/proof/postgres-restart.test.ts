@@ -146,5 +146,6 @@ describe("PostgreSQL restarts under load", () => {
     const last = await postTrailReport(ranger, trails[0].id, { status: "caution", reason: "Checked after the restart", baseRevision: (await boardForPark(park.slug))!.trails.find((t) => t.id === trails[0].id)!.revision });
     const board = await boardForPark(park.slug);
     expect(board!.trails.find((t) => t.id === trails[0].id)).toMatchObject({ status: "caution", reason: "Checked after the restart", revision: last.revision });
+    await park.destroy(); // with its trails and reports
   }, 120_000);
 });
