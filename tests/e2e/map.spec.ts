@@ -38,6 +38,9 @@ test.describe("park map", () => {
     const target = trails.reduce((best, t) => (gap(t) > gap(best) ? t : best));
 
     await openMap(page, `/parks/${PARK}/map`);
+    // Pins are drawn above the lines: a hazard another test pinned near this trail would take the tap.
+    await page.getByRole("checkbox", { name: "Hazard pins" }).uncheck();
+    await page.getByRole("checkbox", { name: "Trail features (berms, jumps, drops)" }).uncheck();
     await page.getByTestId("park-map").scrollIntoViewIfNeeded();
     const point = await screenPoint(page, middle(target));
     await page.mouse.click(point.x, point.y);
