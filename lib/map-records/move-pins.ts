@@ -20,7 +20,7 @@ export async function moveTrailFeature(actor: Actor | null, featureId: string, b
   if (!actor) throw unauthorized();
   const to = moveTrailFeatureSchema.parse(body);
   if (!isUuid(featureId)) throw notFound("Trail feature not found.");
-  const feature = await TrailFeature.findByPk(featureId, { include: [{ model: Trail, as: "trail", attributes: ["id", "parkId", "name", "geometry", "lengthM", "archivedAt"] }] });
+  const feature = await TrailFeature.findByPk(featureId, { include: [{ model: Trail, as: "trail", attributes: ["id", "parkId", "name", "geometry", "archivedAt"] }] });
   const trail = (feature as (TrailFeature & { trail?: Trail }) | null)?.trail;
   if (!feature || !trail || trail.archivedAt) throw notFound("Trail feature not found.");
   authorize(actor, "trail:write", { parkId: trail.parkId });
@@ -29,14 +29,11 @@ export async function moveTrailFeature(actor: Actor | null, featureId: string, b
   if (snapped.offsetM > MAX_SNAP_OFFSET_M) {
     throw new AppError(422, `Drop the feature on its trail: that spot is ${Math.round(snapped.offsetM)} m from ${trail.name} (at most ${MAX_SNAP_OFFSET_M} m).`, "lon");
   }
-  // An undo puts the feature back exactly: where a trail doubles back on itself, snapping its old
-  // spot again could land on the other leg.
-  const placed = to.distanceAlongM === undefined ? snapped : { lon: to.lon, lat: to.lat, distanceAlongM: Math.min(to.distanceAlongM, trail.lengthM) };
-  const previous: Position & { distanceAlongM: number } = { lon: feature.lon, lat: feature.lat, distanceAlongM: feature.distanceAlongM };
+  const previous: Position = { lon: feature.lon, lat: feature.lat };
   await sequelize.transaction(async (transaction) => {
-    await feature.update({ lon: placed.lon, lat: placed.lat, distanceAlongM: placed.distanceAlongM }, { transaction });
+    await feature.update({ lon: snapped.lon, lat: snapped.lat, distanceAlongM: snapped.distanceAlongM }, { transaction });
     await AuditEvent.create(
-      { parkId: trail.parkId, actorId: actor.id, action: "trail-feature.move", subjectType: "trail-feature", subjectId: feature.id, data: { from: previous, to: placed } },
+      { parkId: trail.parkId, actorId: actor.id, action: "trail-feature.move", subjectType: "trail-feature", subjectId: feature.id, data: { from: previous, to: snapped } },
       { transaction },
     );
   });

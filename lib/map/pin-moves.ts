@@ -4,18 +4,16 @@
  */
 export type PinKind = "feature" | "hazard";
 export type Pin = { key: string; kind: PinKind; id: string; lon: number; lat: number; label: string; lockVersion?: number };
-export type PinMoveRequest = { url: string; body: { lon: number; lat: number; lockVersion?: number; distanceAlongM?: number } };
+export type PinMoveRequest = { url: string; body: { lon: number; lat: number; lockVersion?: number } };
 
 /** What the server answered to a move: where the pin now is, and where it was. */
-export type PinMoveResult = { pin: Pin; previous: { lon: number; lat: number; distanceAlongM?: number } };
+export type PinMoveResult = { pin: Pin; previous: { lon: number; lat: number } };
 
 export const pinKey = (kind: PinKind, id: string) => `${kind}:${id}`;
 
-export function moveRequest(pin: Pin, to: { lon: number; lat: number; distanceAlongM?: number }): PinMoveRequest {
+export function moveRequest(pin: Pin, to: { lon: number; lat: number }): PinMoveRequest {
   const url = pin.kind === "hazard" ? `/api/hazards/${encodeURIComponent(pin.id)}/position` : `/api/trail-features/${encodeURIComponent(pin.id)}/position`;
-  return { url, body: pin.kind === "hazard"
-      ? { lon: to.lon, lat: to.lat, lockVersion: pin.lockVersion ?? 0 }
-      : { lon: to.lon, lat: to.lat, ...(to.distanceAlongM === undefined ? {} : { distanceAlongM: to.distanceAlongM }) } };
+  return { url, body: pin.kind === "hazard" ? { lon: to.lon, lat: to.lat, lockVersion: pin.lockVersion ?? 0 } : { lon: to.lon, lat: to.lat } };
 }
 
 /** Undo = move the pin back where it was, at the version the last move produced. */
@@ -23,7 +21,7 @@ export const undoRequest = (last: PinMoveResult): PinMoveRequest => moveRequest(
 
 /** Reads a move's answer into the pin's new state. */
 export function applyMoveAnswer(pin: Pin, answer: unknown): PinMoveResult {
-  const body = answer as { feature?: { lon: number; lat: number }; hazard?: { lon: number; lat: number; lockVersion: number }; previous: { lon: number; lat: number; distanceAlongM?: number } };
+  const body = answer as { feature?: { lon: number; lat: number }; hazard?: { lon: number; lat: number; lockVersion: number }; previous: { lon: number; lat: number } };
   const moved = pin.kind === "hazard" ? body.hazard : body.feature;
   if (!moved || !body.previous) throw new Error("The server's answer did not include the new position.");
   return { pin: { ...pin, lon: moved.lon, lat: moved.lat, ...(body.hazard ? { lockVersion: body.hazard.lockVersion } : {}) }, previous: body.previous };

@@ -9,8 +9,7 @@ export const lonLatSchema = z
   })
   .strict();
 
-/** An undo names the distance along the trail the feature had, so it returns exactly there. */
-export const moveTrailFeatureSchema = lonLatSchema.extend({ distanceAlongM: z.number().finite().nonnegative().optional() }).strict();
+export const moveTrailFeatureSchema = lonLatSchema;
 
 /** A hazard move names the version it was read at, so two rangers never overwrite each other. */
 export const moveHazardSchema = lonLatSchema.extend({ lockVersion: z.number().int().nonnegative() }).strict();
