@@ -26,3 +26,20 @@ export function isValidTimeZone(timeZone: string): boolean {
     return false;
   }
 }
+
+/** How far the park's wall clock is ahead of UTC at `instantMs`, in milliseconds. */
+export function zoneOffsetMs(instantMs: number, timeZone: string): number {
+  const parts = new Intl.DateTimeFormat("en-US", {
+    timeZone,
+    hourCycle: "h23",
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+    hour: "2-digit",
+    minute: "2-digit",
+    second: "2-digit",
+  }).formatToParts(new Date(instantMs));
+  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
+  const wall = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));
+  return wall - Math.floor(instantMs / 1000) * 1000;
+}

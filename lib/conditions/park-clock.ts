@@ -2,21 +2,9 @@
  * The instant a park-local wall-clock time happens: "06:42 on 2026-12-02 at Harrow Ridge".
  * Used by the demo seeder and tests to place reports on the park's own clock.
  */
-function offsetMs(instant: Date, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat("en-US", {
-    timeZone,
-    hourCycle: "h23",
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-    hour: "2-digit",
-    minute: "2-digit",
-    second: "2-digit",
-  }).formatToParts(instant);
-  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
-  const asUtc = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));
-  return asUtc - Math.floor(instant.getTime() / 1000) * 1000;
-}
+import { zoneOffsetMs } from "@/lib/time";
+
+const offsetMs = (instant: Date, timeZone: string) => zoneOffsetMs(instant.getTime(), timeZone);
 
 /**
  * A wall-clock time that happens twice (autumn) resolves to the first; one that does not exist

@@ -2,24 +2,9 @@
  * A form's `datetime-local` value ("2026-06-14T10:00") means that wall-clock time at the
  * park, whatever the browser's or server's zone. These turn it into an instant and back.
  */
-const LOCAL = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/;
+import { zoneOffsetMs } from "@/lib/time";
 
-/** How far the park's wall clock is ahead of UTC at `instantMs`. */
-function zoneOffsetMs(instantMs: number, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat("en-US", {
-    timeZone,
-    hourCycle: "h23",
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-    hour: "2-digit",
-    minute: "2-digit",
-    second: "2-digit",
-  }).formatToParts(new Date(instantMs));
-  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
-  const wall = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));
-  return wall - Math.floor(instantMs / 1000) * 1000;
-}
+const LOCAL = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/;
 
 /** The instant a park-local wall-clock time names, or null when the text is not one. */
 export function parkLocalToInstant(local: string, timeZone: string): Date | null {
