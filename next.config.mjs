@@ -26,7 +26,7 @@ const nextConfig = {
   experimental: {
     serverActions: { bodySizeLimit: "25mb" },
     // proxy.ts runs before API routes and buffers their bodies up to this size, cutting the rest
-    // off silently: keep it above a trail upload (20 MB file + form margin, lib/trails/limits.ts).
+    // off silently: keep it above a trail upload (20 MB file + form margin, lib/trails/pure/limits.ts).
     proxyClientMaxBodySize: "21mb",
   },
 };

@@ -1,5 +1,5 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { contentSecurityPolicy, staticSecurityHeaders } from "@/lib/security-headers";
+import { contentSecurityPolicy, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
  * Runs before every page and API request. Two jobs only:

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { listParks } from "@/lib/data/parks";
+import { listParks } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -1,6 +1,6 @@
 /**
  * Benchmark: the board API (GET /api/parks/{slug}/board) against a bare Node `http` + `pg`
- * server running the same SQL (lib/data/board-sql.ts) on the same database, in the same run.
+ * server running the same SQL (lib/conditions/board-sql.ts) on the same database, in the same run.
  * Each server runs in its own process; autocannon runs here. Prints requests per second,
  * p99 latency and the ratio; asserts nothing.
  *
@@ -13,8 +13,8 @@ import type { ChildProcess } from "node:child_process";
 import http from "node:http";
 import autocannon from "autocannon";
 import pg from "pg";
-import { BOARD_SQL } from "@/lib/data/board-sql";
-import { env } from "@/lib/env";
+import { BOARD_SQL } from "@/lib/conditions/board-sql";
+import { env } from "@/lib/server/env";
 import { exitOnSignal, freePort, option as optionIn, spawnTracked, startNext, stopChild, waitFor } from "./lib/processes";
 import { emitResult } from "./lib/result";
 

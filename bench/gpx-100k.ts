@@ -7,10 +7,10 @@
 import v8 from "node:v8";
 import vm from "node:vm";
 import { DOMParser } from "@xmldom/xmldom";
-import { computeTrailStats, elevationProfile, parseTrailFile, processTrailUpload, simplifyLine, snapFeatures, toGpx } from "@/lib/trails";
-import { METRES_PER_DEGREE } from "@/lib/trails/limits";
-import { seededRandom } from "@/lib/trails/synthetic";
-import type { Position, TrailWaypoint } from "@/lib/trails/types";
+import { computeTrailStats, elevationProfile, parseTrailFile, processTrailUpload, simplifyLine, snapFeatures, toGpx } from "@/lib/trails/pure";
+import { METRES_PER_DEGREE } from "@/lib/trails/pure/limits";
+import { seededRandom } from "@/scripts/demo/synthetic-trails";
+import type { Position, TrailWaypoint } from "@/lib/trails/pure/types";
 import { emitResult } from "./lib/result";
 
 const POINTS = 100_000;

@@ -1,6 +1,6 @@
 /**
  * Benchmark: time for the park map to reach MapLibre's `idle` with 300 trails against 10, in the
- * same run, same browser and same style (lib/map/style.ts). A small local server serves the
+ * same run, same browser and same style (lib/map/pure/style.ts). A small local server serves the
  * MapLibre bundle from node_modules, our font, the style and synthetic trails (lib/trails/synthetic,
  * invented lines) on the same paths the app uses; Chromium (/usr/bin/chromium, SwiftShader WebGL)
  * drives it through playwright-core. Prints figures; asserts nothing.
@@ -11,14 +11,14 @@ import { createServer, type Server } from "node:http";
 import os from "node:os";
 import path from "node:path";
 import { chromium } from "playwright-core";
-import { trailBounds } from "@/lib/map/bounds";
-import { trailsCollection, type TodayReport, type TrailRowForMap } from "@/lib/map/geojson";
-import { parkLayersCollection } from "@/lib/map/park-layers";
-import { buildParkStyle } from "@/lib/map/style";
-import { trailLabelPoints } from "@/lib/map/trail-labels";
-import { simplifyLine } from "@/lib/trails";
-import { seededRandom, synthesizeTrail } from "@/lib/trails/synthetic";
-import { difficultyValues } from "@/lib/validations/trail";
+import { trailBounds } from "@/lib/map/pure/bounds";
+import { trailsCollection, type TodayReport, type TrailRowForMap } from "@/lib/map/pure/geojson";
+import { parkLayersCollection } from "@/lib/map/pure/park-layers";
+import { buildParkStyle } from "@/lib/map/pure/style";
+import { trailLabelPoints } from "@/lib/map/pure/trail-labels";
+import { simplifyLine } from "@/lib/trails/pure";
+import { seededRandom, synthesizeTrail } from "@/scripts/demo/synthetic-trails";
+import { difficultyValues } from "@/lib/trails/pure/schemas";
 import { emitResult } from "./lib/result";
 
 const COUNTS = [10, 300];

@@ -1,4 +1,4 @@
-import { DIFFICULTIES, isDifficulty, type Difficulty } from "@/lib/trails/difficulty";
+import { DIFFICULTIES, isDifficulty, type Difficulty } from "@/lib/trails/pure/difficulty";
 
 const DIAMOND = "M10 1.5 18.5 10 10 18.5 1.5 10Z";
 

@@ -1,6 +1,6 @@
-import { profileChart } from "@/lib/trails/profile-chart";
-import type { ProfilePoint } from "@/lib/trails/profile";
-import type { DistanceSystem } from "@/lib/units";
+import { profileChart } from "@/lib/trails/pure/profile-chart";
+import type { ProfilePoint } from "@/lib/trails/pure/profile";
+import type { DistanceSystem } from "@/lib/shared/units";
 
 /** The elevation profile as inline SVG, drawn wherever it renders (no chart library, no script needed). */
 export function ElevationProfile({ profile, system, id = "profile" }: { profile: ProfilePoint[]; system: DistanceSystem; id?: string }) {

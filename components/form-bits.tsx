@@ -1,4 +1,4 @@
-import type { FormState } from "@/lib/actions/form-state";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** A labelled input with its error announced to screen readers. */
 export function Field(props: { name: string; label: string; type?: string; state?: FormState; autoComplete?: string; required?: boolean; defaultValue?: string; hint?: string }) {

@@ -1,7 +1,7 @@
 import Link from "next/link";
-import { getActor } from "@/lib/auth/actor";
-import { primaryRole } from "@/lib/auth/permissions";
-import { navigationFor } from "@/lib/navigation";
+import { getActor } from "@/lib/server/auth/actor";
+import { primaryRole } from "@/lib/server/auth/permissions";
+import { navigationFor } from "@/lib/server/navigation";
 import { SignOutButton } from "./sign-out-button";
 import { Wordmark } from "./wordmark";
 

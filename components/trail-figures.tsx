@@ -1,5 +1,5 @@
 import { DifficultyBadge } from "@/components/difficulty-badge";
-import { formatDistance, formatGrade, formatHeight, type DistanceSystem } from "@/lib/units";
+import { formatDistance, formatGrade, formatHeight, type DistanceSystem } from "@/lib/shared/units";
 
 export type TrailFigures = {
   lengthM: number;

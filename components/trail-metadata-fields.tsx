@@ -1,5 +1,5 @@
-import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import { difficultyValues, trailDirectionValues, trailKindValues } from "@/lib/validations/trail";
+import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { difficultyValues, trailDirectionValues, trailKindValues } from "@/lib/trails/pure/schemas";
 
 export type MetadataValues = { name: string; difficulty: string; kind: string; direction: string };
 

@@ -1,5 +1,5 @@
 import { DataTypes, type QueryInterface } from "sequelize";
-import { timestamps, uuidId as id } from "@/lib/migration-columns";
+import { timestamps, uuidId as id } from "@/models/migration-columns";
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 import type { ParkRole } from "./park-membership";
 
 export class Invitation extends Model<InferAttributes<Invitation>, InferCreationAttributes<Invitation>> {

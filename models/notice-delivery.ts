@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 export type DeliveryState = "queued" | "sending" | "sent" | "retrying" | "failed";
 

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 /** A park-wide state ("whole park closed: lightning", "opens at 10:00") that overrides trail status while it lasts. */
 export class ParkState extends Model<InferAttributes<ParkState>, InferCreationAttributes<ParkState>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 import type * as GeoJSON from "geojson";
 
 /** Base layers a park owns for its map: boundary, lifts, roads, summit/base points, contours. */

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 /** A hazard photo, re-encoded on upload; the bytes live behind the storage interface. */
 export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes<Photo>> {

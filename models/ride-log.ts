@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 /** What a rider ran and how it felt, with the one suggested baseline change it produced. */
 export class RideLog extends Model<InferAttributes<RideLog>, InferCreationAttributes<RideLog>> {

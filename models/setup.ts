@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
-/** A rider's bike as ridden. Wheel, baseline and suspension parts are validated JSON (lib/validations/pressure.ts). */
+/** A rider's bike as ridden. Wheel, baseline and suspension parts are validated JSON (lib/pressure/pure/schemas.ts). */
 export class Setup extends Model<InferAttributes<Setup>, InferCreationAttributes<Setup>> {
   declare id: CreationOptional<string>;
   declare userId: string;

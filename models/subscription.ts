@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 /** A rider's subscription to a park's notices (all trails when trailIds is null). Double opt-in. */
 export class Subscription extends Model<InferAttributes<Subscription>, InferCreationAttributes<Subscription>> {

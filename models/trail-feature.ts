@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 /** A built feature on a trail (berm, jump, drop…), snapped to the line with its distance along it. */
 export class TrailFeature extends Model<InferAttributes<TrailFeature>, InferCreationAttributes<TrailFeature>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 import type * as GeoJSON from "geojson";
 
 /** Every uploaded line of a trail, with the original file, so a replacement never loses the earlier one. */

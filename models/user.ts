@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
-import { sequelize } from "@/lib/db";
+import { sequelize } from "@/models/db";
 
 export type SiteRole = "admin" | "rider";
 export type UnitPrefs = { pressure?: "psi" | "bar" | "kPa"; mass?: "kg" | "lb"; distance?: "metric" | "imperial" };

@@ -3,8 +3,8 @@
  * prepare = create the database if missing, migrate, seed the demo park if there are no users yet.
  */
 import pg from "pg";
-import { env } from "@/lib/env";
-import { migrator, seeder } from "@/lib/migrator";
+import { env } from "@/lib/server/env";
+import { migrator, seeder } from "@/models/migrator";
 
 async function createDatabaseIfMissing(dropFirst = false) {
   const url = new URL(env().DATABASE_URL);

@@ -1,5 +1,5 @@
 /** Runs the local fake SMTP server: `tsx scripts/fake-smtp.ts` (ports from SMTP_URL and FAKE_SMTP_CONTROL_URL). */
-import { startFakeSmtp } from "@/lib/mail/fake-smtp";
+import { startFakeSmtp } from "@/scripts/fakes/smtp-server";
 
 const smtpPort = Number(new URL(process.env.SMTP_URL ?? "smtp://127.0.0.1:2525").port || 2525);
 const controlPort = Number(new URL(process.env.FAKE_SMTP_CONTROL_URL ?? "http://127.0.0.1:2580").port || 2580);

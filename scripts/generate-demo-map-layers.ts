@@ -1,11 +1,11 @@
 /**
  * Writes the FICTIONAL demo park's contour lines and roads (data/demo-park/contours.geojson and
- * roads.geojson) from park.json, through lib/map/demo-map-layers.ts. Deterministic: running it
+ * roads.geojson) from park.json, through scripts/demo/map-layers.ts. Deterministic: running it
  * again gives the same files. Run: npx tsx scripts/generate-demo-map-layers.ts
  */
 import { readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
-import { demoContours, demoRoads } from "@/lib/map/demo-map-layers";
+import { demoContours, demoRoads } from "@/scripts/demo/map-layers";
 
 const DIR = path.join(process.cwd(), "data", "demo-park");
 const park = JSON.parse(readFileSync(path.join(DIR, "park.json"), "utf8"));

@@ -6,11 +6,11 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { along, destination, length, lineString } from "@turf/turf";
-import { toGeoJson } from "@/lib/trails/export-geojson";
-import { toGpx } from "@/lib/trails/export-gpx";
-import { synthesizeTrail, seededRandom, type SyntheticTrailSpec } from "@/lib/trails/synthetic";
-import type { Position, TrailWaypoint } from "@/lib/trails/types";
-import type { Difficulty, TrailDirection, TrailKind } from "@/lib/validations/trail";
+import { toGeoJson } from "@/lib/trails/pure/export-geojson";
+import { toGpx } from "@/lib/trails/pure/export-gpx";
+import { synthesizeTrail, seededRandom, type SyntheticTrailSpec } from "@/scripts/demo/synthetic-trails";
+import type { Position, TrailWaypoint } from "@/lib/trails/pure/types";
+import type { Difficulty, TrailDirection, TrailKind } from "@/lib/trails/pure/schemas";
 
 const OUT = path.join(process.cwd(), "data", "demo-park");
 const CENTER = { lon: -121.94, lat: 47.3 };

@@ -4,9 +4,9 @@
  */
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { loadActor } from "@/lib/auth/actor";
-import { createTrailFromUpload } from "@/lib/trail-records/save-upload";
-import type { TrailMetadata } from "@/lib/validations/trail";
+import { loadActor } from "@/lib/server/auth/actor";
+import { createTrailFromUpload } from "@/lib/trails/save-upload";
+import type { TrailMetadata } from "@/lib/trails/pure/schemas";
 import { Park, Trail, User } from "@/models";
 
 type DemoTrail = TrailMetadata & { file: string };

@@ -4,13 +4,13 @@
  * resolved hazard. Everything is written through the same lib functions as the API, with
  * `now` set to the moment each ranger posted; photos go through the storage interface.
  */
-import { loadActor } from "@/lib/auth/actor";
-import type { Actor } from "@/lib/auth/permissions";
-import { createHazard, updateHazard } from "@/lib/conditions/hazards";
-import { parkLocalInstant } from "@/lib/conditions/park-clock";
+import { loadActor } from "@/lib/server/auth/actor";
+import type { Actor } from "@/lib/server/auth/permissions";
+import { createHazard, updateHazard } from "@/lib/hazards/hazard-writes";
+import { parkLocalInstant } from "@/lib/shared/park-clock";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { photoStorage } from "@/lib/storage";
-import { parkLocalDate, shiftDate } from "@/lib/time";
+import { photoStorage } from "@/lib/server/storage";
+import { parkLocalDate, shiftDate } from "@/lib/shared/time";
 import { Hazard, Park, ParkState, Photo, Trail, TrailReport, User } from "@/models";
 import { demoPhoto } from "./demo-conditions/photos";
 import { RAINY_DAY_CORRECTION, WEEK, demoReport } from "./demo-conditions/scenario";

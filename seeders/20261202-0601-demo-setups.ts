@@ -3,12 +3,12 @@
  * code as the API so they pass the same checks: a 29" trail bike with a baseline and a
  * mixed-wheel bike without one for rider@, a lighter rider's cross-country bike for rider2@.
  */
-import { loadActor } from "@/lib/auth/actor";
-import { createRideLog } from "@/lib/riders/ride-logs";
-import { createSetup } from "@/lib/riders/setups";
-import { shiftDate } from "@/lib/time";
-import { inToMm, psiToKpa } from "@/lib/units";
-import type { SetupInputRaw } from "@/lib/validations/setup";
+import { loadActor } from "@/lib/server/auth/actor";
+import { createRideLog } from "@/lib/setups/ride-logs";
+import { createSetup } from "@/lib/setups/setup-writes";
+import { shiftDate } from "@/lib/shared/time";
+import { inToMm, psiToKpa } from "@/lib/shared/units";
+import type { SetupInputRaw } from "@/lib/setups/pure/setup-schema";
 import { Park, RideLog, Setup, Trail, User } from "@/models";
 
 const wheel = (bsdMm: 584 | 622, inches: number, casing: "light" | "trail" | "reinforced", maxPsi: number, extra: { insert?: boolean; rimMaxPsi?: number } = {}) => ({

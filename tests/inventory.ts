@@ -46,10 +46,10 @@ export function routeHandlers(root = process.cwd()): RouteMethod[] {
   );
 }
 
-/** Exported async functions of every module-level 'use server' file under lib/actions and app/. */
+/** Exported async functions of every module-level 'use server' file under lib/ and app/. */
 export function serverActions(root = process.cwd()): ServerAction[] {
   const isSource = (f: string) => /\.(ts|tsx)$/.test(f);
-  const files = [...filesUnder(path.join(root, "lib", "actions"), isSource), ...filesUnder(path.join(root, "app"), isSource)];
+  const files = [...filesUnder(path.join(root, "lib"), isSource), ...filesUnder(path.join(root, "app"), isSource)];
   return files.flatMap((file) => {
     const source = readFileSync(file, "utf8");
     if (!/^\s*(?:\/\/[^\n]*\n|\/\*[\s\S]*?\*\/\s*)*["']use server["']/.test(source)) {

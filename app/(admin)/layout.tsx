@@ -1,5 +1,5 @@
 import { redirect } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
+import { getActor } from "@/lib/server/auth/actor";
 
 export default async function AdminLayout({ children }: { children: React.ReactNode }) {
   const actor = await getActor();

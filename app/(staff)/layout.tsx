@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { primaryRole } from "@/lib/auth/permissions";
+import { getActor } from "@/lib/server/auth/actor";
+import { primaryRole } from "@/lib/server/auth/permissions";
 
 /** Staff pages: anonymous visitors go to sign in; riders without a park role are refused. */
 export default async function StaffLayout({ children }: { children: React.ReactNode }) {

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { PressureForm } from "@/components/pressure/pressure-form";
-import { getActor } from "@/lib/auth/actor";
-import { pressurePageData } from "@/lib/data/pressure-page";
+import { getActor } from "@/lib/server/auth/actor";
+import { pressurePageData } from "@/lib/pressure/pressure-page";
 
 export const metadata = { title: "Today's pressure" };
 export const dynamic = "force-dynamic";

@@ -1,7 +1,7 @@
 import Link from "next/link";
-import { filterHref, STATUS_FILTERS, type BoardFilters, type FilterKey } from "@/lib/conditions/board-filters";
-import { DIFFICULTY_LABELS, KIND_LABELS, STATUS_LABELS } from "@/lib/conditions/labels";
-import { difficultyValues, trailKindValues } from "@/lib/validations/trail";
+import { filterHref, STATUS_FILTERS, type BoardFilters, type FilterKey } from "@/lib/conditions/pure/board-filters";
+import { DIFFICULTY_LABELS, KIND_LABELS, STATUS_LABELS } from "@/lib/conditions/pure/labels";
+import { difficultyValues, trailKindValues } from "@/lib/trails/pure/schemas";
 
 const statusLabel = (s: string) => (s === "not-inspected" ? "Not inspected" : STATUS_LABELS[s as keyof typeof STATUS_LABELS]);
 

@@ -3,11 +3,11 @@
  * The board's live part: starts from the server render and refreshes every minute with SWR.
  * Filters come from the URL (plain links), so the list is right before any script runs.
  */
-import type { BoardFilters } from "@/lib/conditions/board-filters";
-import { filterTrails } from "@/lib/conditions/filter-trails";
-import type { Board } from "@/lib/data/board";
-import { useBoard } from "@/lib/swr/use-board";
-import { parkLocalTime } from "@/lib/time";
+import type { BoardFilters } from "@/lib/conditions/pure/board-filters";
+import { filterTrails } from "@/lib/conditions/pure/filter-trails";
+import type { Board } from "@/lib/conditions/board";
+import { useBoard } from "@/lib/client/use-board";
+import { parkLocalTime } from "@/lib/shared/time";
 import { HazardList } from "./hazard-list";
 import { ParkStateBanner } from "./park-state-banner";
 import { TrailCard } from "./trail-card";

@@ -2,7 +2,7 @@
  * The trade's difficulty scale as a symbol plus words, so it reads without colour:
  * white circle, green circle, blue square, black diamond, double black diamond.
  */
-import { DIFFICULTY_LABELS } from "@/lib/conditions/labels";
+import { DIFFICULTY_LABELS } from "@/lib/conditions/pure/labels";
 
 const STROKE = "#221c16";
 

@@ -1,6 +1,6 @@
-import { HAZARD_KIND_LABELS } from "@/lib/conditions/labels";
-import type { BoardHazard } from "@/lib/data/board";
-import type { HazardKind } from "@/lib/validations/hazard";
+import { HAZARD_KIND_LABELS } from "@/lib/conditions/pure/labels";
+import type { BoardHazard } from "@/lib/conditions/board";
+import type { HazardKind } from "@/lib/hazards/pure/schemas";
 
 /** Open hazards with their notes and photo thumbnails (loaded only when shown). */
 export function HazardList({ hazards }: { hazards: BoardHazard[] }) {

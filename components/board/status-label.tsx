@@ -2,8 +2,8 @@
  * A trail's status as a sign, a word and a border pattern, never colour alone:
  * open ✓ with a solid border, caution ! with a dashed border, closed ✕ on a hatched ground.
  */
-import { STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/labels";
-import type { ReportStatus } from "@/lib/validations/report";
+import { STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import type { ReportStatus } from "@/lib/conditions/pure/schemas";
 
 const HATCH = "repeating-linear-gradient(135deg, #f8e1dc 0 6px, #ffffff 6px 11px)";
 

@@ -6,7 +6,7 @@
  */
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
-import { HAZARD_KIND_LABELS } from "@/lib/conditions/labels";
+import { HAZARD_KIND_LABELS } from "@/lib/conditions/pure/labels";
 
 type Trail = { id: string; name: string; lengthM: number };
 type Where = "coordinates" | "along";

@@ -3,9 +3,9 @@
 import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from "@tanstack/react-table";
 import { useMemo } from "react";
 import { StatusLabel } from "@/components/board/status-label";
-import { describeFeatures } from "@/lib/conditions/labels";
-import type { HistoryRow } from "@/lib/data/report-history";
-import { parkLocalTime } from "@/lib/time";
+import { describeFeatures } from "@/lib/conditions/pure/labels";
+import type { HistoryRow } from "@/lib/conditions/history";
+import { parkLocalTime } from "@/lib/shared/time";
 
 const features = tableFeatures({ rowSortingFeature, sortedRowModel: createSortedRowModel(), sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic } });
 const helper = createColumnHelper<typeof features, HistoryRow>();

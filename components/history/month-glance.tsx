@@ -1,7 +1,7 @@
 import Link from "next/link";
-import { monthGrid, shiftMonth } from "@/lib/conditions/calendar";
-import { STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/labels";
-import type { ReportStatus } from "@/lib/conditions/vocabulary";
+import { monthGrid, shiftMonth } from "@/lib/conditions/pure/calendar";
+import { STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import type { ReportStatus } from "@/lib/conditions/pure/vocabulary";
 
 const CELL: Record<ReportStatus, string> = {
   open: "border-2 border-solid border-moss-600 bg-moss-100",

@@ -1,5 +1,5 @@
-import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import type { Difficulty } from "@/lib/validations/trail";
+import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import type { Difficulty } from "@/lib/trails/pure/schemas";
 
 /**
  * The trade's difficulty sign (circle, square, diamond, double diamond) for the map's card and

@@ -1,7 +1,7 @@
 "use client";
 import { useState, type RefObject } from "react";
 import type { MapRef } from "react-map-gl/maplibre";
-import { TOGGLE_GROUPS, type ToggleGroup } from "@/lib/map/layer-ids";
+import { TOGGLE_GROUPS, type ToggleGroup } from "@/lib/map/pure/layer-ids";
 
 /** Switch groups of map layers off and on (features, hazards, contours). */
 export function LayerToggles({ mapRef }: { mapRef: RefObject<MapRef | null> }) {

@@ -1,6 +1,6 @@
-import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/status";
-import { difficultyValues } from "@/lib/validations/trail";
+import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/pure/status";
+import { difficultyValues } from "@/lib/trails/pure/schemas";
 import { DifficultySymbol } from "./difficulty-symbol";
 import { StatusSwatch } from "./status-swatch";
 

@@ -1,10 +1,10 @@
 "use client";
 import { useCallback, useMemo, useRef, useState } from "react";
 import Map, { GeolocateControl, NavigationControl, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
-import type { Bounds } from "@/lib/map/bounds";
-import type { HazardMapProperties } from "@/lib/map/geojson";
-import { LAYER_IDS, SOURCE_IDS } from "@/lib/map/layer-ids";
-import type { TrailMapProperties } from "@/lib/validations/map";
+import type { Bounds } from "@/lib/map/pure/bounds";
+import type { HazardMapProperties } from "@/lib/map/pure/geojson";
+import { LAYER_IDS, SOURCE_IDS } from "@/lib/map/pure/layer-ids";
+import type { TrailMapProperties } from "@/lib/map/pure/schemas";
 import { LayerToggles } from "./layer-toggles";
 import { exposeMapForTests, maplibregl } from "./maplibre-setup";
 import { HazardCard, TrailCard } from "./trail-card";

@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
-import { boundsAround, type Bounds } from "@/lib/map/bounds";
-import { parkDataUrls } from "@/lib/map/sources";
+import { boundsAround, type Bounds } from "@/lib/map/pure/bounds";
+import { parkDataUrls } from "@/lib/map/pure/sources";
 import PinMapCanvas from "./pin-map-canvas";
 
 export type PickPointProps = {

@@ -1,7 +1,7 @@
 "use client";
 import type { KeyboardEvent } from "react";
 import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MarkerDragEvent } from "react-map-gl/maplibre";
-import type { Bounds } from "@/lib/map/bounds";
+import type { Bounds } from "@/lib/map/pure/bounds";
 import { exposeMapForTests, maplibregl } from "./maplibre-setup";
 import { useMapState } from "./use-map-state";
 

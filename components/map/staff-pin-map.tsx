@@ -1,7 +1,7 @@
 "use client";
 import { useRef, useState } from "react";
-import type { Bounds } from "@/lib/map/bounds";
-import { applyMoveAnswer, moveRequest, sendMove, undoRequest, type Pin, type PinMoveResult } from "@/lib/map/pin-moves";
+import type { Bounds } from "@/lib/map/pure/bounds";
+import { applyMoveAnswer, moveRequest, sendMove, undoRequest, type Pin, type PinMoveResult } from "@/lib/map/pure/pin-moves";
 import PinMapCanvas from "./pin-map-canvas";
 
 export type StaffPinMapProps = { styleUrl: string; bounds: Bounds; pins: Pin[] };

@@ -1,4 +1,4 @@
-import { STATUS_LOOKS, type TrailStatusKey } from "@/lib/map/status";
+import { STATUS_LOOKS, type TrailStatusKey } from "@/lib/map/pure/status";
 
 /**
  * A short sample of a status's line pattern, drawn with the same dash lengths (in line widths) as

@@ -1,9 +1,9 @@
 import Link from "next/link";
-import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import { formatParkTime, formatLength, formatSurfaces } from "@/lib/map/format";
-import { statusKey } from "@/lib/map/status";
-import type { HazardMapProperties } from "@/lib/map/geojson";
-import type { TrailMapProperties } from "@/lib/validations/map";
+import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { formatParkTime, formatLength, formatSurfaces } from "@/lib/map/pure/format";
+import { statusKey } from "@/lib/map/pure/status";
+import type { HazardMapProperties } from "@/lib/map/pure/geojson";
+import type { TrailMapProperties } from "@/lib/map/pure/schemas";
 import { DifficultySymbol } from "./difficulty-symbol";
 import { StatusBadge } from "./status-swatch";
 

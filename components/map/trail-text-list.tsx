@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { formatParkTime, formatLength } from "@/lib/map/format";
-import { statusKey } from "@/lib/map/status";
-import type { HazardMapProperties } from "@/lib/map/geojson";
-import type { TrailMapProperties } from "@/lib/validations/map";
+import { formatParkTime, formatLength } from "@/lib/map/pure/format";
+import { statusKey } from "@/lib/map/pure/status";
+import type { HazardMapProperties } from "@/lib/map/pure/geojson";
+import type { TrailMapProperties } from "@/lib/map/pure/schemas";
 import { DifficultySymbol } from "./difficulty-symbol";
 import { StatusBadge } from "./status-swatch";
 

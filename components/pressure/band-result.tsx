@@ -3,8 +3,8 @@
  * spelled out, every reason with its signed share per wheel, and the cautions always shown.
  */
 import { forwardRef } from "react";
-import type { PressureAnswer } from "@/lib/riders/pressure-today";
-import { formatPressure, type PressureUnit } from "@/lib/units";
+import type { PressureAnswer } from "@/lib/pressure/pressure-today";
+import { formatPressure, type PressureUnit } from "@/lib/shared/units";
 
 type Band = PressureAnswer["front"];
 

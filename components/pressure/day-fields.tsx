@@ -1,7 +1,7 @@
 "use client";
 /** Where and in what conditions: the park, today's trails, and optional temperatures and elevations. */
-import type { DayDraft } from "@/lib/validations/pressure-form";
-import type { DraftErrors } from "@/lib/validations/setup-form";
+import type { DayDraft } from "@/lib/pressure/pure/pressure-form";
+import type { DraftErrors } from "@/lib/setups/pure/setup-form";
 import { CheckInput, MultiCheck, SelectInput, TextInput } from "./inputs";
 import { surfaceOptions } from "./setup-fields";
 

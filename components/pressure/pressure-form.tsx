@@ -5,11 +5,11 @@
  */
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, useTransition } from "react";
-import { STANDARD_CAUTIONS } from "@/lib/pressure/cautions";
-import type { PressureAnswer } from "@/lib/riders/pressure-today";
-import { PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/units";
-import { emptyDayDraft, pressureFieldFor, pressureRequestFrom, type DayDraft } from "@/lib/validations/pressure-form";
-import { emptySetupDraft, setupDraftSchema, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
+import { STANDARD_CAUTIONS } from "@/lib/pressure/pure/cautions";
+import type { PressureAnswer } from "@/lib/pressure/pressure-today";
+import { PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/shared/units";
+import { emptyDayDraft, pressureFieldFor, pressureRequestFrom, type DayDraft } from "@/lib/pressure/pure/pressure-form";
+import { emptySetupDraft, setupDraftSchema, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
 import { BandResult, Cautions } from "./band-result";
 import { DayFields, type ParkOption, type TrailOption } from "./day-fields";
 import { CheckInput, Segments } from "./inputs";

@@ -3,11 +3,11 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, useTransition } from "react";
-import { canApply, type StoredSuggestion } from "@/lib/riders/suggestion";
-import { formatPressure, kpaFrom, type PressureUnit } from "@/lib/units";
-import { SYMPTOMS, type Surface, type Symptom } from "@/lib/validations/pressure";
-import { rideLogSchema } from "@/lib/validations/ride-log";
-import { numberFrom, pressureText, type DraftErrors } from "@/lib/validations/setup-form";
+import { canApply, type StoredSuggestion } from "@/lib/setups/pure/suggestion";
+import { formatPressure, kpaFrom, type PressureUnit } from "@/lib/shared/units";
+import { SYMPTOMS, type Surface, type Symptom } from "@/lib/pressure/pure/schemas";
+import { rideLogSchema } from "@/lib/setups/pure/ride-log-schema";
+import { numberFrom, pressureText, type DraftErrors } from "@/lib/setups/pure/setup-form";
 import type { ParkOption, TrailOption } from "./day-fields";
 import { CheckInput, MultiCheck, SelectInput, TextInput } from "./inputs";
 import { surfaceOptions } from "./setup-fields";

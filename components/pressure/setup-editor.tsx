@@ -5,9 +5,9 @@
  */
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import type { MassUnit, PressureUnit } from "@/lib/units";
-import { draftErrors, draftFromSetup, emptySetupDraft, parseSetupDraft, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
-import type { SetupInput } from "@/lib/validations/setup";
+import type { MassUnit, PressureUnit } from "@/lib/shared/units";
+import { draftErrors, draftFromSetup, emptySetupDraft, parseSetupDraft, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
+import type { SetupInput } from "@/lib/setups/pure/setup-schema";
 import { TextInput } from "./inputs";
 import { SetupFields } from "./setup-fields";
 import { SuspensionFields } from "./suspension-fields";

@@ -1,8 +1,8 @@
 "use client";
 /** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline. */
-import { MASS_UNITS, PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/units";
-import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/validations/pressure";
-import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/validations/setup-form";
+import { MASS_UNITS, PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/shared/units";
+import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
+import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/setups/pure/setup-form";
 import { CheckInput, MultiCheck, Segments, SelectInput, TextInput } from "./inputs";
 
 export const WHEEL_SIZES = BEAD_SEAT_DIAMETERS_MM.map((bsd) => ({

@@ -1,7 +1,7 @@
 "use client";
 /** Suspension measurements with the sag check worked out live as the rider types. */
-import { suspensionSag, type SagResult } from "@/lib/pressure/sag";
-import { numberFrom, type DraftErrors, type SetupDraft } from "@/lib/validations/setup-form";
+import { suspensionSag, type SagResult } from "@/lib/pressure/pure/sag";
+import { numberFrom, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
 import { TextInput } from "./inputs";
 
 const VERDICT = { "too-little": "Too little sag", "in-range": "In range", "too-much": "Too much sag" } as const;

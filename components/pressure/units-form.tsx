@@ -2,10 +2,10 @@
 /** The rider's display units, saved on their account by a server action. */
 import { useActionState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { initialFormState } from "@/lib/actions/form-state";
-import { updateUnitsAction } from "@/lib/actions/rider";
-import { MASS_UNITS, PRESSURE_UNITS } from "@/lib/units";
-import { DISTANCE_SYSTEMS, type UnitPrefs } from "@/lib/validations/units";
+import { initialFormState } from "@/lib/shared/form-state";
+import { updateUnitsAction } from "@/lib/accounts/units-actions";
+import { MASS_UNITS, PRESSURE_UNITS } from "@/lib/shared/units";
+import { DISTANCE_SYSTEMS, type UnitPrefs } from "@/lib/accounts/pure/units-schema";
 
 const GROUPS = [
   { name: "pressure", legend: "Pressure", options: PRESSURE_UNITS },

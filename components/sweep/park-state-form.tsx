@@ -1,10 +1,10 @@
 "use client";
 import { useActionState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { clearParkStateAction, setParkStateAction } from "@/lib/actions/conditions";
-import { initialFormState } from "@/lib/actions/form-state";
-import { PARK_STATE_LABELS } from "@/lib/conditions/labels";
-import { PARK_STATES } from "@/lib/conditions/vocabulary";
+import { clearParkStateAction, setParkStateAction } from "@/lib/conditions/actions";
+import { initialFormState } from "@/lib/shared/form-state";
+import { PARK_STATE_LABELS } from "@/lib/conditions/pure/labels";
+import { PARK_STATES } from "@/lib/conditions/pure/vocabulary";
 
 type Active = { state: string; message: string; endsAt: string | null } | null;
 

@@ -6,8 +6,8 @@
  */
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import { draftFromStart, entryFromDraft, type SweepDraft } from "@/lib/conditions/sweep-draft";
-import type { SweepStart } from "@/lib/data/sweep-start";
+import { draftFromStart, entryFromDraft, type SweepDraft } from "@/lib/conditions/pure/sweep-draft";
+import type { SweepStart } from "@/lib/conditions/sweep-start";
 import { SweepTrailCard, type TrailMessage } from "./sweep-trail";
 
 type Problem = { trailId: string | null; field: string; message: string };

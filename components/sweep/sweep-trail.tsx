@@ -1,9 +1,9 @@
 "use client";
 import { DifficultyMark } from "@/components/board/difficulty-mark";
-import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/labels";
-import { applyChange, type DraftChange, type SweepDraft } from "@/lib/conditions/sweep-draft";
-import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type Surface } from "@/lib/conditions/vocabulary";
-import type { SweepTrail } from "@/lib/data/sweep-start";
+import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import { applyChange, type DraftChange, type SweepDraft } from "@/lib/conditions/pure/sweep-draft";
+import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type Surface } from "@/lib/conditions/pure/vocabulary";
+import type { SweepTrail } from "@/lib/conditions/sweep-start";
 import { ToggleGroup } from "./toggle-group";
 
 export type TrailMessage = { kind: "problem" | "conflict"; text: string; onAdopt?: () => void };

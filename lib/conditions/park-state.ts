@@ -1,7 +1,7 @@
 /** The park-wide state staff set ("whole park closed: lightning") and clear. One in force at a time. */
 import { Op, type Transaction } from "sequelize";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { parkStateSchema, type ParkStateKind } from "@/lib/validations/report";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { parkStateSchema, type ParkStateKind } from "@/lib/conditions/pure/schemas";
 import { AuditEvent, ParkState, sequelize, type Park } from "@/models";
 
 export type ParkStateView = { id: string; state: ParkStateKind; message: string; startsAt: string; endsAt: string | null };

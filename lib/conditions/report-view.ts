@@ -1,4 +1,4 @@
-import type { FeatureStates, ReportInput, ReportStatus, Surface } from "@/lib/validations/report";
+import type { FeatureStates, ReportInput, ReportStatus, Surface } from "@/lib/conditions/pure/schemas";
 import type { TrailReport } from "@/models";
 
 /** A report revision as the API returns it. */

@@ -5,12 +5,12 @@
  */
 import { UniqueConstraintError } from "sequelize";
 import type { ZodError } from "zod";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { AppError } from "@/lib/errors";
-import { parkLocalDate } from "@/lib/time";
-import { sweepSchema, type SweepInput } from "@/lib/validations/report";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { AppError } from "@/lib/shared/errors";
+import { parkLocalDate } from "@/lib/shared/time";
+import { sweepSchema, type SweepInput } from "@/lib/conditions/pure/schemas";
 import { Trail, sequelize, type Park } from "@/models";
-import { closureNoticeHref } from "./notice-link";
+import { closureNoticeHref } from "./pure/notice-link";
 import { reportView, type ReportView } from "./report-view";
 import { currentReportView, saveRevision } from "./write-report";
 

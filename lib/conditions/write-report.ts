@@ -8,11 +8,11 @@
  * the last line of defence.
  */
 import { Op, UniqueConstraintError, type Transaction } from "sequelize";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { AppError, notFound } from "@/lib/errors";
-import { isUuid } from "@/lib/ids";
-import { parkLocalDate } from "@/lib/time";
-import { reportPostSchema, type ReportInput } from "@/lib/validations/report";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { AppError, notFound } from "@/lib/shared/errors";
+import { isUuid } from "@/lib/shared/ids";
+import { parkLocalDate } from "@/lib/shared/time";
+import { reportPostSchema, type ReportInput } from "@/lib/conditions/pure/schemas";
 import { AuditEvent, Park, Trail, TrailReport, sequelize } from "@/models";
 import { reportValues, reportView, type ReportView } from "./report-view";
 

@@ -1,7 +1,7 @@
 import type { StyleSpecification } from "maplibre-gl";
 import { z } from "zod";
-import { env } from "@/lib/env";
-import { buildParkStyle, overlayOnHostedStyle, type ParkStyleInput } from "./style";
+import { env } from "@/lib/server/env";
+import { buildParkStyle, overlayOnHostedStyle, type ParkStyleInput } from "./pure/style";
 
 /**
  * The style a park's map loads. With MAP_STYLE_URL set (production), the hosted vector style is

@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from "sequelize";
-import type { NoticeKind } from "@/lib/validations/notice";
+import type { NoticeKind } from "@/lib/notices/pure/schemas";
 import { sequelize } from "@/models";
 
 /**

@@ -1,5 +1,5 @@
-import { headerSafe } from "@/lib/mail/transport";
-import type { NoticeKind } from "@/lib/validations/notice";
+import { headerSafe } from "@/lib/server/mail/transport";
+import type { NoticeKind } from "@/lib/notices/pure/schemas";
 
 /**
  * The notice e-mail, built from parts only: the subject is ours (park and trail names,

@@ -1,12 +1,12 @@
 import { hostname } from "node:os";
 import { randomBytes } from "node:crypto";
 import type { Transporter } from "nodemailer";
-import { env } from "@/lib/env";
+import { env } from "@/lib/server/env";
 import { Notice, Park } from "@/models";
 import { composeNoticeEmail } from "./compose";
 import { claimDue, failExhaustedStaleClaims, markFailed, markRetrying, markSent, type ClaimedDelivery } from "./delivery-queue";
 import { subscriptionLinks, unsubscribeToken } from "./link-tokens";
-import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, type RetryPolicy } from "./retry-policy";
+import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, type RetryPolicy } from "./pure/retry-policy";
 
 /**
  * Sends queued notice deliveries: claim a batch, send each (a few at a time), settle each

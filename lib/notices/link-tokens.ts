@@ -1,5 +1,5 @@
-import { signToken, verifyToken } from "@/lib/auth/tokens";
-import { env } from "@/lib/env";
+import { signToken, verifyToken } from "@/lib/server/auth/tokens";
+import { env } from "@/lib/server/env";
 
 /**
  * Signed links that work without signing in. Each carries its purpose, so a confirmation

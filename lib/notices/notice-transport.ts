@@ -2,7 +2,7 @@ import net from "node:net";
 import nodemailer, { type Transporter } from "nodemailer";
 import { parseConnectionUrl } from "nodemailer/lib/shared";
 import type SMTPPool from "nodemailer/lib/smtp-pool";
-import { env, usesFakeMail } from "@/lib/env";
+import { env, usesFakeMail } from "@/lib/server/env";
 
 const CONNECT_TIMEOUT_MS = 10_000;
 

@@ -1,14 +1,14 @@
 import { Op } from "sequelize";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { env } from "@/lib/env";
-import { AppError } from "@/lib/errors";
-import { isUuid } from "@/lib/ids";
-import { noticeFields, type NoticeFields } from "@/lib/validations/notice";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { env } from "@/lib/server/env";
+import { AppError } from "@/lib/shared/errors";
+import { isUuid } from "@/lib/shared/ids";
+import { noticeFields, type NoticeFields } from "@/lib/notices/pure/schemas";
 import { AuditEvent, Notice, Park, Trail, sequelize } from "@/models";
 import { countAudience, queueDeliveries } from "./audience";
 import { requeueFailed } from "./delivery-queue";
 import { composeNoticeEmail, noticeSubject } from "./compose";
-import { messageIdDomain, messageIdParts } from "./message-id";
+import { messageIdDomain, messageIdParts } from "./pure/message-id";
 
 /** Anti-automation on e-mail sending (ASVS v5.0.0 2.4.1): notices per park per rolling hour. */
 export const NOTICES_PER_PARK_PER_HOUR = 20;

@@ -1,10 +1,10 @@
 import { UniqueConstraintError } from "sequelize";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { env } from "@/lib/env";
-import { AppError } from "@/lib/errors";
-import { isUuid } from "@/lib/ids";
-import { headerSafe, sendMail } from "@/lib/mail/transport";
-import { linkToken, subscriptionFields } from "@/lib/validations/notice";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { env } from "@/lib/server/env";
+import { AppError } from "@/lib/shared/errors";
+import { isUuid } from "@/lib/shared/ids";
+import { headerSafe, sendMail } from "@/lib/server/mail/transport";
+import { linkToken, subscriptionFields } from "@/lib/notices/pure/schemas";
 import { Park, Subscription, Trail } from "@/models";
 import { CONFIRM_LINK_DAYS, confirmToken, readConfirmToken, readUnsubscribeToken, subscriptionLinks } from "./link-tokens";
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import type { RetryPolicy } from "./retry-policy";
-import { DEFAULT_RETRY_POLICY } from "./retry-policy";
+import type { RetryPolicy } from "./pure/retry-policy";
+import { DEFAULT_RETRY_POLICY } from "./pure/retry-policy";
 
 /** Worker tuning from the environment, all optional (see .env.example, "Notice worker"). */
 const schema = z.object({

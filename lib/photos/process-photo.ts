@@ -1,7 +1,7 @@
 import sharp, { type Metadata } from "sharp";
-import { AppError } from "@/lib/errors";
-import { PHOTO_LIMITS } from "./limits";
-import { sniffPhotoFormat } from "./sniff";
+import { AppError } from "@/lib/shared/errors";
+import { PHOTO_LIMITS } from "./pure/limits";
+import { sniffPhotoFormat } from "./pure/sniff";
 
 export type ProcessedPhoto = { full: Buffer; thumb: Buffer; width: number; height: number; contentType: "image/jpeg" };
 export type PhotoUpload = { bytes: Buffer; name: string };

@@ -1,6 +1,6 @@
-import { notFound } from "@/lib/errors";
-import { isUuid } from "@/lib/ids";
-import { photoStorage } from "@/lib/storage";
+import { notFound } from "@/lib/shared/errors";
+import { isUuid } from "@/lib/shared/ids";
+import { photoStorage } from "@/lib/server/storage";
 import { Photo } from "@/models";
 
 /**

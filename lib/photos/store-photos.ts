@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import type { Transaction } from "sequelize";
-import { photoStorage } from "@/lib/storage";
+import { photoStorage } from "@/lib/server/storage";
 import { Photo } from "@/models";
 import type { ProcessedPhoto } from "./process-photo";
 

@@ -1,11 +1,11 @@
 import { Op } from "sequelize";
-import { authorize, type Actor } from "@/lib/auth/permissions";
-import { hashPassword, passwordSchema } from "@/lib/auth/password";
-import { hashToken, newToken } from "@/lib/auth/tokens";
-import { env } from "@/lib/env";
-import { AppError } from "@/lib/errors";
-import { sendMail } from "@/lib/mail/transport";
-import { acceptInvitationFields, invitationFields } from "@/lib/validations/account";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { hashPassword, passwordSchema } from "@/lib/server/auth/password";
+import { hashToken, newToken } from "@/lib/server/auth/tokens";
+import { env } from "@/lib/server/env";
+import { AppError } from "@/lib/shared/errors";
+import { sendMail } from "@/lib/server/mail/transport";
+import { acceptInvitationFields, invitationFields } from "@/lib/accounts/pure/schemas";
 import { AuditEvent, Invitation, Park, ParkMembership, User, sequelize } from "@/models";
 
 const INVITATION_DAYS = 7;

@@ -2,7 +2,7 @@
  * The demo park's week of conditions (invented): two dry days, a night of rain, a closure
  * while the technical trail drains, then drying back to tacky dirt. Not data from anywhere.
  */
-import type { ReportInput } from "@/lib/validations/report";
+import type { ReportInput } from "@/lib/conditions/pure/schemas";
 
 export type DayKind = "dry" | "dusty" | "rain" | "after-rain" | "drying" | "tacky" | "hero";
 

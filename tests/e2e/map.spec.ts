@@ -5,7 +5,7 @@ import { hex, near, openMap, PARK, screenPoint, trailsFromApi, TRAIL_LINE_LAYERS
 
 const STATUS_LABELS = ["Open", "Caution", "Closed", "Not inspected today"];
 const DIFFICULTY_LABELS = ["Easiest", "Easy", "More difficult", "Very difficult", "Extremely difficult"];
-// The trade's colours as the style draws them (lib/trails/difficulty.ts).
+// The trade's colours as the style draws them (lib/trails/pure/difficulty.ts).
 const BLUE = hex("#1d4ed8");
 const GREEN = hex("#15803d");
 

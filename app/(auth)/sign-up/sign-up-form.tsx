@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
 import { Field, FormMessage } from "@/components/form-bits";
-import { signUpAction } from "@/lib/actions/account";
-import { initialFormState } from "@/lib/actions/form-state";
+import { signUpAction } from "@/lib/accounts/actions";
+import { initialFormState } from "@/lib/shared/form-state";
 
 export function SignUpForm() {
   const [state, action, pending] = useActionState(signUpAction, initialFormState);

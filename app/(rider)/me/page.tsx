@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { UnitsForm } from "@/components/pressure/units-form";
-import { getActor } from "@/lib/auth/actor";
-import { unitsFor } from "@/lib/riders/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { unitsFor } from "@/lib/accounts/units";
 
 export const metadata = { title: "My account" };
 export const dynamic = "force-dynamic";

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { getActor } from "@/lib/auth/actor";
+import { getActor } from "@/lib/server/auth/actor";
 import { Park } from "@/models";
 
 export const metadata = { title: "Staff desk" };

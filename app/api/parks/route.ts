@@ -1,6 +1,6 @@
 // GET /api/parks: the public list of parks.
-import { handler } from "@/lib/api/handler";
-import { listParks } from "@/lib/data/parks";
+import { handler } from "@/lib/server/api/handler";
+import { listParks } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -2,9 +2,9 @@
 // POST /api/unsubscribe?token=: unsubscribe; RFC 8058 one-click, so it needs no session and no
 // Origin: mail providers post from their servers. The signed token is the authority; CSRF cannot
 // forge it, and unsubscribing twice changes nothing.
-import { handler } from "@/lib/api/handler";
-import { errorResponse } from "@/lib/api/errors";
-import { env } from "@/lib/env";
+import { handler } from "@/lib/server/api/handler";
+import { errorResponse } from "@/lib/server/api/errors";
+import { env } from "@/lib/server/env";
 import { describeUnsubscribe, unsubscribeByToken } from "@/lib/notices/subscriptions";
 
 export const dynamic = "force-dynamic";

@@ -3,8 +3,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { BoardFilterLinks } from "@/components/board/board-filters";
 import { BoardLive } from "@/components/board/board-live";
-import { parseBoardFilters } from "@/lib/conditions/board-filters";
-import { boardForPark } from "@/lib/data/board";
+import { parseBoardFilters } from "@/lib/conditions/pure/board-filters";
+import { boardForPark } from "@/lib/conditions/board";
 
 export const dynamic = "force-dynamic";
 

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { CAUTIONS, RULE_SECTIONS, type Source } from "@/lib/pressure/catalogue";
+import { CAUTIONS, RULE_SECTIONS, type Source } from "@/lib/pressure/pure/catalogue";
 
 export const metadata = { title: "How the pressure band works" };
 

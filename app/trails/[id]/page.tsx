@@ -3,13 +3,13 @@ import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
 import { ElevationProfile } from "@/components/elevation-profile";
 import { TrailFiguresList } from "@/components/trail-figures";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { getParkBySlug } from "@/lib/data/parks";
-import { getTrailDetail, type TrailDetail } from "@/lib/data/trails";
-import { distanceSystemFor } from "@/lib/data/user-units";
-import { AppError } from "@/lib/errors";
-import { formatDistance } from "@/lib/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { getTrailDetail, type TrailDetail } from "@/lib/trails/queries";
+import { distanceSystemFor } from "@/lib/accounts/user-units";
+import { AppError } from "@/lib/shared/errors";
+import { formatDistance } from "@/lib/shared/units";
 
 export const dynamic = "force-dynamic";
 

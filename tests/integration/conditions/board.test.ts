@@ -1,9 +1,9 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { createHazard } from "@/lib/conditions/hazards";
-import { parkLocalInstant } from "@/lib/conditions/park-clock";
+import { createHazard } from "@/lib/hazards/hazard-writes";
+import { parkLocalInstant } from "@/lib/shared/park-clock";
 import { clearParkState, setParkState } from "@/lib/conditions/park-state";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { boardForPark } from "@/lib/data/board";
+import { boardForPark } from "@/lib/conditions/board";
 import { Park, sequelize } from "@/models";
 import { createTrail, parkWithTrails as makeParkWithTrails } from "./fixtures";
 import { solidJpeg } from "./photos";

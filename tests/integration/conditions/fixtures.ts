@@ -1,8 +1,8 @@
 import { readdir } from "node:fs/promises";
 import path from "node:path";
-import { loadActor } from "@/lib/auth/actor";
-import type { Actor } from "@/lib/auth/permissions";
-import { photoStorageDir } from "@/lib/storage";
+import { loadActor } from "@/lib/server/auth/actor";
+import type { Actor } from "@/lib/server/auth/permissions";
+import { photoStorageDir } from "@/lib/server/storage";
 import { Trail, type Park } from "@/models";
 import { addStaff, createPark, createUser } from "../helpers";
 

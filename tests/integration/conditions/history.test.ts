@@ -1,9 +1,9 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { parkLocalInstant } from "@/lib/conditions/park-clock";
-import { reportsCsv } from "@/lib/conditions/report-csv";
+import { parkLocalInstant } from "@/lib/shared/park-clock";
+import { reportsCsv } from "@/lib/conditions/pure/report-csv";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { statusChanges } from "@/lib/data/activity";
-import { parkReportsForExport, resolveRange, trailReportHistory } from "@/lib/data/report-history";
+import { statusChanges } from "@/lib/audit/activity";
+import { parkReportsForExport, resolveRange, trailReportHistory } from "@/lib/conditions/history";
 import { sequelize } from "@/models";
 import { parkWithTrails } from "./fixtures";
 

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { parkLocalInstant } from "@/lib/conditions/park-clock";
+import { parkLocalInstant } from "@/lib/shared/park-clock";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { AppError } from "@/lib/errors";
+import { AppError } from "@/lib/shared/errors";
 import { AuditEvent, TrailReport, sequelize } from "@/models";
 import { parkWithTrails, refusal, riderActor, staffOf } from "./fixtures";
 import { createPark } from "../helpers";

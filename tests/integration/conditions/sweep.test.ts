@@ -1,8 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { parkLocalInstant } from "@/lib/conditions/park-clock";
+import { parkLocalInstant } from "@/lib/shared/park-clock";
 import { saveSweep } from "@/lib/conditions/sweep";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { sweepStart } from "@/lib/data/sweep-start";
+import { sweepStart } from "@/lib/conditions/sweep-start";
 import { TrailReport, sequelize } from "@/models";
 import { createPark } from "../helpers";
 import { parkWithTrails, refusal, staffOf } from "./fixtures";

@@ -1,9 +1,9 @@
 import { destination, distance } from "@turf/turf";
 import { ZodError } from "zod";
 import { afterAll, describe, expect, it } from "vitest";
-import { loadActor } from "@/lib/auth/actor";
-import { AppError } from "@/lib/errors";
-import { moveHazard, moveTrailFeature } from "@/lib/map-records/move-pins";
+import { loadActor } from "@/lib/server/auth/actor";
+import { AppError } from "@/lib/shared/errors";
+import { moveHazard, moveTrailFeature } from "@/lib/map/move-pins";
 import { AuditEvent, Hazard, TrailFeature, sequelize } from "@/models";
 import { addStaff, createPark, createUser } from "../helpers";
 import { createTrail } from "./fixtures";

@@ -1,9 +1,9 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { GEOJSON_CONTENT_TYPE, geoJsonResponse } from "@/lib/api/geojson-response";
-import { parkToday } from "@/lib/data/conditions";
-import { parkFeaturesGeoJson, parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/data/map";
-import { shiftDate } from "@/lib/time";
-import { trailMapPropertiesSchema } from "@/lib/validations/map";
+import { GEOJSON_CONTENT_TYPE, geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { parkToday } from "@/lib/conditions/park-today";
+import { parkFeaturesGeoJson, parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
+import { shiftDate } from "@/lib/shared/time";
+import { trailMapPropertiesSchema } from "@/lib/map/pure/schemas";
 import { Hazard, TrailFeature, TrailReport, sequelize, type Trail } from "@/models";
 import { createPark } from "../helpers";
 import { createTrail, line } from "./fixtures";

@@ -1,7 +1,7 @@
 import net from "node:net";
 import { randomUUID } from "node:crypto";
-import { loadActor } from "@/lib/auth/actor";
-import { startFakeSmtp } from "@/lib/mail/fake-smtp";
+import { loadActor } from "@/lib/server/auth/actor";
+import { startFakeSmtp } from "@/scripts/fakes/smtp-server";
 import { workerDefaults, type WorkerOptions } from "@/lib/notices/delivery-worker";
 import { createNoticeTransport } from "@/lib/notices/notice-transport";
 import { NoticeDelivery, Park, Subscription, Trail, User } from "@/models";

@@ -1,9 +1,9 @@
 import { spawn } from "node:child_process";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { getNotice, listDeliveries } from "@/lib/data/notices";
+import { getNotice, listDeliveries } from "@/lib/notices/notice-queries";
 import { drainDue, processBatch } from "@/lib/notices/delivery-worker";
 import { retryFailedDeliveries, sendNotice } from "@/lib/notices/send-notice";
-import { AppError } from "@/lib/errors";
+import { AppError } from "@/lib/shared/errors";
 import { NoticeDelivery, sequelize } from "@/models";
 import { createSubscribers, fastWorker, messageIdOf, parkWithStaff, pause, privateSmtp, removeCreatedParks, stateCounts } from "./fixtures";
 

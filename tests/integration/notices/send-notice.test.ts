@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
-import { loadActor } from "@/lib/auth/actor";
-import { AppError } from "@/lib/errors";
+import { loadActor } from "@/lib/server/auth/actor";
+import { AppError } from "@/lib/shared/errors";
 import { drainDue } from "@/lib/notices/delivery-worker";
 import { NOTICES_PER_PARK_PER_HOUR, previewNotice, sendNotice } from "@/lib/notices/send-notice";
 import { AuditEvent, Notice, NoticeDelivery, Park, User, sequelize } from "@/models";

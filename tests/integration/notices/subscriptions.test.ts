@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { loadActor } from "@/lib/auth/actor";
-import { signToken } from "@/lib/auth/tokens";
-import { AppError } from "@/lib/errors";
+import { loadActor } from "@/lib/server/auth/actor";
+import { signToken } from "@/lib/server/auth/tokens";
+import { AppError } from "@/lib/shared/errors";
 import { drainDue } from "@/lib/notices/delivery-worker";
 import { confirmToken, unsubscribeToken } from "@/lib/notices/link-tokens";
 import { sendNotice } from "@/lib/notices/send-notice";

@@ -1,9 +1,9 @@
 /** Invented riders, setups and trails for the pressure integration tests (not real data). */
-import { loadActor } from "@/lib/auth/actor";
-import { parkToday } from "@/lib/data/conditions";
-import { createSetup } from "@/lib/riders/setups";
-import { psiToKpa } from "@/lib/units";
-import type { SetupInputRaw } from "@/lib/validations/setup";
+import { loadActor } from "@/lib/server/auth/actor";
+import { parkToday } from "@/lib/conditions/park-today";
+import { createSetup } from "@/lib/setups/setup-writes";
+import { psiToKpa } from "@/lib/shared/units";
+import type { SetupInputRaw } from "@/lib/setups/pure/setup-schema";
 import { Park, Trail, TrailFeature, TrailReport } from "@/models";
 import { createUser } from "../helpers";
 

@@ -1,9 +1,9 @@
 // POST /api/pressure's logic on the real database: today's reports (surfaces, status, age) and
 // mapped trail features feed the engine; trail names appear in the reasons; bad trails are 422.
 import { afterAll, describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { pressureForRequest } from "@/lib/riders/pressure-today";
-import { psiToKpa } from "@/lib/units";
+import { AppError } from "@/lib/shared/errors";
+import { pressureForRequest } from "@/lib/pressure/pressure-today";
+import { psiToKpa } from "@/lib/shared/units";
 import { sequelize } from "@/models";
 import { createPark } from "../helpers";
 import { createTrail, newRider, reportToday, riderWithSetup, trailBike } from "./fixtures";

@@ -1,12 +1,12 @@
 import { ConnectionRefusedError, DataTypes, QueryTypes, type Transaction } from "sequelize";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { sequelizeFor } from "@/lib/db";
-import { isDatabaseUnavailable } from "@/lib/db-errors";
-import { env } from "@/lib/env";
+import { sequelizeFor } from "@/models/db";
+import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
+import { env } from "@/lib/server/env";
 import { sequelize } from "@/models";
 
 /**
- * Where queries go with DATABASE_REPLICA_URLS set (lib/db.ts). There is no streaming replica in
+ * Where queries go with DATABASE_REPLICA_URLS set (models/db.ts). There is no streaming replica in
  * the test cluster, so a second, empty database on the same server stands in for one: which
  * database answers `current_database()` shows which pool a query used.
  */
@@ -58,7 +58,7 @@ describe("read replicas through Sequelize's replication option", () => {
   });
 });
 
-describe("retries (RETRY_WHEN_NOT_SENT in lib/db.ts)", () => {
+describe("retries (RETRY_WHEN_NOT_SENT in models/db.ts)", () => {
   const counting = () => {
     const tries: string[] = [];
     return { tries, retry: { max: 3, report: (message: string) => void (message.startsWith("Trying") && tries.push(message)) } };

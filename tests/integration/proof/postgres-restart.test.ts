@@ -1,10 +1,10 @@
 import { execFile } from "node:child_process";
 import { afterAll, describe, expect, it } from "vitest";
-import { errorResponse } from "@/lib/api/errors";
+import { errorResponse } from "@/lib/server/api/errors";
 import { postTrailReport } from "@/lib/conditions/write-report";
-import { boardForPark } from "@/lib/data/board";
-import { isDatabaseUnavailable } from "@/lib/db-errors";
-import { AppError } from "@/lib/errors";
+import { boardForPark } from "@/lib/conditions/board";
+import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
+import { AppError } from "@/lib/shared/errors";
 import { TrailReport, sequelize } from "@/models";
 import { parkWithTrails } from "../conditions/fixtures";
 

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { Op } from "sequelize";
-import { loadActor } from "@/lib/auth/actor";
-import { hashToken, newToken } from "@/lib/auth/tokens";
-import { initialFormState, type FormState } from "@/lib/actions/form-state";
+import { loadActor } from "@/lib/server/auth/actor";
+import { hashToken, newToken } from "@/lib/server/auth/tokens";
+import { initialFormState, type FormState } from "@/lib/shared/form-state";
 import { sendNotice } from "@/lib/notices/send-notice";
 import { saveSubscription } from "@/lib/notices/subscriptions";
 import { AuditEvent, Invitation, Notice, NoticeDelivery, Park, ParkMembership, ParkState, Subscription, User, sequelize } from "@/models";
@@ -16,8 +16,8 @@ import { addStaff, createPark, createUser, uniqueEmail } from "../helpers";
  * after next-auth has read the cookie). A refused call must change nothing in the database.
  */
 const session = vi.hoisted(() => ({ userId: null as string | null }));
-vi.mock("@/lib/auth/actor", async (importOriginal) => {
-  const actual = await importOriginal<typeof import("@/lib/auth/actor")>();
+vi.mock("@/lib/server/auth/actor", async (importOriginal) => {
+  const actual = await importOriginal<typeof import("@/lib/server/auth/actor")>();
   return { ...actual, getActor: async () => (session.userId ? actual.loadActor(session.userId) : null) };
 });
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
@@ -26,11 +26,11 @@ class Redirected extends Error {}
 vi.mock("next/navigation", () => ({ redirect: (url: string) => { throw new Redirected(url); } }));
 
 const actions = {
-  ...(await import("@/lib/actions/account")),
-  ...(await import("@/lib/actions/conditions")),
-  ...(await import("@/lib/actions/notices")),
-  ...(await import("@/lib/actions/rider")),
-  ...(await import("@/lib/actions/subscriptions")),
+  ...(await import("@/lib/accounts/actions")),
+  ...(await import("@/lib/conditions/actions")),
+  ...(await import("@/lib/notices/notice-actions")),
+  ...(await import("@/lib/accounts/units-actions")),
+  ...(await import("@/lib/notices/subscription-actions")),
 };
 type ActionName = keyof typeof actions;
 

@@ -1,10 +1,10 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { trailDownload } from "@/lib/data/trail-download";
-import { getTrailDetail, listParkTrails } from "@/lib/data/trails";
-import { AppError } from "@/lib/errors";
-import { addTrailFeature, deleteTrailFeature, updateTrailFeature } from "@/lib/trail-records/edit-features";
-import { archiveTrail, updateTrailMetadata } from "@/lib/trail-records/edit-trail";
-import { createTrailFromUpload } from "@/lib/trail-records/save-upload";
+import { trailDownload } from "@/lib/trails/download";
+import { getTrailDetail, listParkTrails } from "@/lib/trails/queries";
+import { AppError } from "@/lib/shared/errors";
+import { addTrailFeature, deleteTrailFeature, updateTrailFeature } from "@/lib/trails/edit-features";
+import { archiveTrail, updateTrailMetadata } from "@/lib/trails/edit-trail";
+import { createTrailFromUpload } from "@/lib/trails/save-upload";
 import { Trail, TrailFeature, TrailVersion, sequelize } from "@/models";
 import { corpusFile, personIn, trailPark } from "./fixtures";
 

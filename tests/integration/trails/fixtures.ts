@@ -1,8 +1,8 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { loadActor } from "@/lib/auth/actor";
-import type { Actor } from "@/lib/auth/permissions";
-import type { UploadedFile } from "@/lib/trail-records/save-upload";
+import { loadActor } from "@/lib/server/auth/actor";
+import type { Actor } from "@/lib/server/auth/permissions";
+import type { UploadedFile } from "@/lib/trails/save-upload";
 import { addStaff, createPark, createUser } from "../helpers";
 
 const CORPUS = path.resolve(__dirname, "../../fixtures/trails");

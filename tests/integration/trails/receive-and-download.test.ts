@@ -1,11 +1,11 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { trailDownload } from "@/lib/data/trail-download";
-import { AppError } from "@/lib/errors";
-import { TRAIL_LIMITS } from "@/lib/trails";
-import { previewTrailUpload } from "@/lib/trail-records/preview";
-import { MULTIPART_MARGIN_BYTES, receiveTrailUpload } from "@/lib/trail-records/receive-upload";
-import { createTrailFromUpload, replaceTrailLine } from "@/lib/trail-records/save-upload";
-import { claimUploadSlot, UPLOAD_ATTEMPT_ACTION, UPLOADS_PER_HOUR } from "@/lib/trail-records/upload-quota";
+import { trailDownload } from "@/lib/trails/download";
+import { AppError } from "@/lib/shared/errors";
+import { TRAIL_LIMITS } from "@/lib/trails/pure";
+import { previewTrailUpload } from "@/lib/trails/preview";
+import { MULTIPART_MARGIN_BYTES, receiveTrailUpload } from "@/lib/trails/receive-upload";
+import { createTrailFromUpload, replaceTrailLine } from "@/lib/trails/save-upload";
+import { claimUploadSlot, UPLOAD_ATTEMPT_ACTION, UPLOADS_PER_HOUR } from "@/lib/trails/upload-quota";
 import { AuditEvent, Trail, sequelize } from "@/models";
 import { corpusFile, personIn, statusOf, trailPark } from "./fixtures";
 

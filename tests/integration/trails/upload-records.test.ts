@@ -1,8 +1,8 @@
 import { afterAll, afterEach, describe, expect, it, vi } from "vitest";
-import { getTrailDetail, listParkTrails } from "@/lib/data/trails";
-import { AppError } from "@/lib/errors";
-import { toGpx } from "@/lib/trails";
-import { createTrailFromUpload, replaceTrailLine } from "@/lib/trail-records/save-upload";
+import { getTrailDetail, listParkTrails } from "@/lib/trails/queries";
+import { AppError } from "@/lib/shared/errors";
+import { toGpx } from "@/lib/trails/pure";
+import { createTrailFromUpload, replaceTrailLine } from "@/lib/trails/save-upload";
 import { AuditEvent, Trail, TrailFeature, TrailVersion, sequelize } from "@/models";
 import { corpusFile, demoFile, manifest, personIn, trailPark } from "./fixtures";
 

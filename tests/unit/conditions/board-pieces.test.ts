@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { filterHref, parseBoardFilters } from "@/lib/conditions/board-filters";
-import { filterTrails } from "@/lib/conditions/filter-trails";
-import { monthGrid, shiftMonth } from "@/lib/conditions/calendar";
-import { describeFeatures } from "@/lib/conditions/labels";
-import { closureNoticeHref } from "@/lib/conditions/notice-link";
+import { filterHref, parseBoardFilters } from "@/lib/conditions/pure/board-filters";
+import { filterTrails } from "@/lib/conditions/pure/filter-trails";
+import { monthGrid, shiftMonth } from "@/lib/conditions/pure/calendar";
+import { describeFeatures } from "@/lib/conditions/pure/labels";
+import { closureNoticeHref } from "@/lib/conditions/pure/notice-link";
 
 const trails = [
   { name: "A", difficulty: "easy", kind: "flow", effectiveStatus: "open" },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { changesSinceYesterday } from "@/lib/conditions/changes";
-import { effectiveStatus, isStateActive } from "@/lib/conditions/effective-status";
+import { changesSinceYesterday } from "@/lib/conditions/pure/changes";
+import { effectiveStatus, isStateActive } from "@/lib/conditions/pure/effective-status";
 
 describe("what changed since yesterday", () => {
   it("a status change is a change", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { hazardInputSchema, hazardPatchSchema } from "@/lib/validations/hazard";
-import { parkStateSchema, reportInputSchema, reportPostSchema, sweepSchema } from "@/lib/validations/report";
+import { hazardInputSchema, hazardPatchSchema } from "@/lib/hazards/pure/schemas";
+import { parkStateSchema, reportInputSchema, reportPostSchema, sweepSchema } from "@/lib/conditions/pure/schemas";
 
 const issues = (result: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) =>
   (result.error?.issues ?? []).map((i) => `${i.path.join(".")}: ${i.message}`);
@@ -97,8 +97,8 @@ describe("hazard validation", () => {
 
 describe("one vocabulary", () => {
   it("reports name surfaces exactly as the pressure engine reads them", async () => {
-    const { SURFACES: pressureSurfaces } = await import("@/lib/validations/pressure");
-    const { SURFACES: reportSurfaces } = await import("@/lib/conditions/vocabulary");
+    const { SURFACES: pressureSurfaces } = await import("@/lib/pressure/pure/schemas");
+    const { SURFACES: reportSurfaces } = await import("@/lib/conditions/pure/vocabulary");
     expect([...reportSurfaces]).toEqual([...pressureSurfaces]);
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { applyChange, draftFromStart, entryFromDraft } from "@/lib/conditions/sweep-draft";
+import { applyChange, draftFromStart, entryFromDraft } from "@/lib/conditions/pure/sweep-draft";
 
 const ID = "00000000-0000-4000-8000-000000000001";
 const yesterday = { status: "caution" as const, reason: "Soft berms", surfaces: ["damp"], features: { berms: "soft" as const }, note: null };

@@ -3,9 +3,9 @@ import path from "node:path";
 import { distance } from "@turf/turf";
 import gjv from "geojson-validation";
 import { describe, expect, it } from "vitest";
-import { contourLines } from "@/lib/map/contours";
-import { demoContours, demoElevationModel, demoRoads } from "@/lib/map/demo-map-layers";
-import { METRES_PER_DEGREE } from "@/lib/trails/limits";
+import { contourLines } from "@/lib/map/pure/contours";
+import { demoContours, demoElevationModel, demoRoads } from "@/scripts/demo/map-layers";
+import { METRES_PER_DEGREE } from "@/lib/trails/pure/limits";
 
 const DIR = path.resolve(__dirname, "../../../data/demo-park");
 const park = JSON.parse(readFileSync(path.join(DIR, "park.json"), "utf8"));

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { formatLength, formatParkTime, formatSurfaces } from "@/lib/map/format";
-import { applyMoveAnswer, moveRequest, undoRequest, type Pin } from "@/lib/map/pin-moves";
-import { statusKey, statusLabel } from "@/lib/map/status";
+import { formatLength, formatParkTime, formatSurfaces } from "@/lib/map/pure/format";
+import { applyMoveAnswer, moveRequest, undoRequest, type Pin } from "@/lib/map/pure/pin-moves";
+import { statusKey, statusLabel } from "@/lib/map/pure/status";
 
 describe("times in the park's own zone", () => {
   // America/Los_Angeles is UTC−8 in December (IANA time zone database).

@@ -1,10 +1,10 @@
 import { length, lineString, pointToLineDistance } from "@turf/turf";
 import gjv from "geojson-validation";
 import { describe, expect, it } from "vitest";
-import { hazardsCollection, trailFeaturesCollection, trailsCollection, type TrailRowForMap } from "@/lib/map/geojson";
-import { parkLayersCollection } from "@/lib/map/park-layers";
-import { trailLabelPoints } from "@/lib/map/trail-labels";
-import { trailMapPropertiesSchema } from "@/lib/validations/map";
+import { hazardsCollection, trailFeaturesCollection, trailsCollection, type TrailRowForMap } from "@/lib/map/pure/geojson";
+import { parkLayersCollection } from "@/lib/map/pure/park-layers";
+import { trailLabelPoints } from "@/lib/map/pure/trail-labels";
+import { trailMapPropertiesSchema } from "@/lib/map/pure/schemas";
 
 // Invented rows (a scenario of our own); RFC 7946 validity is checked by geojson-validation.
 const line: GeoJSON.LineString = { type: "LineString", coordinates: [[8.5, 46.8, 1500], [8.51, 46.8, 1450], [8.51, 46.81, 1400]] };

@@ -1,6 +1,6 @@
 import { destination, distance } from "@turf/turf";
 import { describe, expect, it } from "vitest";
-import { snapToTrail } from "@/lib/map/snap";
+import { snapToTrail } from "@/lib/map/pure/snap";
 
 // Reference values computed with Turf's own haversine distance (sphere of R = 6 371 008.8 m),
 // the same measure trail lengths use.

@@ -1,11 +1,11 @@
 import { validateStyleMin } from "@maplibre/maplibre-gl-style-spec";
 import type { LayerSpecification, StyleSpecification } from "maplibre-gl";
 import { describe, expect, it } from "vitest";
-import { LAYER_IDS, SOURCE_IDS, TOGGLE_GROUPS, TRAIL_LINE_LAYER_IDS, trailLineLayerId } from "@/lib/map/layer-ids";
-import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/status";
-import { buildParkStyle, overlayOnHostedStyle } from "@/lib/map/style";
-import { DIFFICULTIES } from "@/lib/trails/difficulty";
-import { difficultyValues } from "@/lib/validations/trail";
+import { LAYER_IDS, SOURCE_IDS, TOGGLE_GROUPS, TRAIL_LINE_LAYER_IDS, trailLineLayerId } from "@/lib/map/pure/layer-ids";
+import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/pure/status";
+import { buildParkStyle, overlayOnHostedStyle } from "@/lib/map/pure/style";
+import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { difficultyValues } from "@/lib/trails/pure/schemas";
 
 // Checked against the MapLibre style specification itself (@maplibre/maplibre-gl-style-spec,
 // the validator MapLibre GL JS ships with), not against our own reading of it.

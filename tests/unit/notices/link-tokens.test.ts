@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { signToken } from "@/lib/auth/tokens";
+import { signToken } from "@/lib/server/auth/tokens";
 import { confirmToken, readConfirmToken, readUnsubscribeToken, subscriptionLinks, unsubscribeToken } from "@/lib/notices/link-tokens";
 
 describe("signed subscription links", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { messageIdDomain, messageIdParts, noticeMessageId } from "@/lib/notices/message-id";
+import { messageIdDomain, messageIdParts, noticeMessageId } from "@/lib/notices/pure/message-id";
 
 describe("deterministic Message-ID per notice and rider", () => {
   it("has the msg-id form <left@right> (RFC 5322 §3.6.4) and is the same on every call", () => {

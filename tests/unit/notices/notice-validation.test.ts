@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { noticeFields, subscriptionFields } from "@/lib/validations/notice";
+import { noticeFields, subscriptionFields } from "@/lib/notices/pure/schemas";
 
 const trail = "6f1c2a52-3d4e-4f60-8a7b-9c0d1e2f3a4b";
 const inAnHour = () => new Date(Date.now() + 3_600_000).toISOString();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, retryDelayMs, type RetryPolicy } from "@/lib/notices/retry-policy";
+import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, retryDelayMs, type RetryPolicy } from "@/lib/notices/pure/retry-policy";
 
 const policy: RetryPolicy = { maxAttempts: 6, baseDelayMs: 1000, maxDelayMs: 10_000 };
 const now = new Date("2026-06-01T07:00:00Z");

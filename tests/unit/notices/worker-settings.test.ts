@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { DEFAULT_RETRY_POLICY } from "@/lib/notices/retry-policy";
+import { DEFAULT_RETRY_POLICY } from "@/lib/notices/pure/retry-policy";
 import { workerSettings } from "@/lib/notices/worker-settings";
 
 describe("notice worker settings", () => {

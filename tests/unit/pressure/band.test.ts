@@ -1,10 +1,10 @@
 // Band and limits. Floor drops and band widths are common practice, no published source.
 import { describe, expect, it } from "vitest";
-import { bandEdges, ceilingKpa, floorKpa, limitTarget } from "@/lib/pressure/band";
-import { estimateWheel } from "@/lib/pressure/estimate";
-import { ABSOLUTE_FLOOR_KPA } from "@/lib/pressure/settings";
-import { computePressureBand } from "@/lib/pressure";
-import { kpaToPsi, psiToKpa } from "@/lib/units";
+import { bandEdges, ceilingKpa, floorKpa, limitTarget } from "@/lib/pressure/pure/band";
+import { estimateWheel } from "@/lib/pressure/pure/estimate";
+import { ABSOLUTE_FLOOR_KPA } from "@/lib/pressure/pure/settings";
+import { computePressureBand } from "@/lib/pressure/pure";
+import { kpaToPsi, psiToKpa } from "@/lib/shared/units";
 import { adult, trailWheel29, withBaseline } from "./fixtures";
 
 describe("limits", () => {

@@ -2,11 +2,11 @@
 // entry (id, plain words, numbers, source), and its numbers come from settings.ts.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { computePressureBand } from "@/lib/pressure";
-import { RULE_SECTIONS, ruleIds } from "@/lib/pressure/catalogue";
-import { FEEDBACK_RULES } from "@/lib/pressure/feedback";
-import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/settings";
-import { CASINGS, FEATURES, PACES, SURFACES } from "@/lib/validations/pressure";
+import { computePressureBand } from "@/lib/pressure/pure";
+import { RULE_SECTIONS, ruleIds } from "@/lib/pressure/pure/catalogue";
+import { FEEDBACK_RULES } from "@/lib/pressure/pure/feedback";
+import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import { CASINGS, FEATURES, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
 
 const wheel = fc.record({
   bsdMm: fc.constantFrom(406, 507, 559, 584, 622 as const),

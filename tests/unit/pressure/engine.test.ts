@@ -1,11 +1,11 @@
 // End-to-end checks of computePressureBand. Pump readings: Gay-Lussac in absolute pressure and the
 // ISO 2533:1975 atmosphere (references.md); rule sizes are common practice, no published source.
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { gaugeAtConditions } from "@/lib/physics/gas";
-import { STANDARD_CAUTIONS } from "@/lib/pressure/cautions";
-import { computePressureBand, PUMP_REASON_PREFIX } from "@/lib/pressure";
-import { kpaToPsi, psiToKpa } from "@/lib/units";
+import { AppError } from "@/lib/shared/errors";
+import { gaugeAtConditions } from "@/lib/pressure/pure/physics/gas";
+import { STANDARD_CAUTIONS } from "@/lib/pressure/pure/cautions";
+import { computePressureBand, PUMP_REASON_PREFIX } from "@/lib/pressure/pure";
+import { kpaToPsi, psiToKpa } from "@/lib/shared/units";
 import { adult, sum, withBaseline } from "./fixtures";
 
 const targetReasons = (r: ReturnType<typeof computePressureBand>) => r.reasons.filter((x) => !x.id.startsWith(PUMP_REASON_PREFIX));

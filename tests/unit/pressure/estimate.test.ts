@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { designLoadN, estimatePressures, estimateWheel } from "@/lib/pressure/estimate";
-import { FRONT_STATIC_SHARE } from "@/lib/pressure/settings";
-import { kpaToPsi } from "@/lib/units";
-import { parsePressureInput } from "@/lib/pressure";
+import { designLoadN, estimatePressures, estimateWheel } from "@/lib/pressure/pure/estimate";
+import { FRONT_STATIC_SHARE } from "@/lib/pressure/pure/settings";
+import { kpaToPsi } from "@/lib/shared/units";
+import { parsePressureInput } from "@/lib/pressure/pure";
 import { adult, sum, trailWheel29 } from "./fixtures";
 
 const psi = (input: Parameters<typeof adult>[0] = {}) => {

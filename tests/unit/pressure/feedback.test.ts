@@ -1,7 +1,7 @@
 // Ride-log feedback: one change at a time, safety first (common practice, no published source).
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { FEEDBACK_RULES, suggestBaselineChange } from "@/lib/pressure/feedback";
+import { AppError } from "@/lib/shared/errors";
+import { FEEDBACK_RULES, suggestBaselineChange } from "@/lib/pressure/pure/feedback";
 
 describe("suggestBaselineChange", () => {
   it("documents the priority order: rim strike, burp, squirm, sliding, harsh", () => {

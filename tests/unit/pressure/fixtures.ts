@@ -1,6 +1,6 @@
 /** Invented example setups for the pressure tests (not data from any source). */
-import type { PressureInputRaw, WheelSetup } from "@/lib/validations/pressure";
-import { psiToKpa } from "@/lib/units";
+import type { PressureInputRaw, WheelSetup } from "@/lib/pressure/pure/schemas";
+import { psiToKpa } from "@/lib/shared/units";
 
 export const trailWheel29: WheelSetup = { bsdMm: 622, widthMm: 61, casing: "trail", insert: false, tubeless: true, maxKpa: 276 };
 

@@ -8,8 +8,8 @@
 // signs of `loose`, `wet` and of the formula in rules-grip.ts: each makes this file fail).
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { computePressureBand } from "@/lib/pressure";
-import { CASINGS, PACES, SURFACES, type PressureInputRaw, type Surface, type TrailConditions } from "@/lib/validations/pressure";
+import { computePressureBand } from "@/lib/pressure/pure";
+import { CASINGS, PACES, SURFACES, type PressureInputRaw, type Surface, type TrailConditions } from "@/lib/pressure/pure/schemas";
 import { adult, withBaseline } from "./fixtures";
 
 /** Surfaces that grip less than dry ground (everything but dry, tacky and rocky). */

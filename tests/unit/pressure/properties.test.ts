@@ -2,8 +2,8 @@
 // no published source; the bounds and "only AppError" are our own contract (security.md).
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { computePressureBand, PUMP_REASON_PREFIX, type PressureResult } from "@/lib/pressure";
+import { AppError } from "@/lib/shared/errors";
+import { computePressureBand, PUMP_REASON_PREFIX, type PressureResult } from "@/lib/pressure/pure";
 import {
   BEAD_SEAT_DIAMETERS_MM,
   CASINGS,
@@ -12,8 +12,8 @@ import {
   SURFACES,
   type PressureInput,
   type WheelSetup,
-} from "@/lib/validations/pressure";
-import { PRESSURE_UNITS } from "@/lib/units";
+} from "@/lib/pressure/pure/schemas";
+import { PRESSURE_UNITS } from "@/lib/shared/units";
 
 const wheelArb: fc.Arbitrary<WheelSetup> = fc.record(
   {

@@ -1,12 +1,12 @@
 // Today's tweak rules. The sizes are common practice, no published source; these tests check
 // directions, the share weighting, the reference comparison and the bound.
 import { describe, expect, it } from "vitest";
-import { planDay } from "@/lib/pressure/conditions";
-import { todaysTweak, type TweakInput } from "@/lib/pressure/rules";
-import { leastGrippy } from "@/lib/pressure/rules-grip";
-import { vulnerability } from "@/lib/pressure/rules-load";
-import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/settings";
-import type { DayConditions } from "@/lib/validations/pressure";
+import { planDay } from "@/lib/pressure/pure/conditions";
+import { todaysTweak, type TweakInput } from "@/lib/pressure/pure/rules";
+import { leastGrippy } from "@/lib/pressure/pure/rules-grip";
+import { vulnerability } from "@/lib/pressure/pure/rules-load";
+import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import type { DayConditions } from "@/lib/pressure/pure/schemas";
 import { sum, trailWheel29 } from "./fixtures";
 
 const trail = (name: string, surfaces: DayConditions["surfaces"] = [], features: DayConditions["features"] = []) => ({

@@ -1,8 +1,8 @@
 // Sag targets: rear 25–30 % of stroke, fork 15–25 % of travel — common practice, no published
 // standard (fork band from memory).
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { checkSag, sagPercent } from "@/lib/pressure/sag";
+import { AppError } from "@/lib/shared/errors";
+import { checkSag, sagPercent } from "@/lib/pressure/pure/sag";
 
 describe("sag", () => {
   it("sag % = sag ÷ stroke", () => {

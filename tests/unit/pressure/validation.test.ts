@@ -1,7 +1,7 @@
 // Input schemas: ISO 5775 bead-seat diameters (published); ranges and messages are our own contract.
 import { describe, expect, it } from "vitest";
-import { BEAD_SEAT_DIAMETERS_MM, pressureInputSchema, pressureRequestSchema } from "@/lib/validations/pressure";
-import { inputFromRequest } from "@/lib/pressure/conditions";
+import { BEAD_SEAT_DIAMETERS_MM, pressureInputSchema, pressureRequestSchema } from "@/lib/pressure/pure/schemas";
+import { inputFromRequest } from "@/lib/pressure/pure/conditions";
 import { adult, trailWheel29 } from "./fixtures";
 
 const firstIssue = (result: { success: boolean; error?: { issues: Array<{ path: PropertyKey[]; message: string }> } }) => {

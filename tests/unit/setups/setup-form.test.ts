@@ -10,7 +10,7 @@ import {
   parseSetupDraft,
   setupDraftSchema,
   type SetupDraft,
-} from "@/lib/validations/setup-form";
+} from "@/lib/setups/pure/setup-form";
 
 const filled = (overrides: Partial<SetupDraft> = {}): SetupDraft => {
   const base = emptySetupDraft({ pressure: "psi", mass: "kg" });

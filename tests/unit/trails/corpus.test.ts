@@ -1,8 +1,8 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { hasElevation, parseTrailFile } from "@/lib/trails";
+import { AppError } from "@/lib/shared/errors";
+import { hasElevation, parseTrailFile } from "@/lib/trails/pure";
 
 // The corpus lives in tests/fixtures/trails (built by build-corpus.ts there). Expected statuses
 // follow the refusal rules in docs/trail-geometry.md; the GPX 1.1 schema and RFC 7946 rules are

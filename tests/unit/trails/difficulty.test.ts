@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { computeTrailStats, DIFFICULTIES, suggestedDifficulty } from "@/lib/trails";
-import { difficultyValues } from "@/lib/validations/trail";
+import { computeTrailStats, DIFFICULTIES, suggestedDifficulty } from "@/lib/trails/pure";
+import { difficultyValues } from "@/lib/trails/pure/schemas";
 import { meridianLine } from "./helpers";
 
 // Source: IMBA Trail Difficulty Rating System (IMBA, Trail Solutions, 2004), as summarised in

@@ -1,7 +1,7 @@
 import gjv from "geojson-validation";
 import { DOMParser } from "@xmldom/xmldom";
 import { describe, expect, it } from "vitest";
-import { escapeXml, parseTrailFile, toGeoJson, toGpx, TRAIL_LIMITS, type ExportableTrail } from "@/lib/trails";
+import { escapeXml, parseTrailFile, toGeoJson, toGpx, TRAIL_LIMITS, type ExportableTrail } from "@/lib/trails/pure";
 import { bytes, meridianLine } from "./helpers";
 
 const trail: ExportableTrail = {

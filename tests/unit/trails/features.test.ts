@@ -1,7 +1,7 @@
 import { destination, multiLineString, nearestPointOnLine } from "@turf/turf";
 import { describe, expect, it } from "vitest";
-import { featureKind, snapFeatures } from "@/lib/trails";
-import { seededRandom, synthesizeTrail } from "@/lib/trails/synthetic";
+import { featureKind, snapFeatures } from "@/lib/trails/pure";
+import { seededRandom, synthesizeTrail } from "@/scripts/demo/synthetic-trails";
 import { meridianLine, metresToLatDegrees } from "./helpers";
 
 describe("featureKind (case-insensitive keywords, type before name)", () => {

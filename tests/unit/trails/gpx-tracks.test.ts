@@ -4,9 +4,9 @@ import { gpx } from "@tmcw/togeojson";
 import { DOMParser } from "@xmldom/xmldom";
 import type { Position } from "geojson";
 import { describe, expect, it } from "vitest";
-import { parseGpx } from "@/lib/trails/parse-gpx";
+import { parseGpx } from "@/lib/trails/pure/parse-gpx";
 
-// Track points are read by our own pass over the document (lib/trails/gpx-points.ts) instead of
+// Track points are read by our own pass over the document (lib/trails/pure/gpx-points.ts) instead of
 // @tmcw/togeojson; the reference library must still agree with us on every file we accept.
 function reference(text: string): { segments: Position[][]; name?: string } {
   const features = gpx(new DOMParser().parseFromString(text, "text/xml")).features;

@@ -1,6 +1,6 @@
 import { expect } from "vitest";
-import { AppError } from "@/lib/errors";
-import type { Position } from "@/lib/trails";
+import { AppError } from "@/lib/shared/errors";
+import type { Position } from "@/lib/trails/pure";
 
 /** Turf's sphere (packages/turf-helpers earthRadius). */
 export const R = 6_371_008.8;

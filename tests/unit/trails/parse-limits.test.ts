@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseTrailFile, TRAIL_LIMITS } from "@/lib/trails";
+import { parseTrailFile, TRAIL_LIMITS } from "@/lib/trails/pure";
 import { bytes, expectAppError, meridianLine } from "./helpers";
 
 const PARK = { lon: -121.94, lat: 47.3 };

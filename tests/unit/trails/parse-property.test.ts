@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { processTrailUpload, type ParseTrailInput } from "@/lib/trails";
+import { AppError } from "@/lib/shared/errors";
+import { processTrailUpload, type ParseTrailInput } from "@/lib/trails/pure";
 
 // Property-based checks (shared/notes/security.md, reliability practice): whatever arrives, the
 // parser returns a trail or throws AppError (413, 415 or 422), never anything else; what it

@@ -1,6 +1,6 @@
 import { along, destination, lineString, nearestPointOnLine } from "@turf/turf";
 import { describe, expect, it } from "vitest";
-import { featuresForNewLine, MAX_FEATURE_OFFSET_M, placeOnTrail, pointAtDistance, snapPointToTrail, trailLengthM } from "@/lib/trails/placement";
+import { featuresForNewLine, MAX_FEATURE_OFFSET_M, placeOnTrail, pointAtDistance, snapPointToTrail, trailLengthM } from "@/lib/trails/pure/placement";
 import { expectAppError, meridianLine, metresToLatDegrees } from "./helpers";
 
 const line = meridianLine(101, 10); // 1 km due north along lon −121.94

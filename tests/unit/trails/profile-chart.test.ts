@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { niceStep, profileChart, ticksBetween } from "@/lib/trails/profile-chart";
-import { M_PER_FT } from "@/lib/units";
+import { niceStep, profileChart, ticksBetween } from "@/lib/trails/pure/profile-chart";
+import { M_PER_FT } from "@/lib/shared/units";
 
 // Axis steps of 1, 2 or 5 × 10^n: Heckbert, "Nice numbers for graph labels", Graphics Gems (1990) — from memory.
 describe("axis steps", () => {

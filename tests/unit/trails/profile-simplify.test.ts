@@ -1,8 +1,8 @@
 import { pointToLineDistance } from "@turf/turf";
 import type { LineString } from "geojson";
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors";
-import { computeTrailStats, elevationProfile, simplifyLine } from "@/lib/trails";
+import { AppError } from "@/lib/shared/errors";
+import { computeTrailStats, elevationProfile, simplifyLine } from "@/lib/trails/pure";
 import { meridianLine, metresToLatDegrees, thrownBy } from "./helpers";
 
 describe("elevationProfile", () => {

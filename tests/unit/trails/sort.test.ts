@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { sortTrails, type SortableTrail } from "@/lib/trails/sort";
-import { trailListQuerySchema } from "@/lib/validations/trail";
+import { sortTrails, type SortableTrail } from "@/lib/trails/pure/sort";
+import { trailListQuerySchema } from "@/lib/trails/pure/schemas";
 
 const trail = (name: string, difficulty: string, lengthM: number, descentM: number | null, maxGradePct: number | null, kind = "flow"): SortableTrail => ({
   name,

@@ -1,7 +1,7 @@
 import { length as turfLength, lineString } from "@turf/turf";
 import { describe, expect, it } from "vitest";
-import { climbAndDescent, computeTrailStats, steepestGradePct } from "@/lib/trails";
-import { seededRandom } from "@/lib/trails/synthetic";
+import { climbAndDescent, computeTrailStats, steepestGradePct } from "@/lib/trails/pure";
+import { seededRandom } from "@/scripts/demo/synthetic-trails";
 import { R, meridianLine, metresToLatDegrees } from "./helpers";
 
 const relativeError = (actual: number, expected: number) => Math.abs(actual - expected) / Math.abs(expected);

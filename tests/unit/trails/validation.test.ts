@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { trailMetadataSchema, trailMetadataUpdateSchema, trailStatsSchema } from "@/lib/validations/trail";
-import { computeTrailStats } from "@/lib/trails";
+import { trailMetadataSchema, trailMetadataUpdateSchema, trailStatsSchema } from "@/lib/trails/pure/schemas";
+import { computeTrailStats } from "@/lib/trails/pure";
 import { meridianLine } from "./helpers";
 
 const valid = { name: "  Cedar Skip  ", difficulty: "easy", kind: "flow", direction: "downhill" };

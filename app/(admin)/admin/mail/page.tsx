@@ -1,5 +1,5 @@
-import { usesFakeMail } from "@/lib/env";
-import { capturedMail } from "@/lib/mail/captured";
+import { usesFakeMail } from "@/lib/server/env";
+import { capturedMail } from "@/lib/server/mail/captured";
 
 export const metadata = { title: "Sent mail (local)" };
 export const dynamic = "force-dynamic";

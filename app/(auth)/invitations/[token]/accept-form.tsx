@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
 import { Field, FormMessage } from "@/components/form-bits";
-import { acceptInvitationAction } from "@/lib/actions/account";
-import { initialFormState } from "@/lib/actions/form-state";
+import { acceptInvitationAction } from "@/lib/accounts/actions";
+import { initialFormState } from "@/lib/shared/form-state";
 
 export function AcceptInvitationForm({ token, needsPassword }: { token: string; needsPassword: boolean }) {
   const [state, action, pending] = useActionState(acceptInvitationAction, initialFormState);

@@ -1,10 +1,10 @@
 import Link from "next/link";
 import { ApplySuggestionButton } from "@/components/pressure/apply-suggestion-button";
-import { getActor } from "@/lib/auth/actor";
-import { listRideLogs } from "@/lib/data/ride-logs";
-import { canApply } from "@/lib/riders/suggestion";
-import { unitsFor } from "@/lib/riders/units";
-import { formatPressure } from "@/lib/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { listRideLogs } from "@/lib/setups/ride-log-queries";
+import { canApply } from "@/lib/setups/pure/suggestion";
+import { unitsFor } from "@/lib/accounts/units";
+import { formatPressure } from "@/lib/shared/units";
 
 export const metadata = { title: "My rides" };
 export const dynamic = "force-dynamic";

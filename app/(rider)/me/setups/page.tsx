@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { getActor } from "@/lib/auth/actor";
-import { setupSummary } from "@/lib/data/pressure-page";
-import { listSetups } from "@/lib/data/setups";
-import { unitsFor } from "@/lib/riders/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { setupSummary } from "@/lib/pressure/pressure-page";
+import { listSetups } from "@/lib/setups/setup-queries";
+import { unitsFor } from "@/lib/accounts/units";
 
 export const metadata = { title: "My setups" };
 export const dynamic = "force-dynamic";

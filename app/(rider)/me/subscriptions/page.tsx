@@ -1,6 +1,6 @@
-import { getActor } from "@/lib/auth/actor";
+import { getActor } from "@/lib/server/auth/actor";
 import { listSubscriptions } from "@/lib/notices/subscriptions";
-import type { NoticeKind } from "@/lib/validations/notice";
+import type { NoticeKind } from "@/lib/notices/pure/schemas";
 import { Park, Trail } from "@/models";
 import { RemoveSubscriptionForm } from "./remove-form";
 import { SubscriptionForm, type ParkChoice } from "./subscription-form";

@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { initialFormState } from "@/lib/actions/form-state";
-import { removeSubscriptionAction } from "@/lib/actions/subscriptions";
+import { initialFormState } from "@/lib/shared/form-state";
+import { removeSubscriptionAction } from "@/lib/notices/subscription-actions";
 
 export function RemoveSubscriptionForm({ subscriptionId, parkName }: { subscriptionId: string; parkName: string }) {
   const [state, action, pending] = useActionState(removeSubscriptionAction, initialFormState);

@@ -1,9 +1,9 @@
 "use client";
 import { useActionState, useState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { initialFormState } from "@/lib/actions/form-state";
-import { saveSubscriptionAction } from "@/lib/actions/subscriptions";
-import { NOTICE_KINDS, type NoticeKind } from "@/lib/validations/notice";
+import { initialFormState } from "@/lib/shared/form-state";
+import { saveSubscriptionAction } from "@/lib/notices/subscription-actions";
+import { NOTICE_KINDS, type NoticeKind } from "@/lib/notices/pure/schemas";
 
 export type ParkChoice = {
   slug: string;

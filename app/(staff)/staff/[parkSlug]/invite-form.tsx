@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
 import { Field, FormMessage } from "@/components/form-bits";
-import { inviteStaffAction } from "@/lib/actions/account";
-import { initialFormState } from "@/lib/actions/form-state";
+import { inviteStaffAction } from "@/lib/accounts/actions";
+import { initialFormState } from "@/lib/shared/form-state";
 
 export function InviteStaffForm({ parkSlug }: { parkSlug: string }) {
   const [state, action, pending] = useActionState(inviteStaffAction, initialFormState);

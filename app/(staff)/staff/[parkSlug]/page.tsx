@@ -1,9 +1,9 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { StaffConditionsLinks } from "@/components/board/staff-conditions-links";
-import { getActor } from "@/lib/auth/actor";
-import { can, roleInPark } from "@/lib/auth/permissions";
-import { listParkStaff } from "@/lib/data/parks";
+import { getActor } from "@/lib/server/auth/actor";
+import { can, roleInPark } from "@/lib/server/auth/permissions";
+import { listParkStaff } from "@/lib/parks/queries";
 import { Park } from "@/models";
 import { InviteStaffForm } from "./invite-form";
 

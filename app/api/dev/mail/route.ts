@@ -1,7 +1,7 @@
 // GET /api/dev/mail: messages captured by the local fake SMTP server (admins only).
-import { handler } from "@/lib/api/handler";
-import { authorize } from "@/lib/auth/permissions";
-import { capturedMail } from "@/lib/mail/captured";
+import { handler } from "@/lib/server/api/handler";
+import { authorize } from "@/lib/server/auth/permissions";
+import { capturedMail } from "@/lib/server/mail/captured";
 
 export const dynamic = "force-dynamic";
 

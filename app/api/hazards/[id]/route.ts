@@ -1,6 +1,6 @@
 // PATCH /api/hazards/{id}: resolve, reopen or edit a hazard ({lockVersion, resolved?, kind?, note?}) — staff of its park.
-import { handler, readJson } from "@/lib/api/handler";
-import { updateHazard } from "@/lib/conditions/hazards";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { updateHazard } from "@/lib/hazards/hazard-writes";
 
 export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) => {
   const hazard = await updateHazard(actor, params.id, await readJson(request, 10_000));

@@ -1,7 +1,7 @@
 // GET /api/me/ride-logs: the caller's ride logs. POST: log a ride → the one suggested baseline change.
-import { handler, readJson } from "@/lib/api/handler";
-import { listRideLogs } from "@/lib/data/ride-logs";
-import { createRideLog } from "@/lib/riders/ride-logs";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { listRideLogs } from "@/lib/setups/ride-log-queries";
+import { createRideLog } from "@/lib/setups/ride-logs";
 
 export const GET = handler(async ({ actor }) => Response.json({ rideLogs: await listRideLogs(actor) }));
 

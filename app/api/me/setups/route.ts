@@ -1,7 +1,7 @@
 // GET /api/me/setups: the caller's setups. POST /api/me/setups: save a new one.
-import { handler, readJson } from "@/lib/api/handler";
-import { listSetups } from "@/lib/data/setups";
-import { createSetup } from "@/lib/riders/setups";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { listSetups } from "@/lib/setups/setup-queries";
+import { createSetup } from "@/lib/setups/setup-writes";
 
 export const GET = handler(async ({ actor }) => Response.json({ setups: await listSetups(actor) }));
 

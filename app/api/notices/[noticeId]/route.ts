@@ -1,6 +1,6 @@
 // GET /api/notices/{noticeId}: a notice with its delivery counts by state (staff of its park).
-import { handler } from "@/lib/api/handler";
-import { getNotice } from "@/lib/data/notices";
+import { handler } from "@/lib/server/api/handler";
+import { getNotice } from "@/lib/notices/notice-queries";
 
 export const dynamic = "force-dynamic";
 

@@ -1,6 +1,6 @@
 // GET /api/parks/{parkSlug}: one park's public details.
-import { handler } from "@/lib/api/handler";
-import { getParkBySlug, parkSummary } from "@/lib/data/parks";
+import { handler } from "@/lib/server/api/handler";
+import { getParkBySlug, parkSummary } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -1,5 +1,5 @@
 // GET /api/photos/{id}?size=full|thumb: a hazard photo (public, like the board that shows it).
-import { errorResponse } from "@/lib/api/errors";
+import { errorResponse } from "@/lib/server/api/errors";
 import { photoResponse } from "@/lib/photos/serve-photo";
 
 export async function GET(request: Request, context: { params: Promise<{ id: string }> }) {

@@ -1,8 +1,8 @@
 // GET /api/subscriptions/confirm?token=: the e-mailed double opt-in link.
 // A GET because it is clicked in a mail client; the signed token, not a cookie, is the authority,
 // and confirming twice changes nothing. Browsers are sent on to a page; scripts get JSON.
-import { handler } from "@/lib/api/handler";
-import { env } from "@/lib/env";
+import { handler } from "@/lib/server/api/handler";
+import { env } from "@/lib/server/env";
 import { confirmSubscription } from "@/lib/notices/subscriptions";
 
 export const dynamic = "force-dynamic";

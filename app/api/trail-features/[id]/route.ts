@@ -1,8 +1,8 @@
 // PATCH /api/trail-features/{id}: staff move, retype, rename or resize a feature.
 // DELETE /api/trail-features/{id}: staff remove a feature.
-import { handler, readJson } from "@/lib/api/handler";
-import { featureView } from "@/lib/data/trails";
-import { deleteTrailFeature, updateTrailFeature } from "@/lib/trail-records/edit-features";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { featureView } from "@/lib/trails/queries";
+import { deleteTrailFeature, updateTrailFeature } from "@/lib/trails/edit-features";
 
 export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) => {
   const feature = await updateTrailFeature(actor, params.id, await readJson(request, 10_000));

@@ -4,11 +4,11 @@ import { notFound } from "next/navigation";
 import { MapLegend } from "@/components/map/map-legend";
 import { ParkMapLoader } from "@/components/map/park-map-loader";
 import { TrailTextList } from "@/components/map/trail-text-list";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/data/map";
-import { boundsAround, trailBounds } from "@/lib/map/bounds";
-import { parkDataUrls } from "@/lib/map/sources";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
+import { boundsAround, trailBounds } from "@/lib/map/pure/bounds";
+import { parkDataUrls } from "@/lib/map/pure/sources";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";

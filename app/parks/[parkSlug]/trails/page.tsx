@@ -1,12 +1,12 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { listParkTrails } from "@/lib/data/trails";
-import { distanceSystemFor } from "@/lib/data/user-units";
-import { formatDistance, formatGrade, formatHeight } from "@/lib/units";
-import { trailListQuerySchema, type TrailSortKey } from "@/lib/validations/trail";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { listParkTrails } from "@/lib/trails/queries";
+import { distanceSystemFor } from "@/lib/accounts/user-units";
+import { formatDistance, formatGrade, formatHeight } from "@/lib/shared/units";
+import { trailListQuerySchema, type TrailSortKey } from "@/lib/trails/pure/schemas";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";

@@ -1,10 +1,10 @@
 import Link from "next/link";
 import { RideLogForm } from "@/components/pressure/ride-log-form";
-import { getActor } from "@/lib/auth/actor";
-import { parkToday } from "@/lib/data/conditions";
-import { listSetups } from "@/lib/data/setups";
-import { trailsToday } from "@/lib/data/trails-today";
-import { unitsFor } from "@/lib/riders/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { parkToday } from "@/lib/conditions/park-today";
+import { listSetups } from "@/lib/setups/setup-queries";
+import { trailsToday } from "@/lib/pressure/trails-today";
+import { unitsFor } from "@/lib/accounts/units";
 import { Park } from "@/models";
 
 export const metadata = { title: "Log a ride" };

@@ -1,10 +1,10 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { SetupEditor } from "@/components/pressure/setup-editor";
-import { getActor } from "@/lib/auth/actor";
-import { findOwnSetup, setupView } from "@/lib/data/setups";
-import { AppError } from "@/lib/errors";
-import { unitsFor } from "@/lib/riders/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { findOwnSetup, setupView } from "@/lib/setups/setup-queries";
+import { AppError } from "@/lib/shared/errors";
+import { unitsFor } from "@/lib/accounts/units";
 
 export const metadata = { title: "Edit setup" };
 export const dynamic = "force-dynamic";

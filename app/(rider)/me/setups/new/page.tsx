@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { SetupEditor } from "@/components/pressure/setup-editor";
-import { getActor } from "@/lib/auth/actor";
-import { unitsFor } from "@/lib/riders/units";
+import { getActor } from "@/lib/server/auth/actor";
+import { unitsFor } from "@/lib/accounts/units";
 
 export const metadata = { title: "New setup" };
 export const dynamic = "force-dynamic";

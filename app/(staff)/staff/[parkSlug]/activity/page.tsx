@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { statusChanges } from "@/lib/data/activity";
-import { parkToday } from "@/lib/data/conditions";
-import { parkLocalTime, shiftDate } from "@/lib/time";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { statusChanges } from "@/lib/audit/activity";
+import { parkToday } from "@/lib/conditions/park-today";
+import { parkLocalTime, shiftDate } from "@/lib/shared/time";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";

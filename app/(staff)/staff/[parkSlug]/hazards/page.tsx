@@ -4,9 +4,9 @@ import { notFound } from "next/navigation";
 import { HazardList } from "@/components/board/hazard-list";
 import { HazardForm } from "@/components/hazards/hazard-form";
 import { ResolveHazardButton } from "@/components/hazards/resolve-button";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { openHazards, trailChoices } from "@/lib/data/hazards";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { openHazards, trailChoices } from "@/lib/hazards/hazard-queries";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";

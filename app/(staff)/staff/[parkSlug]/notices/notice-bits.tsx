@@ -1,4 +1,4 @@
-import type { DeliveryCounts } from "@/lib/data/notices";
+import type { DeliveryCounts } from "@/lib/notices/notice-queries";
 
 /** Small shared pieces of the notice pages. Status is always written out, never colour alone. */
 const KIND_STYLE: Record<string, string> = {

@@ -1,9 +1,9 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { listParkNotices } from "@/lib/data/notices";
-import { parkLocalDate, parkLocalTime } from "@/lib/time";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { listParkNotices } from "@/lib/notices/notice-queries";
+import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
 import { Park } from "@/models";
 import { DeliverySummary, KindLabel } from "./notice-bits";
 

@@ -3,10 +3,10 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ParkStateForm } from "@/components/sweep/park-state-form";
 import { SweepForm } from "@/components/sweep/sweep-form";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
 import { activeParkState } from "@/lib/conditions/park-state";
-import { sweepStart } from "@/lib/data/sweep-start";
+import { sweepStart } from "@/lib/conditions/sweep-start";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";

@@ -1,7 +1,7 @@
 // GET, PATCH (with lockVersion; 409 when stale), DELETE /api/me/setups/{setupId}: the caller's own setup only (else 404).
-import { handler, readJson } from "@/lib/api/handler";
-import { findOwnSetup, setupView } from "@/lib/data/setups";
-import { deleteSetup, updateSetup } from "@/lib/riders/setups";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { findOwnSetup, setupView } from "@/lib/setups/setup-queries";
+import { deleteSetup, updateSetup } from "@/lib/setups/setup-writes";
 
 type Params = { setupId: string };
 

@@ -1,5 +1,5 @@
 // DELETE /api/me/subscriptions/{subscriptionId}: stop and forget one of the caller's subscriptions.
-import { handler } from "@/lib/api/handler";
+import { handler } from "@/lib/server/api/handler";
 import { removeSubscription } from "@/lib/notices/subscriptions";
 
 export const DELETE = handler<{ subscriptionId: string }>(async ({ params, actor }) => {

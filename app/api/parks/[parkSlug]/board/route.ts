@@ -1,8 +1,8 @@
 // GET /api/parks/{parkSlug}/board: today's conditions board (public), from one indexed query.
 import { createHash } from "node:crypto";
-import { errorResponse } from "@/lib/api/errors";
-import { boardForPark } from "@/lib/data/board";
-import { notFound } from "@/lib/errors";
+import { errorResponse } from "@/lib/server/api/errors";
+import { boardForPark } from "@/lib/conditions/board";
+import { notFound } from "@/lib/shared/errors";
 
 export const dynamic = "force-dynamic";
 

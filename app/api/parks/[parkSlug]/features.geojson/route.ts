@@ -1,8 +1,8 @@
 // GET /api/parks/{parkSlug}/features.geojson: built features (berms, jumps, drops…) on the park's trails.
-import { geoJsonResponse } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { parkFeaturesGeoJson } from "@/lib/data/map";
-import { getParkBySlug } from "@/lib/data/parks";
+import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { parkFeaturesGeoJson } from "@/lib/map/map-queries";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

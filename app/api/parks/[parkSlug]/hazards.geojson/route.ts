@@ -1,8 +1,8 @@
 // GET /api/parks/{parkSlug}/hazards.geojson: the park's open hazard pins, for the map.
-import { geoJsonResponse } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { parkHazardsGeoJson } from "@/lib/data/map";
-import { getParkBySlug } from "@/lib/data/parks";
+import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { parkHazardsGeoJson } from "@/lib/map/map-queries";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -1,10 +1,10 @@
 // POST /api/parks/{parkSlug}/hazards: pin a hazard (multipart: kind, note, lon+lat or trailId+distanceAlongM, photos) — staff of the park.
-import { handler } from "@/lib/api/handler";
-import { readHazardForm } from "@/lib/api/multipart";
-import { authorize } from "@/lib/auth/permissions";
-import { createHazard } from "@/lib/conditions/hazards";
-import { getParkBySlug } from "@/lib/data/parks";
-import { MAX_HAZARD_BODY_BYTES } from "@/lib/photos/limits";
+import { handler } from "@/lib/server/api/handler";
+import { readHazardForm } from "@/lib/server/api/multipart";
+import { authorize } from "@/lib/server/auth/permissions";
+import { createHazard } from "@/lib/hazards/hazard-writes";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { MAX_HAZARD_BODY_BYTES } from "@/lib/photos/pure/limits";
 
 export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
   const park = await getParkBySlug(params.parkSlug);

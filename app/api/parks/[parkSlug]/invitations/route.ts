@@ -1,6 +1,6 @@
 // POST /api/parks/{parkSlug}/invitations: a manager invites staff by e-mail.
-import { handler, readJson } from "@/lib/api/handler";
-import { getParkBySlug } from "@/lib/data/parks";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { getParkBySlug } from "@/lib/parks/queries";
 import { inviteStaff } from "@/lib/staff/invitations";
 
 export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {

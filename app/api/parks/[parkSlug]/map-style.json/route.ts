@@ -1,7 +1,7 @@
 // GET /api/parks/{parkSlug}/map-style.json: the park's MapLibre style (our own, or ours over MAP_STYLE_URL).
-import { jsonWithEtag } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { getParkBySlug } from "@/lib/data/parks";
+import { jsonWithEtag } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { getParkBySlug } from "@/lib/parks/queries";
 import { parkMapStyle } from "@/lib/map/park-style";
 
 export const dynamic = "force-dynamic";

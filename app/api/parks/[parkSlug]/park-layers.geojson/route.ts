@@ -1,8 +1,8 @@
 // GET /api/parks/{parkSlug}/park-layers.geojson: the park's base layers (boundary, contours, roads, lifts, landmarks).
-import { geoJsonResponse } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { parkBaseLayersGeoJson } from "@/lib/data/map";
-import { getParkBySlug } from "@/lib/data/parks";
+import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { parkBaseLayersGeoJson } from "@/lib/map/map-queries";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

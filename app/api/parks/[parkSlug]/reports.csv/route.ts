@@ -1,9 +1,9 @@
 // GET /api/parks/{parkSlug}/reports.csv?from=&to=: current reports of every trail as CSV (staff of the park).
-import { handler } from "@/lib/api/handler";
-import { authorize } from "@/lib/auth/permissions";
-import { reportsCsv } from "@/lib/conditions/report-csv";
-import { getParkBySlug } from "@/lib/data/parks";
-import { parkReportsForExport, resolveRange } from "@/lib/data/report-history";
+import { handler } from "@/lib/server/api/handler";
+import { authorize } from "@/lib/server/auth/permissions";
+import { reportsCsv } from "@/lib/conditions/pure/report-csv";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { parkReportsForExport, resolveRange } from "@/lib/conditions/history";
 
 export const dynamic = "force-dynamic";
 

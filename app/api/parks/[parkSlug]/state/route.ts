@@ -1,7 +1,7 @@
 // POST /api/parks/{parkSlug}/state: set the park-wide state; DELETE clears it (staff of the park).
-import { handler, readJson } from "@/lib/api/handler";
+import { handler, readJson } from "@/lib/server/api/handler";
 import { clearParkState, setParkState } from "@/lib/conditions/park-state";
-import { getParkBySlug } from "@/lib/data/parks";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
   const park = await getParkBySlug(params.parkSlug);

@@ -1,7 +1,7 @@
 // POST /api/parks/{parkSlug}/sweep: the morning sweep, every marked trail in one transaction (staff of the park).
-import { handler, readJson } from "@/lib/api/handler";
+import { handler, readJson } from "@/lib/server/api/handler";
 import { saveSweep } from "@/lib/conditions/sweep";
-import { getParkBySlug } from "@/lib/data/parks";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const POST = handler<{ parkSlug: string }>(async ({ request, params, actor }) => {
   const park = await getParkBySlug(params.parkSlug);

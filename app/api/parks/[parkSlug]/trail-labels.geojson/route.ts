@@ -1,9 +1,9 @@
 // GET /api/parks/{parkSlug}/trail-labels.geojson: where the map writes each trail's name and status.
-import { geoJsonResponse } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { parkTrailsGeoJson } from "@/lib/data/map";
-import { getParkBySlug } from "@/lib/data/parks";
-import { trailLabelPoints } from "@/lib/map/trail-labels";
+import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { parkTrailsGeoJson } from "@/lib/map/map-queries";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { trailLabelPoints } from "@/lib/map/pure/trail-labels";
 
 export const dynamic = "force-dynamic";
 

@@ -1,8 +1,8 @@
 // GET /api/parks/{parkSlug}/trails.geojson: the park's trails with today's status, for the map.
-import { geoJsonResponse } from "@/lib/api/geojson-response";
-import { handler } from "@/lib/api/handler";
-import { parkTrailsGeoJson } from "@/lib/data/map";
-import { getParkBySlug } from "@/lib/data/parks";
+import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+import { handler } from "@/lib/server/api/handler";
+import { parkTrailsGeoJson } from "@/lib/map/map-queries";
+import { getParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -1,12 +1,12 @@
 // GET /api/parks/{parkSlug}/trails: the park's trails with their figures (public).
 // POST /api/parks/{parkSlug}/trails: staff upload a GPX or GeoJSON file (multipart) to create a trail.
-import { handler } from "@/lib/api/handler";
-import { getParkBySlug } from "@/lib/data/parks";
-import { getTrailDetail, listParkTrails } from "@/lib/data/trails";
-import { uploadResultView } from "@/lib/trail-records/preview";
-import { receiveTrailUpload } from "@/lib/trail-records/receive-upload";
-import { createTrailFromUpload } from "@/lib/trail-records/save-upload";
-import { trailListQuerySchema } from "@/lib/validations/trail";
+import { handler } from "@/lib/server/api/handler";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { getTrailDetail, listParkTrails } from "@/lib/trails/queries";
+import { uploadResultView } from "@/lib/trails/preview";
+import { receiveTrailUpload } from "@/lib/trails/receive-upload";
+import { createTrailFromUpload } from "@/lib/trails/save-upload";
+import { trailListQuerySchema } from "@/lib/trails/pure/schemas";
 
 export const GET = handler<{ parkSlug: string }>(async ({ request, params }) => {
   const park = await getParkBySlug(params.parkSlug);

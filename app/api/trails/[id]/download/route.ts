@@ -1,7 +1,7 @@
 // GET /api/trails/{id}/download?format=gpx|geojson&version=N: the trail's file as an attachment (public).
-import { handler } from "@/lib/api/handler";
-import { trailDownload } from "@/lib/data/trail-download";
-import { trailDownloadQuerySchema } from "@/lib/validations/trail";
+import { handler } from "@/lib/server/api/handler";
+import { trailDownload } from "@/lib/trails/download";
+import { trailDownloadQuerySchema } from "@/lib/trails/pure/schemas";
 
 export const GET = handler<{ id: string }>(async ({ request, params, actor }) => {
   const query = trailDownloadQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));

@@ -1,7 +1,7 @@
 // POST /api/trails/{id}/features: staff add a feature (kind, size, and lon/lat snapped onto the line or distanceAlongM).
-import { handler, readJson } from "@/lib/api/handler";
-import { featureView } from "@/lib/data/trails";
-import { addTrailFeature } from "@/lib/trail-records/edit-features";
+import { handler, readJson } from "@/lib/server/api/handler";
+import { featureView } from "@/lib/trails/queries";
+import { addTrailFeature } from "@/lib/trails/edit-features";
 
 export const POST = handler<{ id: string }>(async ({ request, params, actor }) => {
   const feature = await addTrailFeature(actor, params.id, await readJson(request, 10_000));

@@ -1,10 +1,10 @@
 // POST /api/trails/{id}/hazards: pin a hazard on this trail (multipart: kind, note, lon+lat or distanceAlongM, photos) — staff of its park.
-import { handler } from "@/lib/api/handler";
-import { readHazardForm } from "@/lib/api/multipart";
-import { authorize } from "@/lib/auth/permissions";
-import { createHazard } from "@/lib/conditions/hazards";
+import { handler } from "@/lib/server/api/handler";
+import { readHazardForm } from "@/lib/server/api/multipart";
+import { authorize } from "@/lib/server/auth/permissions";
+import { createHazard } from "@/lib/hazards/hazard-writes";
 import { loadTrailWithPark } from "@/lib/conditions/write-report";
-import { MAX_HAZARD_BODY_BYTES } from "@/lib/photos/limits";
+import { MAX_HAZARD_BODY_BYTES } from "@/lib/photos/pure/limits";
 
 export const POST = handler<{ id: string }>(async ({ request, params, actor }) => {
   const { trail, park } = await loadTrailWithPark(params.id);

@@ -1,8 +1,8 @@
 // POST /api/trails/{id}/line: staff upload a new line for a trail (multipart "file"); earlier versions are kept.
-import { handler } from "@/lib/api/handler";
-import { getTrailDetail, liveTrailParkId } from "@/lib/data/trails";
-import { receiveTrailUpload } from "@/lib/trail-records/receive-upload";
-import { replaceTrailLine } from "@/lib/trail-records/save-upload";
+import { handler } from "@/lib/server/api/handler";
+import { getTrailDetail, liveTrailParkId } from "@/lib/trails/queries";
+import { receiveTrailUpload } from "@/lib/trails/receive-upload";
+import { replaceTrailLine } from "@/lib/trails/save-upload";
 
 export const POST = handler<{ id: string }>(async ({ request, params, actor }) => {
   const parkId = await liveTrailParkId(params.id);

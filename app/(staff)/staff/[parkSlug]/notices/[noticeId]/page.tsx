@@ -1,11 +1,11 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { DELIVERY_STATES, getNotice, listDeliveries } from "@/lib/data/notices";
-import { AppError } from "@/lib/errors";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { DELIVERY_STATES, getNotice, listDeliveries } from "@/lib/notices/notice-queries";
+import { AppError } from "@/lib/shared/errors";
 import { formatClosedUntil } from "@/lib/notices/compose";
-import { parkLocalDate, parkLocalTime } from "@/lib/time";
+import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
 import { KindLabel, STATE_TEXT } from "../notice-bits";
 import { RetryFailedForm } from "./retry-form";
 

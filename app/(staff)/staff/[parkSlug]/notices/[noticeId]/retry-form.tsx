@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { retryFailedAction } from "@/lib/actions/notices";
-import { initialFormState } from "@/lib/actions/form-state";
+import { retryFailedAction } from "@/lib/notices/notice-actions";
+import { initialFormState } from "@/lib/shared/form-state";
 
 export function RetryFailedForm({ parkSlug, noticeId, failed }: { parkSlug: string; noticeId: string; failed: number }) {
   const [state, action, pending] = useActionState(retryFailedAction, initialFormState);

@@ -1,8 +1,8 @@
 "use client";
 import { useActionState, useState } from "react";
 import { FormMessage } from "@/components/form-bits";
-import { noticeFormAction, type NoticeFormState } from "@/lib/actions/notices";
-import type { NoticeKind } from "@/lib/validations/notice";
+import { noticeFormAction, type NoticeFormState } from "@/lib/notices/notice-actions";
+import type { NoticeKind } from "@/lib/notices/pure/schemas";
 
 type Trail = { id: string; name: string; difficulty: string };
 export type NoticeDraft = { kind: NoticeKind; scope: "park" | "trails"; trailIds: string[]; message: string; closedUntil: string };

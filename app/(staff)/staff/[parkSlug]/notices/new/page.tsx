@@ -1,10 +1,10 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { parkTrailChoices } from "@/lib/data/notices";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { parkTrailChoices } from "@/lib/notices/notice-queries";
 import { Park } from "@/models";
-import { MESSAGE_MAX, NOTICE_KINDS, type NoticeKind } from "@/lib/validations/notice";
+import { MESSAGE_MAX, NOTICE_KINDS, type NoticeKind } from "@/lib/notices/pure/schemas";
 import { NoticeForm, type NoticeDraft } from "./notice-form";
 
 export const metadata = { title: "New notice" };

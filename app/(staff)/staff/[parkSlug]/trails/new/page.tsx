@@ -1,8 +1,8 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { distanceSystemFor } from "@/lib/data/user-units";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { Park } from "@/models";
 import { TrailUploadForm } from "./upload-form";
 

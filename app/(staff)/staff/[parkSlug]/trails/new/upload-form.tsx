@@ -6,9 +6,9 @@ import { FileDrop, UploadProgress } from "@/components/file-drop";
 import { TrailFiguresList } from "@/components/trail-figures";
 import { TrailMetadataFields, type MetadataValues } from "@/components/trail-metadata-fields";
 import { uploadForm, type ApiError } from "@/lib/client/api-request";
-import type { UploadPreview } from "@/lib/trail-records/preview";
-import { TRAIL_LIMITS } from "@/lib/trails/limits";
-import { formatDistance, type DistanceSystem } from "@/lib/units";
+import type { UploadPreview } from "@/lib/trails/preview";
+import { TRAIL_LIMITS } from "@/lib/trails/pure/limits";
+import { formatDistance, type DistanceSystem } from "@/lib/shared/units";
 
 const ACCEPT = ".gpx,.geojson,.json,application/gpx+xml,application/geo+json";
 const MB = 1024 * 1024;

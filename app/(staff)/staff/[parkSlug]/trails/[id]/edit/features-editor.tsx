@@ -2,9 +2,9 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { sendJson } from "@/lib/client/api-request";
-import type { TrailFeatureView } from "@/lib/data/trails";
-import { ftToM, lengthUnitOf, mToFt, type DistanceSystem } from "@/lib/units";
-import { featureKindValues, featureSizeValues } from "@/lib/validations/trail";
+import type { TrailFeatureView } from "@/lib/trails/queries";
+import { ftToM, lengthUnitOf, mToFt, type DistanceSystem } from "@/lib/shared/units";
+import { featureKindValues, featureSizeValues } from "@/lib/trails/pure/schemas";
 
 type Draft = { kind: string; size: string; name: string; distance: string };
 

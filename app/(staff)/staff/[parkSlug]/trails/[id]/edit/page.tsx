@@ -1,9 +1,9 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { getActor } from "@/lib/auth/actor";
-import { can } from "@/lib/auth/permissions";
-import { getTrailDetail } from "@/lib/data/trails";
-import { distanceSystemFor } from "@/lib/data/user-units";
+import { getActor } from "@/lib/server/auth/actor";
+import { can } from "@/lib/server/auth/permissions";
+import { getTrailDetail } from "@/lib/trails/queries";
+import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { Park } from "@/models";
 import { ArchiveTrailButton } from "./archive-button";
 import { FeaturesEditor } from "./features-editor";

@@ -1,0 +1,36 @@
+"use server";
+import { redirect } from "next/navigation";
+import { signUpRider } from "@/lib/accounts/sign-up";
+import { getActor } from "@/lib/server/auth/actor";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { acceptInvitation, inviteStaff } from "@/lib/staff/invitations";
+import { formError, type FormState } from "../shared/form-state";
+
+/** Server actions are reachable by a direct POST: each one checks its caller itself. */
+export async function signUpAction(_prev: FormState, form: FormData): Promise<FormState> {
+  try {
+    await signUpRider({ name: form.get("name"), email: form.get("email"), password: form.get("password") });
+  } catch (error) {
+    return formError(error, form);
+  }
+  redirect("/sign-in?created=1");
+}
+
+export async function acceptInvitationAction(_prev: FormState, form: FormData): Promise<FormState> {
+  try {
+    await acceptInvitation({ token: form.get("token"), name: form.get("name"), password: form.get("password") ?? "" });
+  } catch (error) {
+    return formError(error, form);
+  }
+  redirect("/sign-in?joined=1");
+}
+
+export async function inviteStaffAction(_prev: FormState, form: FormData): Promise<FormState> {
+  try {
+    const park = await getParkBySlug(String(form.get("parkSlug") ?? ""));
+    const invitation = await inviteStaff(await getActor(), park.id, { email: form.get("email"), role: form.get("role") });
+    return { ok: true, message: `Invitation sent to ${invitation.email}.` };
+  } catch (error) {
+    return formError(error, form);
+  }
+}

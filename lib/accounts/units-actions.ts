@@ -1,0 +1,16 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { getActor } from "@/lib/server/auth/actor";
+import { updateUnits } from "@/lib/accounts/units";
+import { formError, type FormState } from "../shared/form-state";
+
+/** Server actions are reachable by a direct POST: updateUnits checks the caller itself. */
+export async function updateUnitsAction(_prev: FormState, form: FormData): Promise<FormState> {
+  try {
+    await updateUnits(await getActor(), { pressure: form.get("pressure"), mass: form.get("mass"), distance: form.get("distance") });
+  } catch (error) {
+    return formError(error, form);
+  }
+  revalidatePath("/", "layout");
+  return { ok: true, message: "Units saved." };
+}

@@ -1,0 +1,29 @@
+import { hazardView, type HazardView } from "@/lib/hazards/hazard-writes";
+import { Hazard, Photo, Trail } from "@/models";
+
+export type HazardListItem = HazardView & { trailName: string | null };
+
+/** A park's open hazards, newest first, with trail names and photo ids. */
+export async function openHazards(parkId: string): Promise<HazardListItem[]> {
+  const rows = await Hazard.findAll({
+    where: { parkId, resolvedAt: null },
+    include: [
+      { model: Photo, as: "photos", attributes: ["id", "createdAt"] },
+      { model: Trail, as: "trail", attributes: ["name"] },
+    ],
+    order: [
+      ["reportedAt", "DESC"],
+      [{ model: Photo, as: "photos" }, "createdAt", "ASC"],
+    ],
+  });
+  return rows.map((h) => {
+    const joined = h as Hazard & { photos: Photo[]; trail: Trail | null };
+    return { ...hazardView(h, joined.photos), trailName: joined.trail?.name ?? null };
+  });
+}
+
+/** The trails a hazard can be pinned to, with their lengths for "distance along". */
+export async function trailChoices(parkId: string) {
+  const trails = await Trail.findAll({ where: { parkId, archivedAt: null }, attributes: ["id", "name", "lengthM"], order: [["name", "ASC"]] });
+  return trails.map((t) => ({ id: t.id, name: t.name, lengthM: Math.floor(t.lengthM) }));
+}

@@ -1,0 +1,75 @@
+import { OptimisticLockError } from "sequelize";
+import { z } from "zod";
+import { distance } from "@turf/turf";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { AppError, conflict, notFound, unauthorized } from "@/lib/shared/errors";
+import { MAX_SNAP_OFFSET_M, snapToTrail } from "@/lib/map/pure/snap";
+import { TRAIL_LIMITS } from "@/lib/trails/pure/limits";
+import { moveHazardSchema, moveTrailFeatureSchema } from "@/lib/map/pure/schemas";
+import { AuditEvent, Hazard, Park, Trail, TrailFeature, sequelize } from "@/models";
+
+/**
+ * Staff moving pins on the map. Each move is validated, checked against the caller's park role,
+ * written with its audit event in one transaction, and returns the previous position so the
+ * page can offer an undo (which is simply another move).
+ */
+type Position = { lon: number; lat: number };
+const isUuid = (id: string) => z.uuid().safeParse(id).success;
+
+export async function moveTrailFeature(actor: Actor | null, featureId: string, body: unknown) {
+  if (!actor) throw unauthorized();
+  const to = moveTrailFeatureSchema.parse(body);
+  if (!isUuid(featureId)) throw notFound("Trail feature not found.");
+  const feature = await TrailFeature.findByPk(featureId, { include: [{ model: Trail, as: "trail", attributes: ["id", "parkId", "name", "geometry", "archivedAt"] }] });
+  const trail = (feature as (TrailFeature & { trail?: Trail }) | null)?.trail;
+  if (!feature || !trail || trail.archivedAt) throw notFound("Trail feature not found.");
+  authorize(actor, "trail:write", { parkId: trail.parkId });
+
+  const snapped = snapToTrail(trail.geometry, to.lon, to.lat);
+  if (snapped.offsetM > MAX_SNAP_OFFSET_M) {
+    throw new AppError(422, `Drop the feature on its trail: that spot is ${Math.round(snapped.offsetM)} m from ${trail.name} (at most ${MAX_SNAP_OFFSET_M} m).`, "lon");
+  }
+  const previous: Position = { lon: feature.lon, lat: feature.lat };
+  await sequelize.transaction(async (transaction) => {
+    await feature.update({ lon: snapped.lon, lat: snapped.lat, distanceAlongM: snapped.distanceAlongM }, { transaction });
+    await AuditEvent.create(
+      { parkId: trail.parkId, actorId: actor.id, action: "trail-feature.move", subjectType: "trail-feature", subjectId: feature.id, data: { from: previous, to: snapped } },
+      { transaction },
+    );
+  });
+  return {
+    feature: { id: feature.id, trailId: trail.id, kind: feature.kind, lon: feature.lon, lat: feature.lat, distanceAlongM: feature.distanceAlongM },
+    previous,
+  };
+}
+
+export async function moveHazard(actor: Actor | null, hazardId: string, body: unknown) {
+  if (!actor) throw unauthorized();
+  const to = moveHazardSchema.parse(body);
+  if (!isUuid(hazardId)) throw notFound("Hazard not found.");
+  // Its lockVersion decides the write: read it from the primary (README, Scaling out).
+  const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
+  if (!hazard) throw notFound("Hazard not found.");
+  authorize(actor, "hazard:write", { parkId: hazard.parkId });
+  if (hazard.resolvedAt) throw conflict("This hazard has been resolved; it can no longer be moved.");
+  if (hazard.lockVersion !== to.lockVersion) throw conflict("Someone else changed this hazard since you loaded the map. Reload and try again.", { lockVersion: hazard.lockVersion });
+
+  const park = await Park.findByPk(hazard.parkId, { attributes: ["centerLon", "centerLat"] });
+  const fromCentreM = distance([park!.centerLon, park!.centerLat], [to.lon, to.lat], { units: "meters" });
+  if (fromCentreM > TRAIL_LIMITS.maxDistanceFromParkM) throw new AppError(422, "That spot is far outside the park. Drop the pin where the hazard is.", "lon");
+
+  const previous: Position = { lon: hazard.lon, lat: hazard.lat };
+  try {
+    await sequelize.transaction(async (transaction) => {
+      await hazard.update({ lon: to.lon, lat: to.lat }, { transaction });
+      await AuditEvent.create(
+        { parkId: hazard.parkId, actorId: actor.id, action: "hazard.move", subjectType: "hazard", subjectId: hazard.id, data: { from: previous, to: { lon: to.lon, lat: to.lat } } },
+        { transaction },
+      );
+    });
+  } catch (error) {
+    if (error instanceof OptimisticLockError) throw conflict("Someone else changed this hazard a moment ago. Reload and try again.");
+    throw error;
+  }
+  return { hazard: { id: hazard.id, lon: hazard.lon, lat: hazard.lat, lockVersion: hazard.lockVersion }, previous };
+}

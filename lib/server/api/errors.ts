@@ -1,0 +1,27 @@
+import { ZodError } from "zod";
+import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
+import { AppError } from "@/lib/shared/errors";
+
+export type ErrorBody = { error: { message: string; field?: string; details?: unknown } };
+
+/** One mapping from anything thrown to one JSON error shape (ASVS 16.5.1: generic text for the unexpected). */
+export function errorResponse(error: unknown): Response {
+  if (error instanceof AppError) {
+    const body: ErrorBody = { error: { message: error.message, field: error.field, details: error.details } };
+    return Response.json(body, { status: error.status });
+  }
+  if (error instanceof ZodError) {
+    const issue = error.issues[0];
+    const field = issue?.path.join(".") || undefined;
+    return Response.json({ error: { message: issue?.message ?? "Invalid input.", field } } satisfies ErrorBody, { status: 400 });
+  }
+  if (error instanceof SyntaxError) {
+    return Response.json({ error: { message: "The request body is not valid JSON." } } satisfies ErrorBody, { status: 400 });
+  }
+  if (isDatabaseUnavailable(error)) {
+    console.error("[api] database unavailable:", (error as Error).message);
+    return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } } satisfies ErrorBody, { status: 503, headers: { "retry-after": "5" } });
+  }
+  console.error("[api] unexpected error:", error);
+  return Response.json({ error: { message: "Something went wrong on our side." } } satisfies ErrorBody, { status: 500 });
+}
