@@ -1,7 +1,9 @@
+import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
 
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  // Tests run lib/ code outside Next.js: "server-only" resolves to its empty react-server entry, as it does in the app's server bundle.
+  resolve: { tsconfigPaths: true, alias: { "server-only": fileURLToPath(new URL("./node_modules/server-only/empty.js", import.meta.url)) } },
   test: {
     projects: [
       {

@@ -41,7 +41,7 @@ async function serveBare(port: number) {
 
 async function startBareServer(): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();
-  const child = spawnTracked("node_modules/.bin/tsx", ["bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
+  const child = spawnTracked("node_modules/.bin/tsx", ["--conditions=react-server", "bench/board-api.ts", "--serve-bare", String(port), "--slug", SLUG], { stdio: "ignore", env: process.env });
   const url = `http://127.0.0.1:${port}/`;
   await waitFor(url);
   return { url, child };

@@ -44,7 +44,7 @@ let running: ChildProcess | null = null;
 /** Runs one benchmark, echoing its output, and returns the rows of its BENCH_RESULT lines. */
 function runBench(bench: Bench, base: string): Promise<BenchRow[]> {
   return new Promise((resolve, reject) => {
-    const child = spawnTracked(path.join(process.cwd(), "node_modules/.bin/tsx"), [path.join("bench", bench.file), ...bench.args(base)], {
+    const child = spawnTracked(path.join(process.cwd(), "node_modules/.bin/tsx"), ["--conditions=react-server", path.join("bench", bench.file), ...bench.args(base)], {
       stdio: ["ignore", "pipe", "inherit"],
       env: { ...process.env, ...bench.env, BENCH_JSON: "1" },
     });

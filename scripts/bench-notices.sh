@@ -9,5 +9,5 @@ pg_ensure_installed
 if pg_as_owner "$PG_BIN/pg_ctl" -D "$(pg_cluster_dir test)/data" status >/dev/null 2>&1; then was_running=1; else was_running=0; fi
 pg_start test "$PG_PORT" "$PG_PASSWORD"
 [ "$was_running" = 1 ] || trap 'pg_stop test' EXIT
-node_modules/.bin/tsx scripts/db.ts prepare
-node_modules/.bin/tsx bench/notices-fanout.ts
+node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
+node_modules/.bin/tsx --conditions=react-server bench/notices-fanout.ts

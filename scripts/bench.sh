@@ -24,9 +24,9 @@ trap cleanup EXIT INT TERM
 
 pg_start bench "$PG_PORT" "$PG_PASSWORD"
 rm -rf "$PHOTO_STORAGE_DIR"
-node_modules/.bin/tsx scripts/db.ts fresh
+node_modules/.bin/tsx --conditions=react-server scripts/db.ts fresh
 build_if_needed
 # The notice benchmark starts its own fake SMTP server on free ports; nothing else sends mail.
-node_modules/.bin/tsx bench/run-all.ts "$@" &
+node_modules/.bin/tsx --conditions=react-server bench/run-all.ts "$@" &
 CHILD_PIDS+=($!)
 wait "${CHILD_PIDS[-1]}"

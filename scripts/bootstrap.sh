@@ -79,7 +79,7 @@ CHILD_PIDS=()
 start_fake_smtp() {
   [ -n "${FAKE_SMTP_CONTROL_URL:-}" ] || return 0
   port_free_or_die "$(node -e 'console.log(new URL(process.env.SMTP_URL).port)')" "fake SMTP server"
-  node --import tsx scripts/fake-smtp.ts &
+  node --conditions=react-server --import tsx scripts/fake-smtp.ts &
   CHILD_PIDS+=($!)
   for _ in $(seq 1 50); do
     node -e 'fetch(process.env.FAKE_SMTP_CONTROL_URL + "/messages").then(r => process.exit(r.ok ? 0 : 1), () => process.exit(1))' && return 0

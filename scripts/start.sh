@@ -19,10 +19,10 @@ cleanup() {
 trap cleanup EXIT INT TERM
 
 pg_start dev "$PG_PORT" "$PG_PASSWORD"
-node_modules/.bin/tsx scripts/db.ts prepare
+node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
 start_fake_smtp
 build_if_needed
-if [ -f scripts/worker.ts ]; then node --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
+if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 say "› Loamcast on http://localhost:$PORT  (demo accounts in README.md; Ctrl-C stops everything)"
 node_modules/.bin/next start -p "$PORT" &
 CHILD_PIDS+=($!)

@@ -22,9 +22,9 @@ trap cleanup EXIT INT TERM
 pg_start test "$PG_PORT" "$PG_PASSWORD" || exit 1
 # Photos first: the demo seed writes its hazard photos into the fresh folder.
 rm -rf "$PHOTO_STORAGE_DIR"
-node_modules/.bin/tsx scripts/db.ts fresh || exit 1
+node_modules/.bin/tsx --conditions=react-server scripts/db.ts fresh || exit 1
 INTEGRATION_DATABASE_URL="${DATABASE_URL%/*}/loamcast_integration"
-DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/tsx scripts/db.ts fresh || exit 1
+DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/tsx --conditions=react-server scripts/db.ts fresh || exit 1
 start_fake_smtp
 rm -rf .local/test-results && mkdir -p .local/test-results
 

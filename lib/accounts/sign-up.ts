@@ -1,3 +1,4 @@
+import "server-only";
 import { UniqueConstraintError } from "sequelize";
 import { AppError } from "@/lib/shared/errors";
 import { AuditEvent, User } from "@/models";

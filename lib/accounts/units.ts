@@ -1,3 +1,4 @@
+import "server-only";
 /** A rider's display units, stored on their own account (User.units). */
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { parseInput } from "@/lib/shared/parse";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { distanceSystemOf, type DistanceSystem } from "@/lib/shared/units";
 import { User } from "@/models";

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The board in ONE statement, whatever the number of trails: the park (found by slug, its
  * park-local "today" computed from $2 in its own time zone), the park-wide state in force,

@@ -1,3 +1,4 @@
+import "server-only";
 import { QueryTypes } from "sequelize";
 import { changesSinceYesterday, type DayChanges } from "@/lib/conditions/pure/changes";
 import { effectiveStatus } from "@/lib/conditions/pure/effective-status";

@@ -1,3 +1,4 @@
+import "server-only";
 import { Op } from "sequelize";
 import { reportView, type ReportView } from "@/lib/conditions/report-view";
 import { AppError } from "@/lib/shared/errors";

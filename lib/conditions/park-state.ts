@@ -1,3 +1,4 @@
+import "server-only";
 /** The park-wide state staff set ("whole park closed: lightning") and clear. One in force at a time. */
 import { Op, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";

@@ -1,3 +1,4 @@
+import "server-only";
 import { parkLocalDate } from "@/lib/shared/time";
 import { TrailReport, sequelize } from "@/models";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import type { FeatureStates, ReportInput, ReportStatus, Surface } from "@/lib/conditions/pure/schemas";
 import type { TrailReport } from "@/models";
 

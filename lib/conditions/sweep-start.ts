@@ -1,3 +1,4 @@
+import "server-only";
 import { reportValues } from "@/lib/conditions/report-view";
 import type { ReportInput } from "@/lib/conditions/pure/schemas";
 import { Trail, type Park } from "@/models";

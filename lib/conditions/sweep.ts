@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The morning sweep: every trail a ranger marked, saved in ONE transaction. Either all of it
  * is written or none: one invalid trail or one stale revision refuses the whole sweep, and

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Writing trail reports. Every save is a new revision; the one before it stays, marked not
  * current. Optimistic locking: the client names the revision it started from, and the

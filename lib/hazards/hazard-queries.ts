@@ -1,3 +1,4 @@
+import "server-only";
 import { hazardView, type HazardView } from "@/lib/hazards/hazard-writes";
 import { Hazard, Photo, Trail } from "@/models";
 

@@ -1,3 +1,4 @@
+import "server-only";
 /** Hazard pins with photos: created all-or-nothing, edited and resolved with optimistic locking. */
 import { OptimisticLockError } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";

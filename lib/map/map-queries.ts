@@ -1,3 +1,4 @@
+import "server-only";
 import { fn, col, Op } from "sequelize";
 import { parkToday, currentReportsByTrail } from "@/lib/conditions/park-today";
 import { hazardsCollection, trailFeaturesCollection, trailsCollection, type TodayReport } from "@/lib/map/pure/geojson";

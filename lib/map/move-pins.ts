@@ -1,3 +1,4 @@
+import "server-only";
 import { OptimisticLockError } from "sequelize";
 import { z } from "zod";
 import { distance } from "@turf/turf";

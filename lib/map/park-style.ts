@@ -1,3 +1,4 @@
+import "server-only";
 import type { StyleSpecification } from "maplibre-gl";
 import { z } from "zod";
 import { env } from "@/lib/server/env";

@@ -1,3 +1,4 @@
+import "server-only";
 import { QueryTypes, type Transaction } from "sequelize";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
 import { sequelize } from "@/models";

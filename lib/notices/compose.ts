@@ -1,3 +1,4 @@
+import "server-only";
 import { headerSafe } from "@/lib/server/mail/transport";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
 

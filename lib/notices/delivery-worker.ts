@@ -1,3 +1,4 @@
+import "server-only";
 import { hostname } from "node:os";
 import { randomBytes } from "node:crypto";
 import type { Transporter } from "nodemailer";

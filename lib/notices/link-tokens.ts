@@ -1,3 +1,4 @@
+import "server-only";
 import { signToken, verifyToken } from "@/lib/server/auth/tokens";
 import { env } from "@/lib/server/env";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import net from "node:net";
 import nodemailer, { type Transporter } from "nodemailer";
 import { parseConnectionUrl } from "nodemailer/lib/shared";

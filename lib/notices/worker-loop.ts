@@ -1,3 +1,4 @@
+import "server-only";
 import { drainDue, type BatchResult, type WorkerOptions } from "./delivery-worker";
 
 /**

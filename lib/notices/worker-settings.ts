@@ -1,3 +1,4 @@
+import "server-only";
 import { z } from "zod";
 import type { RetryPolicy } from "./pure/retry-policy";
 import { DEFAULT_RETRY_POLICY } from "./pure/retry-policy";

@@ -1,3 +1,4 @@
+import "server-only";
 import { AppError } from "@/lib/shared/errors";
 import { Park, ParkMembership, User } from "@/models";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import sharp, { type Metadata } from "sharp";
 import { AppError } from "@/lib/shared/errors";
 import { PHOTO_LIMITS } from "./pure/limits";

@@ -1,3 +1,4 @@
+import "server-only";
 import { notFound } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { photoStorage } from "@/lib/server/storage";

@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 import type { Transaction } from "sequelize";
 import { photoStorage } from "@/lib/server/storage";

@@ -1,3 +1,4 @@
+import "server-only";
 /** What the "Today's pressure" page needs, read in parallel on the server. */
 import { Op, fn, col } from "sequelize";
 import type { Actor } from "@/lib/server/auth/permissions";

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * POST /api/pressure behind the handler: resolves a saved setup (own only) and the park's trails
  * for today into the engine's input, then runs the pure engine. A trail without a report today

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * A park's current trails as the pressure band sees them today: status and surfaces from
  * today's report (park-local date), features from the trail's mapped features. Three queries.

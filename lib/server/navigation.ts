@@ -1,3 +1,4 @@
+import "server-only";
 import { primaryRole, type Actor } from "@/lib/server/auth/permissions";
 
 export type NavLink = { href: string; label: string };

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Security headers for every response (ASVS v5.0.0 3.4.x). The page CSP carries a fresh
  * nonce per request; Next.js reads it from the request's CSP header and stamps its own scripts.

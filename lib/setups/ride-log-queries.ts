@@ -1,3 +1,4 @@
+import "server-only";
 /** A rider's own ride logs, newest first, with setup, park and trail names for display. */
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { rideLogView } from "@/lib/setups/ride-logs";

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Ride logs: what a rider ran and how it felt → the ONE suggested baseline change
  * (lib/pressure/pure/feedback.ts), which the rider may then apply to the setup's baseline, once.

@@ -1,3 +1,4 @@
+import "server-only";
 /** A rider's own setups. Another rider's setup is "not found" (404), never "forbidden": its existence is not revealed. */
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";

@@ -1,3 +1,4 @@
+import "server-only";
 /** Writes to a rider's own setups: create, update with optimistic locking, delete. */
 import { OptimisticLockError } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";

@@ -1,3 +1,4 @@
+import "server-only";
 import { Op } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { hashPassword, passwordSchema } from "@/lib/server/auth/password";

@@ -1,3 +1,4 @@
+import "server-only";
 import { OptimisticLockError, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";

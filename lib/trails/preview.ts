@@ -1,3 +1,4 @@
+import "server-only";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { processTrailUpload, type TrailUploadResult } from "@/lib/trails/pure";
 import type { Park } from "@/models";

@@ -1,3 +1,4 @@
+import "server-only";
 import { can, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";

@@ -1,3 +1,4 @@
+import "server-only";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { TRAIL_LIMITS } from "@/lib/trails/pure";

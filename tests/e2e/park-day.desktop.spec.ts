@@ -196,7 +196,7 @@ test("the park day: upload, invite, sweep with a closure and a hazard, board and
   await preview.getByRole("button", { name: /^Send to \d+ riders?$/ }).click();
   await expect(ranger.getByRole("status")).toContainText("Notice queued");
 
-  const worker = await run("node_modules/.bin/tsx", ["scripts/worker.ts", "--once"], { env: process.env, timeout: 60_000 });
+  const worker = await run("node_modules/.bin/tsx", ["--conditions=react-server", "scripts/worker.ts", "--once"], { env: process.env, timeout: 60_000 });
   expect(worker.stdout).toMatch(/done: \d+ sent/);
   const notices = (await mailTo(riderEmail)).filter((m) => readable(m.raw).includes(`Subject: Harrow Ridge Bike Park: ${trailName} closed`));
   expect(notices).toHaveLength(1);

@@ -1,3 +1,4 @@
+import "server-only";
 import { ZodError } from "zod";
 import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
 import { AppError } from "@/lib/shared/errors";

@@ -1,3 +1,4 @@
+import "server-only";
 import { getActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";

@@ -1,3 +1,4 @@
+import "server-only";
 import { AppError } from "@/lib/shared/errors";
 
 export type MultipartBody = { fields: Record<string, string>; files: { field: string; name: string; bytes: Buffer }[] };

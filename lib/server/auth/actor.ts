@@ -1,3 +1,4 @@
+import "server-only";
 import { getServerSession } from "next-auth";
 import { ParkMembership, User } from "@/models";
 import { authOptions } from "./options";

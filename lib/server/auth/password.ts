@@ -1,3 +1,4 @@
+import "server-only";
 import bcrypt from "bcryptjs";
 import { readFileSync } from "node:fs";
 import path from "node:path";

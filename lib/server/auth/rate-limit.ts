@@ -1,3 +1,4 @@
+import "server-only";
 import { Op } from "sequelize";
 import { SignInAttempt } from "@/models";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import { createHash, createHmac, randomBytes, timingSafeEqual } from "node:crypto";
 import { tokenSecret } from "@/lib/server/env";
 

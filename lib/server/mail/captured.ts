@@ -1,3 +1,4 @@
+import "server-only";
 import { env } from "@/lib/server/env";
 import { AppError } from "@/lib/shared/errors";
 

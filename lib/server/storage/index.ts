@@ -1,3 +1,4 @@
+import "server-only";
 import path from "node:path";
 import { env } from "@/lib/server/env";
 import { localDriver } from "./local-driver";

@@ -105,7 +105,7 @@ describe("retries, exhausted deliveries and stale claims", () => {
     const { park, ranger } = await parkWithStaff();
     await createSubscribers(park.id, 20);
     const { id } = await sendNotice(ranger, park.id, { kind: "closure", message: "Upper traverse closed: snow." });
-    const child = spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], {
+    const child = spawn("node_modules/.bin/tsx", ["--conditions=react-server", "scripts/worker.ts"], {
       env: { ...process.env, SMTP_URL: smtp.smtpUrl, FAKE_SMTP_CONTROL_URL: smtp.controlUrl, NOTICE_POLL_MS: "100" },
       stdio: ["ignore", "pipe", "pipe"],
     });
