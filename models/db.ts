@@ -32,7 +32,7 @@ export const replicaUrlsFrom = (list: string | undefined) => (list ?? "").split(
 /**
  * A Sequelize for a primary and any number of read replicas. With replicas, Sequelize sends a
  * SELECT outside a transaction to a replica (round robin) and everything else to the primary:
- * writes, every query of a transaction, and finds with `useMaster: true` (README, Scaling out).
+ * writes, every query of a transaction, and finds with `useMaster: true` (docs/operations.md, Scaling out).
  * The pool drops a connection as soon as it reports an error, so a restarted server is simply
  * reconnected to; a query is retried only when its connection could not be opened.
  */

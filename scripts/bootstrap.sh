@@ -69,7 +69,7 @@ load_env() {
 
 port_free_or_die() {
   if (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; then
-    echo "✗ Port $1 ($2) is already in use by another program. Stop it, or choose another port (see README, Environment)." >&2
+    echo "✗ Port $1 ($2) is already in use by another program. Stop it, or choose another port (see docs/operations.md, Environment)." >&2
     exit 1
   fi
 }

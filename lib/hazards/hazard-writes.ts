@@ -95,7 +95,7 @@ export async function createHazard(
 /** PATCH /api/hazards/{id}: resolve, reopen or edit, refused with 409 if someone changed it meanwhile. */
 export async function updateHazard(actor: Actor | null, hazardId: string, body: unknown, options: { now?: Date } = {}): Promise<HazardView> {
   if (!isUuid(hazardId)) throw notFound("Hazard not found.");
-  // Its lockVersion decides the write: read it from the primary (README, Scaling out).
+  // Its lockVersion decides the write: read it from the primary (docs/operations.md, Scaling out).
   const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
   if (!hazard) throw notFound("Hazard not found.");
   authorize(actor, "hazard:write", { parkId: hazard.parkId });

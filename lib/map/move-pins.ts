@@ -48,7 +48,7 @@ export async function moveHazard(actor: Actor | null, hazardId: string, body: un
   if (!actor) throw unauthorized();
   const to = moveHazardSchema.parse(body);
   if (!isUuid(hazardId)) throw notFound("Hazard not found.");
-  // Its lockVersion decides the write: read it from the primary (README, Scaling out).
+  // Its lockVersion decides the write: read it from the primary (docs/operations.md, Scaling out).
   const hazard = await Hazard.findByPk(hazardId, { useMaster: true });
   if (!hazard) throw notFound("Hazard not found.");
   authorize(actor, "hazard:write", { parkId: hazard.parkId });
