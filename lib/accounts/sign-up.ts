@@ -2,7 +2,7 @@ import "server-only";
 import { UniqueConstraintError } from "sequelize";
 import { AppError } from "@/lib/shared/errors";
 import { AuditEvent, User } from "@/models";
-import { hashPassword, passwordSchema } from "../server/auth/password";
+import { hashPassword, passwordSchema } from "@/lib/server/auth/password";
 import { signUpFields } from "./pure/schemas";
 
 /** Rider self sign-up. Refuses short or common passwords and taken addresses; writes nothing on refusal. */
@@ -24,4 +24,9 @@ export async function signUpRider(input: unknown) {
     if (error instanceof UniqueConstraintError) throw new AppError(409, "An account with that e-mail already exists.", "email");
     throw error;
   }
+}
+
+/** True when an account uses this address already. */
+export async function accountExists(email: string): Promise<boolean> {
+  return (await User.count({ where: { email } })) > 0;
 }

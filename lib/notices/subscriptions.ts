@@ -30,6 +30,15 @@ export async function listSubscriptions(actor: Actor | null) {
  * confirmed) must be confirmed by the e-mailed link before any notice is sent to it.
  * If the mail server is down the choice is still saved; the page offers to send the link again.
  */
+/** What the subscription form offers: every park with its trails in use, by name. */
+export async function subscriptionChoices() {
+  const [parks, trails] = await Promise.all([
+    Park.findAll({ attributes: ["id", "slug", "name"], order: [["name", "ASC"]] }),
+    Trail.findAll({ where: { archivedAt: null }, attributes: ["id", "parkId", "name"], order: [["name", "ASC"]] }),
+  ]);
+  return parks.map((p) => ({ slug: p.slug, name: p.name, trails: trails.filter((t) => t.parkId === p.id).map((t) => ({ id: t.id, name: t.name })) }));
+}
+
 export async function saveSubscription(actor: Actor | null, input: unknown) {
   authorize(actor, "own:subscriptions", { ownerId: actor?.id });
   const fields = subscriptionFields.parse(input);

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { getActor } from "@/lib/server/auth/actor";
-import { Park } from "@/models";
+import { listParksFor } from "@/lib/parks/queries";
 
 export const metadata = { title: "Staff desk" };
 export const dynamic = "force-dynamic";
@@ -8,7 +8,7 @@ export const dynamic = "force-dynamic";
 export default async function StaffHome() {
   const actor = (await getActor())!;
   const parkIds = actor.memberships.map((m) => m.parkId);
-  const parks = await Park.findAll({ where: actor.siteRole === "admin" ? {} : { id: parkIds }, order: [["name", "ASC"]] });
+  const parks = await listParksFor(actor);
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">Staff desk</h1>

@@ -1,13 +1,9 @@
 // GET /api/health: liveness and database reachability.
-import { sequelize } from "@/models";
+import { databaseReachable } from "@/lib/server/health";
 
 export const dynamic = "force-dynamic";
 
 export async function GET() {
-  try {
-    await sequelize.query("SELECT 1");
-    return Response.json({ status: "ok", db: "up" });
-  } catch {
-    return Response.json({ status: "degraded", db: "down" }, { status: 503 });
-  }
+  if (await databaseReachable()) return Response.json({ status: "ok", db: "up" });
+  return Response.json({ status: "degraded", db: "down" }, { status: 503 });
 }

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { Park } from "@/models";
+import { findParkBySlug } from "@/lib/parks/queries";
 
 export const metadata = { title: "Notices confirmed", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -7,7 +7,7 @@ export const dynamic = "force-dynamic";
 /** Where the confirmation link (GET /api/subscriptions/confirm) sends a browser afterwards. */
 export default async function ConfirmedPage({ searchParams }: { searchParams: Promise<{ park?: string; error?: string }> }) {
   const { park: slug, error } = await searchParams;
-  const park = !error && slug ? await Park.findOne({ where: { slug }, attributes: ["slug", "name"] }) : null;
+  const park = !error && slug ? await findParkBySlug(slug) : null;
   if (!park) {
     return (
       <section className="card space-y-2" data-testid="confirm-invalid">

@@ -1,5 +1,5 @@
 import { findOpenInvitation } from "@/lib/staff/invitations";
-import { User } from "@/models";
+import { accountExists } from "@/lib/accounts/sign-up";
 import { AcceptInvitationForm } from "./accept-form";
 
 export const metadata = { title: "Join a park team" };
@@ -16,15 +16,15 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       </section>
     );
   }
-  const existing = await User.count({ where: { email: invitation.email } });
+  const existing = await accountExists(invitation.email);
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">Join {invitation.park?.name}</h1>
       <p>
         You were invited as <strong>{invitation.role}</strong> with the address <strong className="[overflow-wrap:anywhere]">{invitation.email}</strong>.
-        {existing > 0 && " You already have an account: after joining, sign in with your usual password."}
+        {existing && " You already have an account: after joining, sign in with your usual password."}
       </p>
-      <AcceptInvitationForm token={token} needsPassword={existing === 0} />
+      <AcceptInvitationForm token={token} needsPassword={!existing} />
     </section>
   );
 }

@@ -1,7 +1,6 @@
 import { getActor } from "@/lib/server/auth/actor";
-import { listSubscriptions } from "@/lib/notices/subscriptions";
+import { listSubscriptions, subscriptionChoices } from "@/lib/notices/subscriptions";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
-import { Park, Trail } from "@/models";
 import { RemoveSubscriptionForm } from "./remove-form";
 import { SubscriptionForm, type ParkChoice } from "./subscription-form";
 
@@ -18,21 +17,11 @@ const STATUS_TEXT = {
 
 export default async function MySubscriptionsPage({ searchParams }: { searchParams: Promise<{ park?: string }> }) {
   const actor = (await getActor())!;
-  const [{ park: wanted }, subscriptions, parks, trails] = await Promise.all([
-    searchParams,
-    listSubscriptions(actor),
-    Park.findAll({ attributes: ["id", "slug", "name"], order: [["name", "ASC"]] }),
-    Trail.findAll({ where: { archivedAt: null }, attributes: ["id", "parkId", "name"], order: [["name", "ASC"]] }),
-  ]);
-  const trailName = new Map(trails.map((t) => [t.id, t.name]));
+  const [{ park: wanted }, subscriptions, parks] = await Promise.all([searchParams, listSubscriptions(actor), subscriptionChoices()]);
+  const trailName = new Map(parks.flatMap((p) => p.trails).map((t) => [t.id, t.name]));
   const choices: ParkChoice[] = parks.map((p) => {
     const current = subscriptions.find((s) => s.park.slug === p.slug && s.status !== "unsubscribed");
-    return {
-      slug: p.slug,
-      name: p.name,
-      trails: trails.filter((t) => t.parkId === p.id).map((t) => ({ id: t.id, name: t.name })),
-      current: current ? { trailIds: current.trailIds, kinds: current.kinds as NoticeKind[] } : null,
-    };
+    return { ...p, current: current ? { trailIds: current.trailIds, kinds: current.kinds as NoticeKind[] } : null };
   });
   const initialSlug = choices.some((c) => c.slug === wanted) ? wanted! : (choices[0]?.slug ?? "");
 

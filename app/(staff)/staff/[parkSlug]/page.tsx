@@ -1,19 +1,15 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { StaffConditionsLinks } from "@/components/board/staff-conditions-links";
 import { getActor } from "@/lib/server/auth/actor";
-import { can, roleInPark } from "@/lib/server/auth/permissions";
-import { listParkStaff } from "@/lib/parks/queries";
-import { Park } from "@/models";
+import { can } from "@/lib/server/auth/permissions";
+import { listParkStaff, requireParkAccess } from "@/lib/parks/queries";
 import { InviteStaffForm } from "./invite-form";
 
 export const dynamic = "force-dynamic";
 
 export default async function StaffParkPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const actor = await getActor();
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !roleInPark(actor, park.id)) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "member")]);
   const staff = await listParkStaff(park.id);
   return (
     <section className="space-y-4">

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { MapLegend } from "@/components/map/map-legend";
 import { ParkMapLoader } from "@/components/map/park-map-loader";
 import { TrailTextList } from "@/components/map/trail-text-list";
@@ -9,21 +8,20 @@ import { can } from "@/lib/server/auth/permissions";
 import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
 import { boundsAround, trailBounds } from "@/lib/map/pure/bounds";
 import { parkDataUrls } from "@/lib/map/pure/sources";
-import { Park } from "@/models";
+import { requireParkAccess, findParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ parkSlug: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const park = await Park.findOne({ where: { slug: (await params).parkSlug }, attributes: ["name"] });
+  const park = await findParkBySlug((await params).parkSlug);
   return { title: park ? `${park.name}: map` : "Map" };
 }
 
 export default async function ParkMapPage({ params }: Props) {
   const { parkSlug } = await params;
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park) notFound();
+  const park = await requireParkAccess(parkSlug);
   const [{ trails, collection }, hazards, actor] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id), getActor()]);
   const staff = can(actor, "trail:write", { parkId: park.id }) || can(actor, "hazard:write", { parkId: park.id });
   const properties = collection.features.map((f) => f.properties);

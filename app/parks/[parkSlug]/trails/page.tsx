@@ -1,5 +1,4 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
@@ -7,7 +6,7 @@ import { listParkTrails } from "@/lib/trails/queries";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { formatDistance, formatGrade, formatHeight } from "@/lib/shared/units";
 import { trailListQuerySchema, type TrailSortKey } from "@/lib/trails/pure/schemas";
-import { Park } from "@/models";
+import { requireParkAccess, findParkBySlug } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 
@@ -24,15 +23,14 @@ const COLUMNS: { key: TrailSortKey; label: string; numeric?: boolean; wideOnly?:
 ];
 
 export async function generateMetadata({ params }: Props) {
-  const park = await Park.findOne({ where: { slug: (await params).parkSlug }, attributes: ["name"] });
+  const park = await findParkBySlug((await params).parkSlug);
   return { title: park ? `Trails · ${park.name}` : "Trails" };
 }
 
 /** The park's trails as a table sorted by links (works without JavaScript). */
 export default async function ParkTrailsPage({ params, searchParams }: Props) {
   const { parkSlug } = await params;
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park) notFound();
+  const park = await requireParkAccess(parkSlug);
   const query = trailListQuerySchema.parse(await searchParams);
   const actor = await getActor();
   const [trails, system] = await Promise.all([listParkTrails(park.id, query.sort, query.dir), distanceSystemFor(actor)]);

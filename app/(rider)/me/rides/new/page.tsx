@@ -5,14 +5,14 @@ import { parkToday } from "@/lib/conditions/park-today";
 import { listSetups } from "@/lib/setups/setup-queries";
 import { trailsToday } from "@/lib/pressure/trails-today";
 import { unitsFor } from "@/lib/accounts/units";
-import { Park } from "@/models";
+import { listParkRecords, type Park } from "@/lib/parks/queries";
 
 export const metadata = { title: "Log a ride" };
 export const dynamic = "force-dynamic";
 
 export default async function NewRidePage({ searchParams }: { searchParams: Promise<{ park?: string }> }) {
   const [{ park: slug }, actor] = await Promise.all([searchParams, getActor()]);
-  const [setups, units, parks] = await Promise.all([listSetups(actor), unitsFor(actor), Park.findAll({ order: [["name", "ASC"]] })]);
+  const [setups, units, parks] = await Promise.all([listSetups(actor), unitsFor(actor), listParkRecords()]);
   const park = slug === "none" ? null : (parks.find((p) => p.slug === slug) ?? null);
   const trails = park ? (await trailsToday(park)).trails.map(({ reportedAt: _r, ...t }) => t) : [];
   const pick = (p: Park) => ({ slug: p.slug, name: p.name, baseElevationM: p.baseElevationM, summitElevationM: p.summitElevationM });

@@ -1,12 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { statusChanges } from "@/lib/audit/activity";
 import { parkToday } from "@/lib/conditions/park-today";
 import { parkLocalTime, shiftDate } from "@/lib/shared/time";
-import { Park } from "@/models";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Status changes" };
@@ -16,8 +15,7 @@ type Props = { params: Promise<{ parkSlug: string }>; searchParams: Promise<{ be
 /** Staff: the audit log of every trail status change, and the CSV export of reports. */
 export default async function ActivityPage({ params, searchParams }: Props) {
   const [{ parkSlug }, query, actor] = await Promise.all([params, searchParams, getActor()]);
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !can(actor, "audit:read", { parkId: park.id })) notFound();
+  const park = await requireParkAccess(parkSlug, "audit:read");
   const before = Number(query.before);
   const { changes, olderBefore } = await statusChanges(park.id, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined });
   const today = parkToday(park);

@@ -1,21 +1,17 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { HazardList } from "@/components/board/hazard-list";
 import { HazardForm } from "@/components/hazards/hazard-form";
 import { ResolveHazardButton } from "@/components/hazards/resolve-button";
-import { getActor } from "@/lib/server/auth/actor";
-import { can } from "@/lib/server/auth/permissions";
 import { openHazards, trailChoices } from "@/lib/hazards/hazard-queries";
-import { Park } from "@/models";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Hazards" };
 
 export default async function HazardsPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
-  if (!park || !can(actor, "hazard:write", { parkId: park.id })) notFound();
+  const park = await requireParkAccess(parkSlug, "hazard:write");
   const [hazards, trails] = await Promise.all([openHazards(park.id), trailChoices(park.id)]);
   return (
     <section className="space-y-4">

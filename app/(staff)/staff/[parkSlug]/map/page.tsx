@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { StaffPinMapLoader } from "@/components/map/staff-pin-map-loader";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
@@ -9,17 +8,15 @@ import { humanize } from "@/lib/map/pure/geojson";
 import { boundsAround, trailBounds } from "@/lib/map/pure/bounds";
 import { pinKey, type Pin } from "@/lib/map/pure/pin-moves";
 import { parkDataUrls } from "@/lib/map/pure/sources";
-import { Park } from "@/models";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Move map pins" };
 
 export default async function StaffMapPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
-  if (!park) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, ["trail:write", "hazard:write"])]);
   const [mayMoveFeatures, mayMoveHazards] = [can(actor, "trail:write", { parkId: park.id }), can(actor, "hazard:write", { parkId: park.id })];
-  if (!mayMoveFeatures && !mayMoveHazards) notFound();
 
   const [trails, { features, trailNames }, hazards] = await Promise.all([mapTrails(park.id), parkTrailFeatures(park.id), openHazards(park.id)]);
   const on = (trailId: string | null) => (trailId && trailNames.get(trailId) ? ` on ${trailNames.get(trailId)}` : "");

@@ -1,20 +1,17 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { listParkNotices } from "@/lib/notices/notice-queries";
 import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
-import { Park } from "@/models";
 import { DeliverySummary, KindLabel } from "./notice-bits";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const metadata = { title: "Notices" };
 export const dynamic = "force-dynamic";
 
 export default async function NoticesPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const actor = await getActor();
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !can(actor, "notice:read", { parkId: park.id })) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "notice:read")]);
   const notices = await listParkNotices(actor, park.id);
   return (
     <section className="space-y-4">

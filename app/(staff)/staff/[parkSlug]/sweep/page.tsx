@@ -1,13 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ParkStateForm } from "@/components/sweep/park-state-form";
 import { SweepForm } from "@/components/sweep/sweep-form";
 import { getActor } from "@/lib/server/auth/actor";
-import { can } from "@/lib/server/auth/permissions";
 import { activeParkState } from "@/lib/conditions/park-state";
 import { sweepStart } from "@/lib/conditions/sweep-start";
-import { Park } from "@/models";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Morning sweep" };
@@ -15,8 +13,7 @@ export const metadata: Metadata = { title: "Morning sweep" };
 /** The ranger's morning sweep on a phone: every trail, one save. */
 export default async function SweepPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
-  if (!park || !can(actor, "report:write", { parkId: park.id })) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "report:write")]);
   const [start, active] = await Promise.all([sweepStart(park), activeParkState(park.id)]);
   return (
     <section className="space-y-4">

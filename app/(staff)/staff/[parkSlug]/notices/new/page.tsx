@@ -1,11 +1,9 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
-import { can } from "@/lib/server/auth/permissions";
 import { parkTrailChoices } from "@/lib/notices/notice-queries";
-import { Park } from "@/models";
 import { MESSAGE_MAX, NOTICE_KINDS, type NoticeKind } from "@/lib/notices/pure/schemas";
 import { NoticeForm, type NoticeDraft } from "./notice-form";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const metadata = { title: "New notice" };
 export const dynamic = "force-dynamic";
@@ -15,9 +13,7 @@ type Search = { kind?: string; trailIds?: string; message?: string };
 /** Other pages link here prefilled: ?kind=closure&trailIds=a,b&message=… (unknown trails are dropped). */
 export default async function NewNoticePage({ params, searchParams }: { params: Promise<{ parkSlug: string }>; searchParams: Promise<Search> }) {
   const [{ parkSlug }, search] = await Promise.all([params, searchParams]);
-  const actor = await getActor();
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !can(actor, "notice:send", { parkId: park.id })) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "notice:send")]);
   const trails = await parkTrailChoices(park.id);
   const known = new Set(trails.map((t) => t.id));
   const trailIds = String(search.trailIds ?? "").split(",").map((s) => s.trim()).filter((id) => known.has(id));

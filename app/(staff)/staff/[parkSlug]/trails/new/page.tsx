@@ -1,19 +1,15 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
-import { can } from "@/lib/server/auth/permissions";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
-import { Park } from "@/models";
 import { TrailUploadForm } from "./upload-form";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Upload a trail" };
 
 export default async function NewTrailPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
-  const actor = await getActor();
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !can(actor, "trail:write", { parkId: park.id })) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "trail:write")]);
   return (
     <section className="space-y-4">
       <p className="text-sm font-semibold text-loam-600">

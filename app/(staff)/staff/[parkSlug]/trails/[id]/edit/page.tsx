@@ -1,23 +1,20 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
-import { can } from "@/lib/server/auth/permissions";
 import { getTrailDetail } from "@/lib/trails/queries";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
-import { Park } from "@/models";
 import { ArchiveTrailButton } from "./archive-button";
 import { FeaturesEditor } from "./features-editor";
 import { TrailMetadataForm } from "./metadata-form";
 import { ReplaceLineForm } from "./replace-line-form";
+import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Edit trail" };
 
 export default async function EditTrailPage({ params }: { params: Promise<{ parkSlug: string; id: string }> }) {
   const { parkSlug, id } = await params;
-  const actor = await getActor();
-  const park = await Park.findOne({ where: { slug: parkSlug } });
-  if (!park || !can(actor, "trail:write", { parkId: park.id })) notFound();
+  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "trail:write")]);
   const trail = await getTrailDetail(id, actor).catch(() => null);
   if (!trail || trail.park.slug !== park.slug || trail.archivedAt) notFound();
   const system = await distanceSystemFor(actor);
