@@ -7,10 +7,9 @@
 import { loadActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { createHazard, updateHazard } from "@/lib/hazards/hazard-writes";
-import { parkLocalInstant } from "@/lib/shared/park-clock";
+import { parkLocalInstant, parkLocalDate, shiftDate } from "@/lib/shared/park-clock";
 import { postTrailReport } from "@/lib/conditions/write-report";
 import { photoStorage } from "@/lib/server/storage";
-import { parkLocalDate, shiftDate } from "@/lib/shared/time";
 import { Hazard, Park, ParkState, Photo, Trail, TrailReport, User } from "@/models";
 import { demoPhoto } from "./demo-conditions/photos";
 import { RAINY_DAY_CORRECTION, WEEK, demoReport } from "./demo-conditions/scenario";

@@ -6,7 +6,7 @@
 import { loadActor } from "@/lib/server/auth/actor";
 import { createRideLog } from "@/lib/setups/ride-logs";
 import { createSetup } from "@/lib/setups/setup-writes";
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 import { inToMm, psiToKpa } from "@/lib/shared/units";
 import type { SetupInputRaw } from "@/lib/setups/pure/setup-schema";
 import { Park, RideLog, Setup, Trail, User } from "@/models";

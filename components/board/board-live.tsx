@@ -7,7 +7,7 @@ import type { BoardFilters } from "@/lib/conditions/pure/board-filters";
 import { filterTrails } from "@/lib/conditions/pure/filter-trails";
 import type { Board } from "@/lib/conditions/board";
 import { useBoard } from "@/lib/client/use-board";
-import { parkLocalTime } from "@/lib/shared/time";
+import { parkLocalTime } from "@/lib/shared/park-clock";
 import { HazardList } from "./hazard-list";
 import { ParkStateBanner } from "./park-state-banner";
 import { TrailCard } from "./trail-card";

@@ -1,6 +1,6 @@
 import { PARK_STATE_LABELS } from "@/lib/conditions/pure/labels";
 import type { BoardParkState } from "@/lib/conditions/board";
-import { parkLocalTime } from "@/lib/shared/time";
+import { parkLocalTime } from "@/lib/shared/park-clock";
 
 /** The park-wide state, shown above every trail while it lasts. */
 export function ParkStateBanner({ state, timeZone }: { state: BoardParkState; timeZone: string }) {

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { describeFeatures, KIND_LABELS } from "@/lib/conditions/pure/labels";
 import type { BoardTrail } from "@/lib/conditions/board";
-import { parkLocalTime } from "@/lib/shared/time";
+import { parkLocalTime } from "@/lib/shared/park-clock";
 import { DifficultyMark } from "./difficulty-mark";
 import { HazardList } from "./hazard-list";
 import { StatusLabel } from "./status-label";

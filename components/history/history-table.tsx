@@ -5,7 +5,7 @@ import { useMemo } from "react";
 import { StatusLabel } from "@/components/board/status-label";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
 import type { HistoryRow } from "@/lib/conditions/history";
-import { parkLocalTime } from "@/lib/shared/time";
+import { parkLocalTime } from "@/lib/shared/park-clock";
 
 const features = tableFeatures({ rowSortingFeature, sortedRowModel: createSortedRowModel(), sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic } });
 const helper = createColumnHelper<typeof features, HistoryRow>();

@@ -2,7 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { reportView, type ReportView } from "@/lib/conditions/report-view";
 import { AppError } from "@/lib/shared/errors";
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 import { dateRangeSchema } from "@/lib/conditions/pure/schemas";
 import { Trail, TrailReport, User } from "@/models";
 import { parkToday } from "./park-today";

@@ -1,5 +1,5 @@
 import "server-only";
-import { parkLocalDate } from "@/lib/shared/time";
+import { parkLocalDate } from "@/lib/shared/park-clock";
 import { TrailReport, sequelize } from "@/models";
 
 /** Today's date at the park, in the park's own time zone. */

@@ -8,7 +8,7 @@ import { UniqueConstraintError } from "sequelize";
 import type { ZodError } from "zod";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
-import { parkLocalDate } from "@/lib/shared/time";
+import { parkLocalDate } from "@/lib/shared/park-clock";
 import { sweepSchema, type SweepInput } from "@/lib/conditions/pure/schemas";
 import { Trail, sequelize, type Park } from "@/models";
 import { closureNoticeHref } from "./pure/notice-link";

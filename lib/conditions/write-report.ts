@@ -12,7 +12,7 @@ import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError, notFound } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
-import { parkLocalDate } from "@/lib/shared/time";
+import { parkLocalDate } from "@/lib/shared/park-clock";
 import { reportPostSchema, type ReportInput } from "@/lib/conditions/pure/schemas";
 import { AuditEvent, Park, Trail, TrailReport, sequelize } from "@/models";
 import { reportValues, reportView, type ReportView } from "./report-view";

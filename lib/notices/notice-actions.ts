@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { AppError } from "@/lib/shared/errors";
-import { parkLocalToInstant } from "@/lib/notices/pure/park-local-input";
+import { parkLocalToInstant } from "@/lib/shared/park-clock";
 import { previewNotice, retryFailedDeliveries, sendNotice } from "@/lib/notices/send-notice";
 import { formError, type FormState } from "../shared/form-state";
 

@@ -9,7 +9,7 @@ import { findOwnSetup, setupView, storedSetup } from "@/lib/setups/setup-queries
 import { parkForRequest, pickTrails, trailsToday } from "@/lib/pressure/trails-today";
 import { ceilingKpa, floorKpa } from "@/lib/pressure/pure/band";
 import { suggestBaselineChange } from "@/lib/pressure/pure/feedback";
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 import { isUuid, parseInput } from "@/lib/shared/parse";
 import { rideLogSchema } from "@/lib/setups/pure/ride-log-schema";
 import { setupSchema, type SetupInput } from "@/lib/setups/pure/setup-schema";

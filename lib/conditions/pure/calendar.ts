@@ -1,5 +1,5 @@
 /** A month at a glance: weeks (Monday first) of YYYY-MM-DD dates, null outside the month. */
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 
 export function monthGrid(month: string): (string | null)[][] {
   const first = `${month}-01`;

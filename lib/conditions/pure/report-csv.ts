@@ -1,4 +1,4 @@
-import { parkLocalTime } from "@/lib/shared/time";
+import { parkLocalTime } from "@/lib/shared/park-clock";
 import { toCsv } from "@/lib/shared/csv";
 
 export type CsvReport = {

@@ -1,4 +1,4 @@
-import { parkLocalDate, parkLocalTime, shiftDate } from "@/lib/shared/time";
+import { parkLocalDate, parkLocalTime, shiftDate } from "@/lib/shared/park-clock";
 
 /**
  * When something happened, in the park's own time zone: "today 07:12", "yesterday 18:40",

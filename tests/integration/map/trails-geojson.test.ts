@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { GEOJSON_CONTENT_TYPE, geoJsonResponse } from "@/lib/server/api/geojson-response";
 import { parkToday } from "@/lib/conditions/park-today";
 import { parkFeaturesGeoJson, parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 import { trailMapPropertiesSchema } from "@/lib/map/pure/schemas";
 import { Hazard, TrailFeature, TrailReport, sequelize, type Trail } from "@/models";
 import { createPark } from "../helpers";

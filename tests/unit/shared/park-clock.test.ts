@@ -1,7 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { parkLocalInstant } from "@/lib/shared/park-clock";
+import { parkLocalInstant, parkLocalDate, parkLocalTime } from "@/lib/shared/park-clock";
 import { parkToday } from "@/lib/conditions/park-today";
-import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
 
 // UTC offsets from the IANA time zone database (tzdata): America/Los_Angeles is UTC−8 (PST)
 // in winter and UTC−7 (PDT) in summer; in 2026 PDT starts on 8 March at 02:00 local time.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isValidTimeZone, parkLocalDate, parkLocalTime, shiftDate } from "@/lib/shared/time";
+import { isValidTimeZone, parkLocalDate, parkLocalTime, shiftDate } from "@/lib/shared/park-clock";
 
 // Offsets from the IANA time zone database (tzdata): America/Los_Angeles is UTC−8 in
 // winter (PST) and UTC−7 in summer (PDT); Europe/Zurich is UTC+1 in winter.

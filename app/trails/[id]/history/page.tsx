@@ -11,7 +11,7 @@ import { loadTrailWithPark } from "@/lib/conditions/write-report";
 import { parkToday } from "@/lib/conditions/park-today";
 import { resolveRange, trailReportHistory } from "@/lib/conditions/history";
 import { AppError } from "@/lib/shared/errors";
-import { shiftDate } from "@/lib/shared/time";
+import { shiftDate } from "@/lib/shared/park-clock";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Trail history" };

@@ -4,7 +4,7 @@ import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { statusChanges } from "@/lib/audit/activity";
 import { parkToday } from "@/lib/conditions/park-today";
-import { parkLocalTime, shiftDate } from "@/lib/shared/time";
+import { parkLocalTime, shiftDate } from "@/lib/shared/park-clock";
 import { requireParkAccess } from "@/lib/parks/queries";
 
 export const dynamic = "force-dynamic";

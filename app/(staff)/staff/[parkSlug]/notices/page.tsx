@@ -2,7 +2,7 @@ import Link from "next/link";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { listParkNotices } from "@/lib/notices/notice-queries";
-import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
+import { parkLocalDate, parkLocalTime } from "@/lib/shared/park-clock";
 import { DeliverySummary, KindLabel } from "./notice-bits";
 import { requireParkAccess } from "@/lib/parks/queries";
 

@@ -5,7 +5,7 @@ import { can } from "@/lib/server/auth/permissions";
 import { DELIVERY_STATES, getNotice, listDeliveries } from "@/lib/notices/notice-queries";
 import { AppError } from "@/lib/shared/errors";
 import { formatClosedUntil } from "@/lib/notices/compose";
-import { parkLocalDate, parkLocalTime } from "@/lib/shared/time";
+import { parkLocalDate, parkLocalTime } from "@/lib/shared/park-clock";
 import { KindLabel, STATE_TEXT } from "../notice-bits";
 import { RetryFailedForm } from "./retry-form";
 

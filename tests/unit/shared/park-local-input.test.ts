@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { instantToParkLocal, parkLocalToInstant } from "@/lib/notices/pure/park-local-input";
+import { instantToParkLocal, parkLocalToInstant } from "@/lib/shared/park-clock";
 
 // Offsets from the IANA time zone database: America/Los_Angeles is UTC−8 in winter and UTC−7
 // from the second Sunday of March to the first Sunday of November (US Energy Policy Act of 2005);
