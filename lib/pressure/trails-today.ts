@@ -6,7 +6,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { AppError } from "@/lib/shared/errors";
 import { FEATURES, SURFACES, type Feature, type Surface, type TrailConditions } from "@/lib/pressure/pure/schemas";
-import { isUuid } from "@/lib/shared/parse";
+import { isUuid } from "@/lib/shared/ids";
 import { Park, Trail, TrailFeature } from "@/models";
 import { currentReportsByTrail, parkToday } from "../conditions/park-today";
 

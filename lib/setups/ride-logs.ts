@@ -10,7 +10,8 @@ import { parkForRequest, pickTrails, trailsToday } from "@/lib/pressure/trails-t
 import { ceilingKpa, floorKpa } from "@/lib/pressure/pure/band";
 import { suggestBaselineChange } from "@/lib/pressure/pure/feedback";
 import { shiftDate } from "@/lib/shared/park-clock";
-import { isUuid, parseInput } from "@/lib/shared/parse";
+import { isUuid } from "@/lib/shared/ids";
+import { parseInput } from "@/lib/shared/parse";
 import { rideLogSchema } from "@/lib/setups/pure/ride-log-schema";
 import { setupSchema, type SetupInput } from "@/lib/setups/pure/setup-schema";
 import { unitsOf } from "@/lib/accounts/pure/units-schema";

@@ -4,7 +4,7 @@ import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { suspensionSag } from "@/lib/pressure/pure/sag";
 import type { SetupInput } from "@/lib/setups/pure/setup-schema";
-import { isUuid } from "@/lib/shared/parse";
+import { isUuid } from "@/lib/shared/ids";
 import { Setup } from "@/models";
 
 /** The setup as the API returns it, with its sag check. */

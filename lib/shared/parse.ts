@@ -8,7 +8,3 @@ export function parseInput<S extends z.ZodType>(schema: S, raw: unknown): z.infe
   const issue = parsed.error.issues[0];
   throw new AppError(400, issue?.message ?? "Invalid input.", issue?.path.join(".") || undefined);
 }
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-/** Ids reach the database only when they are UUIDs (anything else cannot exist). */
-export const isUuid = (id: unknown): id is string => typeof id === "string" && UUID.test(id);

@@ -1,5 +1,6 @@
 import "server-only";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { formDataOf, readBodyWithin, refuseDeclaredOver } from "@/lib/server/api/body";
 import { AppError } from "@/lib/shared/errors";
 import { TRAIL_LIMITS } from "@/lib/trails/pure";
 import { formatFromName } from "@/lib/trails/pure/file-type";
@@ -14,31 +15,6 @@ const MEGABYTE = 1024 * 1024;
 
 const tooLarge = () =>
   new AppError(413, `The upload is larger than the ${TRAIL_LIMITS.maxFileBytes / MEGABYTE} MB limit for a trail file. Thin the recording and upload it again.`, "file");
-
-/** Reads the body but stops as soon as it passes the limit, whatever Content-Length said (or if it said nothing). */
-async function readBodyWithin(request: Request, maxBytes: number): Promise<Uint8Array<ArrayBuffer>> {
-  if (!request.body) return new Uint8Array(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > maxBytes) {
-      await reader.cancel();
-      throw tooLarge();
-    }
-    chunks.push(value);
-  }
-  const body = new Uint8Array(total);
-  let at = 0;
-  for (const chunk of chunks) {
-    body.set(chunk, at);
-    at += chunk.byteLength;
-  }
-  return body;
-}
 
 const FORM_FIELDS = new Set(["file", "name", "difficulty", "kind", "direction"]);
 
@@ -63,17 +39,11 @@ export async function receiveTrailUpload(request: Request, actor: Actor | null, 
   if (!type.toLowerCase().startsWith("multipart/form-data")) {
     throw new AppError(415, "Send the trail as multipart/form-data, with the file in a field named \"file\".", "file");
   }
-  const declared = Number(request.headers.get("content-length") ?? NaN);
-  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) throw tooLarge();
+  refuseDeclaredOver(request, MAX_BODY_BYTES, tooLarge);
   await claimUploadSlot(actor, parkId, purpose);
 
-  const body = await readBodyWithin(request, MAX_BODY_BYTES);
-  let form: FormData;
-  try {
-    form = await new Response(body, { headers: { "content-type": type } }).formData();
-  } catch {
-    throw new AppError(400, "The upload could not be read as a form. Choose the file again and retry.", "file");
-  }
+  const body = await readBodyWithin(request, MAX_BODY_BYTES, tooLarge);
+  const form = await formDataOf(body, type, "The upload could not be read as a form. Choose the file again and retry.", "file");
   refuseUnexpectedFields(form);
   const file = form.get("file");
   if (!(file instanceof File) || (file.size === 0 && file.name === "")) throw new AppError(400, "Choose a GPX or GeoJSON file to upload.", "file");

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { signUpRider } from "@/lib/accounts/sign-up";
-import { readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
 import { loadActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { setParkState } from "@/lib/conditions/park-state";

@@ -1,5 +1,6 @@
 // PATCH /api/hazards/{id}: resolve, reopen or edit a hazard ({lockVersion, resolved?, kind?, note?}) — staff of its park.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { updateHazard } from "@/lib/hazards/hazard-writes";
 
 export const PATCH = handler<{ id: string }>(async ({ request, params, actor }) => {

@@ -1,5 +1,6 @@
 // GET /api/me/ride-logs: the caller's ride logs. POST: log a ride → the one suggested baseline change.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { listRideLogs } from "@/lib/setups/ride-log-queries";
 import { createRideLog } from "@/lib/setups/ride-logs";
 

@@ -1,5 +1,6 @@
 // GET /api/me/setups: the caller's setups. POST /api/me/setups: save a new one.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { listSetups } from "@/lib/setups/setup-queries";
 import { createSetup } from "@/lib/setups/setup-writes";
 

@@ -1,6 +1,7 @@
 // GET  /api/me/subscriptions: the caller's notice subscriptions.
 // POST /api/me/subscriptions: subscribe to a park (or change it); a new address gets a confirmation link.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { listSubscriptions, saveSubscription } from "@/lib/notices/subscriptions";
 
 export const dynamic = "force-dynamic";

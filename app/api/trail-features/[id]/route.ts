@@ -1,6 +1,7 @@
 // PATCH /api/trail-features/{id}: staff move, retype, rename or resize a feature.
 // DELETE /api/trail-features/{id}: staff remove a feature.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { featureView } from "@/lib/trails/queries";
 import { deleteTrailFeature, updateTrailFeature } from "@/lib/trails/edit-features";
 

@@ -1,7 +1,8 @@
 // GET /api/trails/{id}: a trail with its figures, profile, features and versions (public).
 // PATCH /api/trails/{id}: staff change name, difficulty, kind or direction (send the lockVersion read).
 // DELETE /api/trails/{id}: staff archive the trail; its versions and files are kept.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { getTrailDetail } from "@/lib/trails/queries";
 import { archiveTrail, updateTrailMetadata } from "@/lib/trails/edit-trail";
 

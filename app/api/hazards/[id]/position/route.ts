@@ -1,5 +1,6 @@
 // PATCH /api/hazards/{id}/position: staff move an open hazard pin ({"lon","lat","lockVersion"}).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { moveHazard } from "@/lib/map/move-pins";
 
 export const dynamic = "force-dynamic";

@@ -1,5 +1,6 @@
 // GET, PATCH (with lockVersion; 409 when stale), DELETE /api/me/setups/{setupId}: the caller's own setup only (else 404).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { findOwnSetup, setupView } from "@/lib/setups/setup-queries";
 import { deleteSetup, updateSetup } from "@/lib/setups/setup-writes";
 

@@ -1,6 +1,6 @@
 // POST /api/parks/{parkSlug}/hazards: pin a hazard (multipart: kind, note, lon+lat or trailId+distanceAlongM, photos) — staff of the park.
 import { handler } from "@/lib/server/api/handler";
-import { readHazardForm } from "@/lib/server/api/multipart";
+import { readHazardForm } from "@/lib/server/api/body";
 import { authorize } from "@/lib/server/auth/permissions";
 import { createHazard } from "@/lib/hazards/hazard-writes";
 import { getParkBySlug } from "@/lib/parks/queries";

@@ -1,5 +1,6 @@
 // POST /api/parks/{parkSlug}/invitations: a manager invites staff by e-mail.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { inviteStaff } from "@/lib/staff/invitations";
 

@@ -1,6 +1,7 @@
 // POST /api/parks/{parkSlug}/notices: staff queue a notice for the park's subscribers (202).
 // GET  /api/parks/{parkSlug}/notices: the park's recent notices with delivery counts.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { listParkNotices } from "@/lib/notices/notice-queries";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { sendNotice } from "@/lib/notices/send-notice";

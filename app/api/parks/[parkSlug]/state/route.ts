@@ -1,5 +1,6 @@
 // POST /api/parks/{parkSlug}/state: set the park-wide state; DELETE clears it (staff of the park).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { clearParkState, setParkState } from "@/lib/conditions/park-state";
 import { getParkBySlug } from "@/lib/parks/queries";
 

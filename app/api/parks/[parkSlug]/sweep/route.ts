@@ -1,5 +1,6 @@
 // POST /api/parks/{parkSlug}/sweep: the morning sweep, every marked trail in one transaction (staff of the park).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { saveSweep } from "@/lib/conditions/sweep";
 import { getParkBySlug } from "@/lib/parks/queries";
 

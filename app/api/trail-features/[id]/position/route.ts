@@ -1,5 +1,6 @@
 // PATCH /api/trail-features/{id}/position: staff move a built feature; it is snapped onto its trail.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { moveTrailFeature } from "@/lib/map/move-pins";
 
 export const dynamic = "force-dynamic";

@@ -1,5 +1,6 @@
 // POST /api/trails/{id}/features: staff add a feature (kind, size, and lon/lat snapped onto the line or distanceAlongM).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { featureView } from "@/lib/trails/queries";
 import { addTrailFeature } from "@/lib/trails/edit-features";
 

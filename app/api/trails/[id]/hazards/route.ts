@@ -1,6 +1,6 @@
 // POST /api/trails/{id}/hazards: pin a hazard on this trail (multipart: kind, note, lon+lat or distanceAlongM, photos) — staff of its park.
 import { handler } from "@/lib/server/api/handler";
-import { readHazardForm } from "@/lib/server/api/multipart";
+import { readHazardForm } from "@/lib/server/api/body";
 import { authorize } from "@/lib/server/auth/permissions";
 import { createHazard } from "@/lib/hazards/hazard-writes";
 import { loadTrailWithPark } from "@/lib/conditions/write-report";

@@ -1,6 +1,7 @@
 // GET /api/trails/{id}/reports?from=&to=[&revisions=all]: a trail's report history (public; every revision for staff).
 // POST /api/trails/{id}/reports: staff of the trail's park post a report (a new revision).
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { authorize } from "@/lib/server/auth/permissions";
 import { postTrailReport, loadTrailWithPark } from "@/lib/conditions/write-report";
 import { resolveRange, trailReportHistory } from "@/lib/conditions/history";

@@ -1,5 +1,6 @@
 // POST /api/parks/{parkSlug}/notices/preview: the e-mail a notice would send and its recipient count; nothing is written.
-import { handler, readJson } from "@/lib/server/api/handler";
+import { readJson } from "@/lib/server/api/body";
+import { handler } from "@/lib/server/api/handler";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { previewNotice } from "@/lib/notices/send-notice";
 
