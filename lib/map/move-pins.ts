@@ -1,10 +1,10 @@
 import "server-only";
 import { OptimisticLockError } from "sequelize";
-import { z } from "zod";
 import { distance } from "@turf/turf";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError, conflict, notFound, unauthorized } from "@/lib/shared/errors";
-import { MAX_SNAP_OFFSET_M, snapToTrail } from "@/lib/map/pure/snap";
+import { isUuid } from "@/lib/shared/ids";
+import { updateTrailFeature } from "@/lib/trails/edit-features";
 import { TRAIL_LIMITS } from "@/lib/trails/pure/limits";
 import { moveHazardSchema, moveTrailFeatureSchema } from "@/lib/map/pure/schemas";
 import { AuditEvent, Hazard, Park, Trail, TrailFeature, sequelize } from "@/models";
@@ -15,31 +15,14 @@ import { AuditEvent, Hazard, Park, Trail, TrailFeature, sequelize } from "@/mode
  * page can offer an undo (which is simply another move).
  */
 type Position = { lon: number; lat: number };
-const isUuid = (id: string) => z.uuid().safeParse(id).success;
 
+/** A feature dragged on the staff map: only its point is taken (never a distance), then the one feature write path. */
 export async function moveTrailFeature(actor: Actor | null, featureId: string, body: unknown) {
   if (!actor) throw unauthorized();
   const to = moveTrailFeatureSchema.parse(body);
-  if (!isUuid(featureId)) throw notFound("Trail feature not found.");
-  const feature = await TrailFeature.findByPk(featureId, { include: [{ model: Trail, as: "trail", attributes: ["id", "parkId", "name", "geometry", "archivedAt"] }] });
-  const trail = (feature as (TrailFeature & { trail?: Trail }) | null)?.trail;
-  if (!feature || !trail || trail.archivedAt) throw notFound("Trail feature not found.");
-  authorize(actor, "trail:write", { parkId: trail.parkId });
-
-  const snapped = snapToTrail(trail.geometry, to.lon, to.lat);
-  if (snapped.offsetM > MAX_SNAP_OFFSET_M) {
-    throw new AppError(422, `Drop the feature on its trail: that spot is ${Math.round(snapped.offsetM)} m from ${trail.name} (at most ${MAX_SNAP_OFFSET_M} m).`, "lon");
-  }
-  const previous: Position = { lon: feature.lon, lat: feature.lat };
-  await sequelize.transaction(async (transaction) => {
-    await feature.update({ lon: snapped.lon, lat: snapped.lat, distanceAlongM: snapped.distanceAlongM }, { transaction });
-    await AuditEvent.create(
-      { parkId: trail.parkId, actorId: actor.id, action: "trail-feature.move", subjectType: "trail-feature", subjectId: feature.id, data: { from: previous, to: snapped } },
-      { transaction },
-    );
-  });
+  const { feature, previous } = await updateTrailFeature(actor, featureId, to);
   return {
-    feature: { id: feature.id, trailId: trail.id, kind: feature.kind, lon: feature.lon, lat: feature.lat, distanceAlongM: feature.distanceAlongM },
+    feature: { id: feature.id, trailId: feature.trailId, kind: feature.kind, lon: feature.lon, lat: feature.lat, distanceAlongM: feature.distanceAlongM },
     previous,
   };
 }

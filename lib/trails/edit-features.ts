@@ -19,7 +19,7 @@ export async function addTrailFeature(actor: Actor | null, trailId: string, inpu
   return sequelize.transaction(async (transaction) => {
     const trail = await lockTrailForWrite(actor, trailId, transaction);
     const { kind, size, name, ...place } = trailFeatureCreateSchema.parse(input);
-    const placed = placeOnTrail(place, segmentsOf(trail));
+    const placed = placeOnTrail(place, segmentsOf(trail), trail.name);
     const feature = await TrailFeature.create(
       { trailId: trail.id, kind, size: size ?? null, name: name || null, lon: placed.lon, lat: placed.lat, distanceAlongM: placed.distanceAlongM },
       { transaction },
@@ -42,13 +42,19 @@ async function lockFeature(actor: Actor | null, featureId: string, transaction: 
   return { feature, trail };
 }
 
-/** Moves, retypes, renames or resizes a feature. */
+/**
+ * Moves, retypes, renames or resizes a feature: the one write path for a feature, used by the edit
+ * page (PATCH /api/trail-features/{id}) and the staff map's drag and undo (…/position). A move is
+ * snapped onto the line within MAX_FEATURE_OFFSET_M and audited as "trail-feature.move"; the
+ * previous position comes back so the map can offer an undo (which is simply another move).
+ */
 export async function updateTrailFeature(actor: Actor | null, featureId: string, input: unknown) {
   return sequelize.transaction(async (transaction) => {
     const { feature, trail } = await lockFeature(actor, featureId, transaction);
     const { lon, lat, distanceAlongM, ...fields } = trailFeatureUpdateSchema.parse(input);
     const moved = lon !== undefined || distanceAlongM !== undefined;
-    const placed = moved ? placeOnTrail({ lon, lat, distanceAlongM }, segmentsOf(trail)) : null;
+    const placed = moved ? placeOnTrail({ lon, lat, distanceAlongM }, segmentsOf(trail), trail.name) : null;
+    const previous = { lon: feature.lon, lat: feature.lat };
     await feature.update(
       {
         ...(fields.kind !== undefined ? { kind: fields.kind } : {}),
@@ -58,8 +64,9 @@ export async function updateTrailFeature(actor: Actor | null, featureId: string,
       },
       { transaction },
     );
-    await audit(actor!, trail, "trail-feature.update", feature.id, { ...fields, moved }, transaction);
-    return feature;
+    const data = placed ? { ...fields, from: previous, to: { lon: placed.lon, lat: placed.lat, distanceAlongM: placed.distanceAlongM } } : fields;
+    await audit(actor!, trail, placed ? "trail-feature.move" : "trail-feature.update", feature.id, data, transaction);
+    return { feature, previous };
   });
 }
 

@@ -50,13 +50,13 @@ export function pointAtDistance(segments: Position[][], distanceAlongM: number):
 }
 
 /** A point moved onto the trail: where it lands, how far along, and how far off the line it was. */
-export function snapPointToTrail(point: LonLat, segments: Position[][]): PlacedPoint {
+export function snapPointToTrail(point: LonLat, segments: Position[][], trailName = "the trail"): PlacedPoint {
   const [snapped] = snapFeatures([{ lon: point.lon, lat: point.lat }], segments);
   if (!snapped) throw new AppError(422, "The trail has no line to place a feature on.", "lon");
   if (snapped.offsetM > MAX_FEATURE_OFFSET_M) {
     throw new AppError(
       422,
-      `That point is ${formatDistance(snapped.offsetM, Math.ceil)} from the trail; a feature must lie within ${MAX_FEATURE_OFFSET_M} m of the line.`,
+      `That point is ${formatDistance(snapped.offsetM)} from ${trailName}; a feature must lie within ${MAX_FEATURE_OFFSET_M} m of the line.`,
       "lon",
     );
   }
@@ -65,8 +65,8 @@ export function snapPointToTrail(point: LonLat, segments: Position[][]): PlacedP
 }
 
 /** A place given either as a point (snapped) or as a distance from the start. */
-export function placeOnTrail(place: { lon?: number; lat?: number; distanceAlongM?: number }, segments: Position[][]): PlacedPoint {
-  if (place.lon !== undefined && place.lat !== undefined) return snapPointToTrail({ lon: place.lon, lat: place.lat }, segments);
+export function placeOnTrail(place: { lon?: number; lat?: number; distanceAlongM?: number }, segments: Position[][], trailName?: string): PlacedPoint {
+  if (place.lon !== undefined && place.lat !== undefined) return snapPointToTrail({ lon: place.lon, lat: place.lat }, segments, trailName);
   const distanceAlongM = place.distanceAlongM ?? 0;
   const [lon, lat] = pointAtDistance(segments, distanceAlongM);
   return { lon, lat, distanceAlongM, offsetM: 0 };

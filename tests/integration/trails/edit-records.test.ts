@@ -74,11 +74,11 @@ describe("features", () => {
 
     const far = (await addTrailFeature(manager, trail.id, { kind: "drop", lon: -121.93, lat: 47.299 }).catch((e) => e)) as AppError;
     expect(far.status).toBe(422);
-    expect(far.message).toMatch(/from the trail/);
+    expect(far.message).toContain(`from ${trail.name};`);
     const beyond = (await addTrailFeature(manager, trail.id, { kind: "drop", distanceAlongM: 5000 }).catch((e) => e)) as AppError;
     expect(beyond.status).toBe(422);
 
-    const updated = await updateTrailFeature(manager, byDistance.id, { kind: "drop", size: "large", distanceAlongM: 50 });
+    const { feature: updated } = await updateTrailFeature(manager, byDistance.id, { kind: "drop", size: "large", distanceAlongM: 50 });
     expect(updated).toMatchObject({ kind: "drop", size: "large", distanceAlongM: 50 });
     await deleteTrailFeature(manager, byDistance.id);
     expect(await TrailFeature.findByPk(byDistance.id)).toBeNull();

@@ -1,4 +1,5 @@
-// PATCH /api/trail-features/{id}/position: staff move a built feature; it is snapped onto its trail.
+// PATCH /api/trail-features/{id}/position: the staff map's drag and undo — a thin alias of PATCH /api/trail-features/{id}
+// that takes only a point (same snap, limit, lock and audit).
 import { readJson } from "@/lib/server/api/body";
 import { handler } from "@/lib/server/api/handler";
 import { moveTrailFeature } from "@/lib/map/move-pins";
