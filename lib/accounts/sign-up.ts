@@ -1,7 +1,8 @@
 import "server-only";
 import { UniqueConstraintError } from "sequelize";
 import { AppError } from "@/lib/shared/errors";
-import { AuditEvent, User } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { User } from "@/models";
 import { hashPassword, passwordSchema } from "@/lib/server/auth/password";
 import { signUpFields } from "./pure/schemas";
 
@@ -18,7 +19,7 @@ export async function signUpRider(input: unknown) {
       siteRole: "rider",
       disabledAt: null,
     });
-    await AuditEvent.create({ parkId: null, actorId: user.id, action: "account.sign-up", subjectType: "user", subjectId: user.id });
+    await recordAudit({ parkId: null, actorId: user.id, action: "account.sign-up", subjectType: "user", subjectId: user.id });
     return { id: user.id, email: user.email, name: user.name };
   } catch (error) {
     if (error instanceof UniqueConstraintError) throw new AppError(409, "An account with that e-mail already exists.", "email");

@@ -3,7 +3,8 @@ import "server-only";
 import { Op, type Transaction } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { parkStateSchema, type ParkStateKind } from "@/lib/conditions/pure/schemas";
-import { AuditEvent, ParkState, sequelize, type Park } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { ParkState, sequelize, type Park } from "@/models";
 
 export type ParkStateView = { id: string; state: ParkStateKind; message: string; startsAt: string; endsAt: string | null };
 
@@ -54,10 +55,7 @@ export async function setParkState(actor: Actor | null, park: Park, body: unknow
       },
       { transaction },
     );
-    await AuditEvent.create(
-      { parkId: park.id, actorId: actor.id, action: "park-state.set", subjectType: "park", subjectId: park.id, data: { state: input.state, message: input.message } },
-      { transaction },
-    );
+    await recordAudit({ parkId: park.id, actorId: actor.id, action: "park-state.set", subjectType: "park", subjectId: park.id, data: { state: input.state, message: input.message } }, transaction);
     return parkStateView(row);
   });
 }
@@ -69,7 +67,7 @@ export async function clearParkState(actor: Actor | null, park: Park, options: {
   return sequelize.transaction(async (transaction) => {
     const cleared = await clearOpen(park.id, now, transaction);
     if (cleared) {
-      await AuditEvent.create({ parkId: park.id, actorId: actor.id, action: "park-state.clear", subjectType: "park", subjectId: park.id, data: { cleared } }, { transaction });
+      await recordAudit({ parkId: park.id, actorId: actor.id, action: "park-state.clear", subjectType: "park", subjectId: park.id, data: { cleared } }, transaction);
     }
     return { cleared };
   });

@@ -14,7 +14,8 @@ import { AppError, notFound } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { parkLocalDate } from "@/lib/shared/park-clock";
 import { reportPostSchema, type ReportInput } from "@/lib/conditions/pure/schemas";
-import { AuditEvent, Park, Trail, TrailReport, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Park, Trail, TrailReport, sequelize } from "@/models";
 import { reportValues, reportView, type ReportView } from "./report-view";
 
 export type RevisionRequest = {
@@ -73,8 +74,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
   );
   const from = previous?.status ?? null;
   if (from !== values.status) {
-    await AuditEvent.create(
-      {
+    await recordAudit({
         parkId: park.id,
         actorId: request.actorId,
         action: "report.status-change",
@@ -82,9 +82,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
         subjectId: trail.id,
         data: { trailName: trail.name, date, from, to: values.status, reason: values.reason, revision: report.revision },
         createdAt: now,
-      },
-      { transaction },
-    );
+      }, transaction);
   }
   return { ok: true, report };
 }

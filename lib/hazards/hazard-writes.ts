@@ -8,7 +8,8 @@ import { PHOTO_LIMITS } from "@/lib/photos/pure/limits";
 import { processPhoto, type PhotoUpload, type ProcessedPhoto } from "@/lib/photos/process-photo";
 import { deleteStored, storeHazardPhotos } from "@/lib/photos/store-photos";
 import { hazardInputSchema, hazardPatchSchema } from "@/lib/hazards/pure/schemas";
-import { AuditEvent, Hazard, Photo, Trail, sequelize, type Park } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Hazard, Photo, Trail, sequelize, type Park } from "@/models";
 import { assertWithinPark, pointAlongTrail } from "./pure/hazard-place";
 
 export type HazardView = {
@@ -80,10 +81,7 @@ export async function createHazard(
         { transaction },
       );
       const photos = await storeHazardPhotos(hazard.id, processed, actor.id, transaction, written);
-      await AuditEvent.create(
-        { parkId: park.id, actorId: actor.id, action: "hazard.create", subjectType: "hazard", subjectId: hazard.id, data: { kind: input.kind, trailId: trail?.id ?? null, photos: photos.length } },
-        { transaction },
-      );
+      await recordAudit({ parkId: park.id, actorId: actor.id, action: "hazard.create", subjectType: "hazard", subjectId: hazard.id, data: { kind: input.kind, trailId: trail?.id ?? null, photos: photos.length } }, transaction);
       return hazardView(hazard, photos);
     });
   } catch (error) {
@@ -115,7 +113,7 @@ export async function updateHazard(actor: Actor | null, hazardId: string, body: 
     await sequelize.transaction(async (transaction) => {
       await hazard.save({ transaction });
       const action = patch.resolved === true ? "hazard.resolve" : patch.resolved === false ? "hazard.reopen" : "hazard.edit";
-      await AuditEvent.create({ parkId: hazard.parkId, actorId: actor.id, action, subjectType: "hazard", subjectId: hazard.id, data: { kind: hazard.kind } }, { transaction });
+      await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action, subjectType: "hazard", subjectId: hazard.id, data: { kind: hazard.kind } }, transaction);
     });
   } catch (error) {
     if (error instanceof OptimisticLockError) {

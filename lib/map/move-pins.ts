@@ -7,7 +7,8 @@ import { isUuid } from "@/lib/shared/ids";
 import { updateTrailFeature } from "@/lib/trails/edit-features";
 import { TRAIL_LIMITS } from "@/lib/trails/pure/limits";
 import { moveHazardSchema, moveTrailFeatureSchema } from "@/lib/map/pure/schemas";
-import { AuditEvent, Hazard, Park, Trail, TrailFeature, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Hazard, Park, Trail, TrailFeature, sequelize } from "@/models";
 
 /**
  * Staff moving pins on the map. Each move is validated, checked against the caller's park role,
@@ -46,10 +47,7 @@ export async function moveHazard(actor: Actor | null, hazardId: string, body: un
   try {
     await sequelize.transaction(async (transaction) => {
       await hazard.update({ lon: to.lon, lat: to.lat }, { transaction });
-      await AuditEvent.create(
-        { parkId: hazard.parkId, actorId: actor.id, action: "hazard.move", subjectType: "hazard", subjectId: hazard.id, data: { from: previous, to: { lon: to.lon, lat: to.lat } } },
-        { transaction },
-      );
+      await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action: "hazard.move", subjectType: "hazard", subjectId: hazard.id, data: { from: previous, to: { lon: to.lon, lat: to.lat } } }, transaction);
     });
   } catch (error) {
     if (error instanceof OptimisticLockError) throw conflict("Someone else changed this hazard a moment ago. Reload and try again.");

@@ -5,7 +5,8 @@ import { env } from "@/lib/server/env";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { noticeFields, type NoticeFields } from "@/lib/notices/pure/schemas";
-import { AuditEvent, Notice, Park, Trail, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Notice, Park, Trail, sequelize } from "@/models";
 import { countAudience, queueDeliveries } from "./audience";
 import { requeueFailed } from "./delivery-queue";
 import { composeNoticeEmail, noticeSubject } from "./compose";
@@ -71,10 +72,7 @@ export async function sendNotice(actor: Actor | null, parkId: string, input: unk
     );
     const recipientCount = await queueDeliveries(notice.id, audienceOf(parkId, fields), messageIdParts(notice.id, messageIdDomain(env().APP_URL)), transaction);
     await notice.update({ recipientCount }, { transaction });
-    await AuditEvent.create(
-      { parkId, actorId: prepared.actor.id, action: "notice.send", subjectType: "notice", subjectId: notice.id, data: { kind: fields.kind, trailIds: fields.trailIds, recipientCount } },
-      { transaction },
-    );
+    await recordAudit({ parkId, actorId: prepared.actor.id, action: "notice.send", subjectType: "notice", subjectId: notice.id, data: { kind: fields.kind, trailIds: fields.trailIds, recipientCount } }, transaction);
     return { id: notice.id, recipientCount };
   });
 }
@@ -85,6 +83,6 @@ export async function retryFailedDeliveries(actor: Actor | null, noticeId: strin
   if (!notice) throw new AppError(404, "Notice not found.");
   authorize(actor, "notice:send", { parkId: notice.parkId });
   const requeued = await requeueFailed(notice.id);
-  await AuditEvent.create({ parkId: notice.parkId, actorId: actor.id, action: "notice.retry", subjectType: "notice", subjectId: notice.id, data: { requeued } });
+  await recordAudit({ parkId: notice.parkId, actorId: actor.id, action: "notice.retry", subjectType: "notice", subjectId: notice.id, data: { requeued } });
   return { id: notice.id, requeued };
 }

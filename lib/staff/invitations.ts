@@ -7,7 +7,8 @@ import { env } from "@/lib/server/env";
 import { AppError } from "@/lib/shared/errors";
 import { sendMail } from "@/lib/server/mail/transport";
 import { acceptInvitationFields, invitationFields } from "@/lib/accounts/pure/schemas";
-import { AuditEvent, Invitation, Park, ParkMembership, User, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Invitation, Park, ParkMembership, User, sequelize } from "@/models";
 
 const INVITATION_DAYS = 7;
 
@@ -23,7 +24,7 @@ export async function inviteStaff(actor: Actor | null, parkId: string, input: un
       { parkId, email, role, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), acceptedAt: null },
       { transaction },
     );
-    await AuditEvent.create({ parkId, actorId: actor.id, action: "staff.invite", subjectType: "invitation", subjectId: created.id, data: { email, role } }, { transaction });
+    await recordAudit({ parkId, actorId: actor.id, action: "staff.invite", subjectType: "invitation", subjectId: created.id, data: { email, role } }, transaction);
     return created;
   });
   const link = `${env().APP_URL}/invitations/${token}`;
@@ -71,7 +72,7 @@ export async function acceptInvitation(input: unknown) {
     const membership = await ParkMembership.findOne({ where: { parkId: invitation.parkId, userId: user.id }, transaction });
     if (membership) await membership.update({ role: invitation.role }, { transaction });
     else await ParkMembership.create({ parkId: invitation.parkId, userId: user.id, role: invitation.role }, { transaction });
-    await AuditEvent.create({ parkId: invitation.parkId, actorId: user.id, action: "staff.join", subjectType: "invitation", subjectId: invitation.id, data: { role: invitation.role } }, { transaction });
+    await recordAudit({ parkId: invitation.parkId, actorId: user.id, action: "staff.join", subjectType: "invitation", subjectId: invitation.id, data: { role: invitation.role } }, transaction);
     return { userId: user.id, email: user.email, role: invitation.role, parkSlug: invitation.park?.slug, existingAccount: Boolean(existing) };
   });
 }

@@ -5,13 +5,14 @@ import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { placeOnTrail } from "@/lib/trails/pure/placement";
 import { trailFeatureCreateSchema, trailFeatureUpdateSchema } from "@/lib/trails/pure/schemas";
-import { AuditEvent, Trail, TrailFeature, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Trail, TrailFeature, sequelize } from "@/models";
 import { lockTrailForWrite } from "./edit-trail";
 
 const segmentsOf = (trail: Trail) => (trail.geometry.type === "LineString" ? [trail.geometry.coordinates] : trail.geometry.coordinates);
 
 async function audit(actor: Actor, trail: Trail, action: string, featureId: string, data: Record<string, unknown>, transaction: Transaction) {
-  await AuditEvent.create({ parkId: trail.parkId, actorId: actor.id, action, subjectType: "trail-feature", subjectId: featureId, data: { trailId: trail.id, ...data } }, { transaction });
+  await recordAudit({ parkId: trail.parkId, actorId: actor.id, action, subjectType: "trail-feature", subjectId: featureId, data: { trailId: trail.id, ...data } }, transaction);
 }
 
 /** Adds a feature, placed on the line by a point (snapped) or by its distance from the start. */

@@ -4,7 +4,8 @@ import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { trailPatchSchema } from "@/lib/trails/pure/schemas";
-import { AuditEvent, Trail, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Trail, sequelize } from "@/models";
 
 /** What an editor needs to see when someone else saved first. */
 const currentValues = (t: Trail) => ({ name: t.name, difficulty: t.difficulty, kind: t.kind, direction: t.direction, lockVersion: t.lockVersion });
@@ -32,7 +33,7 @@ export async function updateTrailMetadata(actor: Actor | null, trailId: string, 
       const changed = Object.fromEntries(Object.entries(changes).filter(([key, value]) => trail.get(key as keyof Trail) !== value));
       if (Object.keys(changed).length === 0) return trail;
       await trail.update(changed, { transaction });
-      await AuditEvent.create({ parkId: trail.parkId, actorId: actor!.id, action: "trail.update", subjectType: "trail", subjectId: trail.id, data: { changed } }, { transaction });
+      await recordAudit({ parkId: trail.parkId, actorId: actor!.id, action: "trail.update", subjectType: "trail", subjectId: trail.id, data: { changed } }, transaction);
       return trail;
     });
   } catch (error) {
@@ -50,7 +51,7 @@ export async function archiveTrail(actor: Actor | null, trailId: string) {
   return sequelize.transaction(async (transaction) => {
     const trail = await lockTrailForWrite(actor, trailId, transaction);
     await trail.update({ archivedAt: new Date() }, { transaction });
-    await AuditEvent.create({ parkId: trail.parkId, actorId: actor!.id, action: "trail.archive", subjectType: "trail", subjectId: trail.id, data: { name: trail.name } }, { transaction });
+    await recordAudit({ parkId: trail.parkId, actorId: actor!.id, action: "trail.archive", subjectType: "trail", subjectId: trail.id, data: { name: trail.name } }, transaction);
     return trail;
   });
 }

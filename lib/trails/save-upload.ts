@@ -6,7 +6,8 @@ import { isUuid } from "@/lib/shared/ids";
 import { processTrailUpload, type TrailUploadResult } from "@/lib/trails/pure";
 import { featuresForNewLine, MAX_FEATURE_OFFSET_M } from "@/lib/trails/pure/placement";
 import { trailMetadataSchema, type TrailMetadata } from "@/lib/trails/pure/schemas";
-import { AuditEvent, Park, Trail, TrailFeature, TrailVersion, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { Park, Trail, TrailFeature, TrailVersion, sequelize } from "@/models";
 
 export type UploadedFile = { bytes: Buffer; filename: string; contentType?: string };
 
@@ -90,7 +91,7 @@ export async function createTrailFromUpload(actor: Actor | null, park: Park, fil
     const trail = await Trail.create({ parkId: park.id, ...fields, ...geometryColumns(result), createdBy: actor.id }, { transaction });
     await writeVersion(trail, 1, file, result, actor.id, transaction);
     await TrailFeature.bulkCreate(featureRows(trail.id, result.features), { transaction });
-    await AuditEvent.create({ parkId: park.id, actorId: actor.id, action: "trail.create", subjectType: "trail", subjectId: trail.id, data: { name: trail.name } }, { transaction });
+    await recordAudit({ parkId: park.id, actorId: actor.id, action: "trail.create", subjectType: "trail", subjectId: trail.id, data: { name: trail.name } }, transaction);
     return { trail, result };
   });
 }
@@ -112,7 +113,7 @@ export async function replaceTrailLine(actor: Actor | null, trailId: string, fil
     await locked.update({ ...geometryColumns(result), currentVersion: versionNo }, { transaction });
     await writeVersion(locked, versionNo, file, result, actor.id, transaction);
     const notes = await carryFeaturesOver(locked, result, transaction);
-    await AuditEvent.create({ parkId: locked.parkId, actorId: actor.id, action: "trail.replace-line", subjectType: "trail", subjectId: locked.id, data: { versionNo } }, { transaction });
+    await recordAudit({ parkId: locked.parkId, actorId: actor.id, action: "trail.replace-line", subjectType: "trail", subjectId: locked.id, data: { versionNo } }, transaction);
     return { trail: locked, result, notes };
   });
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
+import { recordAudit } from "@/lib/audit/record";
 import { AuditEvent, sequelize } from "@/models";
 
 /**
@@ -33,6 +34,6 @@ export async function claimUploadSlot(actor: Actor, parkId: string, purpose: Upl
       const minutes = Math.max(1, Math.ceil((recent[0].createdAt.getTime() + WINDOW_MS - now.getTime()) / 60_000));
       throw new AppError(429, `You have sent ${UPLOADS_PER_HOUR} trail files in the last hour, the most Loamcast processes for one person. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, "file");
     }
-    await AuditEvent.create({ parkId, actorId: actor.id, action: UPLOAD_ATTEMPT_ACTION, subjectType: "park", subjectId: parkId, data: { purpose }, createdAt: now }, { transaction });
+    await recordAudit({ parkId, actorId: actor.id, action: UPLOAD_ATTEMPT_ACTION, subjectType: "park", subjectId: parkId, data: { purpose }, createdAt: now }, transaction);
   });
 }

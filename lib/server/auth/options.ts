@@ -3,7 +3,8 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { env } from "@/lib/server/env";
-import { AuditEvent, User } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
+import { User } from "@/models";
 import { verifyPassword } from "./password";
 import { recordSignIn, signInBlocked } from "./rate-limit";
 
@@ -34,13 +35,13 @@ export const authOptions: NextAuthOptions = {
         const { email, password } = parsed.data;
         const ip = clientIp(req?.headers as Record<string, string> | undefined);
         if (await signInBlocked(email, ip)) {
-          await AuditEvent.create({ parkId: null, actorId: null, action: "auth.sign-in.throttled", subjectType: "email", subjectId: null, data: { ip } });
+          await recordAudit({ parkId: null, actorId: null, action: "auth.sign-in.throttled", subjectType: "email", subjectId: null, data: { ip } });
           throw new Error("Too many failed attempts. Wait 15 minutes and try again.");
         }
         const user = await User.findOne({ where: { email }, useMaster: true }); // an account made a moment ago
         const ok = Boolean(user && !user.disabledAt && (await verifyPassword(password, user.passwordHash)));
         await recordSignIn(email, ip, ok);
-        await AuditEvent.create({
+        await recordAudit({
           parkId: null,
           actorId: ok ? user!.id : null,
           action: ok ? "auth.sign-in" : "auth.sign-in.failed",
