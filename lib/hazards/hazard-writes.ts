@@ -1,6 +1,5 @@
 import "server-only";
 /** Hazard pins with photos: created all-or-nothing, edited and resolved with optimistic locking. */
-import { OptimisticLockError } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError, notFound } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
@@ -9,6 +8,7 @@ import { processPhoto, type PhotoUpload, type ProcessedPhoto } from "@/lib/photo
 import { deleteStored, storeHazardPhotos } from "@/lib/photos/store-photos";
 import { hazardInputSchema, hazardPatchSchema } from "@/lib/hazards/pure/schemas";
 import { recordAudit } from "@/lib/audit/record";
+import { unlessStale } from "@/lib/server/optimistic-lock";
 import { Hazard, Photo, Trail, sequelize, type Park } from "@/models";
 import { assertWithinPark, pointAlongTrail } from "./pure/hazard-place";
 
@@ -109,18 +109,17 @@ export async function updateHazard(actor: Actor | null, hazardId: string, body: 
     hazard.resolvedAt = patch.resolved ? (hazard.resolvedAt ?? now) : null;
     hazard.resolvedBy = patch.resolved ? actor.id : null;
   }
-  try {
-    await sequelize.transaction(async (transaction) => {
-      await hazard.save({ transaction });
-      const action = patch.resolved === true ? "hazard.resolve" : patch.resolved === false ? "hazard.reopen" : "hazard.edit";
-      await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action, subjectType: "hazard", subjectId: hazard.id, data: { kind: hazard.kind } }, transaction);
-    });
-  } catch (error) {
-    if (error instanceof OptimisticLockError) {
+  const action = patch.resolved === true ? "hazard.resolve" : patch.resolved === false ? "hazard.reopen" : "hazard.edit";
+  await unlessStale(
+    () =>
+      sequelize.transaction(async (transaction) => {
+        await hazard.save({ transaction });
+        await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action, subjectType: "hazard", subjectId: hazard.id, data: { kind: hazard.kind } }, transaction);
+      }),
+    async () => {
       await hazard.reload({ useMaster: true });
-      throw stale();
-    }
-    throw error;
-  }
+      return stale();
+    },
+  );
   return hazardView(hazard, photos);
 }

@@ -1,10 +1,10 @@
 import "server-only";
-import { OptimisticLockError } from "sequelize";
 import { distance } from "@turf/turf";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError, conflict, notFound, unauthorized } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { updateTrailFeature } from "@/lib/trails/edit-features";
+import { unlessStale } from "@/lib/server/optimistic-lock";
 import { TRAIL_LIMITS } from "@/lib/trails/pure/limits";
 import { moveHazardSchema, moveTrailFeatureSchema } from "@/lib/map/pure/schemas";
 import { recordAudit } from "@/lib/audit/record";
@@ -44,14 +44,13 @@ export async function moveHazard(actor: Actor | null, hazardId: string, body: un
   if (fromCentreM > TRAIL_LIMITS.maxDistanceFromParkM) throw new AppError(422, "That spot is far outside the park. Drop the pin where the hazard is.", "lon");
 
   const previous: Position = { lon: hazard.lon, lat: hazard.lat };
-  try {
-    await sequelize.transaction(async (transaction) => {
-      await hazard.update({ lon: to.lon, lat: to.lat }, { transaction });
-      await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action: "hazard.move", subjectType: "hazard", subjectId: hazard.id, data: { from: previous, to: { lon: to.lon, lat: to.lat } } }, transaction);
-    });
-  } catch (error) {
-    if (error instanceof OptimisticLockError) throw conflict("Someone else changed this hazard a moment ago. Reload and try again.");
-    throw error;
-  }
+  await unlessStale(
+    () =>
+      sequelize.transaction(async (transaction) => {
+        await hazard.update({ lon: to.lon, lat: to.lat }, { transaction });
+        await recordAudit({ parkId: hazard.parkId, actorId: actor.id, action: "hazard.move", subjectType: "hazard", subjectId: hazard.id, data: { from: previous, to: { lon: to.lon, lat: to.lat } } }, transaction);
+      }),
+    () => conflict("Someone else changed this hazard a moment ago. Reload and try again."),
+  );
   return { hazard: { id: hazard.id, lon: hazard.lon, lat: hazard.lat, lockVersion: hazard.lockVersion }, previous };
 }

@@ -6,6 +6,7 @@ import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { noticeFields, type NoticeFields } from "@/lib/notices/pure/schemas";
 import { recordAudit } from "@/lib/audit/record";
+import { claimWithinLimit } from "@/lib/server/hourly-limit";
 import { Notice, Park, Trail, sequelize } from "@/models";
 import { countAudience, queueDeliveries } from "./audience";
 import { requeueFailed } from "./delivery-queue";
@@ -60,12 +61,16 @@ export async function sendNotice(actor: Actor | null, parkId: string, input: unk
   const prepared = await prepare(actor, parkId, input);
   const { fields, subject } = prepared;
   return sequelize.transaction(async (transaction) => {
-    // Serialises sends per park so two at once cannot both slip under the hourly limit.
-    await sequelize.query("SELECT pg_advisory_xact_lock(hashtext($1))", { bind: [`notice-send:${parkId}`], transaction });
-    const recent = await Notice.count({ where: { parkId, createdAt: { [Op.gt]: new Date(Date.now() - 3_600_000) } }, transaction });
-    if (recent >= limits.perHour) {
-      throw new AppError(429, `This park has sent ${recent} notices in the past hour, the most allowed. Wait a while, or combine updates into one notice.`);
-    }
+    await claimWithinLimit(transaction, {
+      key: `notice-send:${parkId}`,
+      limit: limits.perHour,
+      used: async (since) => {
+        const where = { parkId, createdAt: { [Op.gt]: since } };
+        const [count, oldest] = await Promise.all([Notice.count({ where, transaction }), Notice.min<Date, Notice>("createdAt", { where, transaction })]);
+        return { count, oldest: oldest ?? null };
+      },
+      refuse: ({ count }) => new AppError(429, `This park has sent ${count} notices in the past hour, the most allowed. Wait a while, or combine updates into one notice.`),
+    });
     const notice = await Notice.create(
       { parkId, kind: fields.kind, trailIds: fields.trailIds, subject, message: fields.message, closedUntil: fields.closedUntil, createdBy: prepared.actor.id },
       { transaction },

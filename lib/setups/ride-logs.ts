@@ -15,6 +15,7 @@ import { parseInput } from "@/lib/shared/parse";
 import { rideLogSchema } from "@/lib/setups/pure/ride-log-schema";
 import { setupSchema, type SetupInput } from "@/lib/setups/pure/setup-schema";
 import { unitsOf } from "@/lib/accounts/pure/units-schema";
+import { unlessStale } from "@/lib/server/optimistic-lock";
 import { RideLog, Setup, User, sequelize } from "@/models";
 import { staleSetup } from "./setup-writes";
 import { canApply, type StoredSuggestion } from "./pure/suggestion";
@@ -101,12 +102,7 @@ export async function applyRideLogSuggestion(actor: Actor | null, id: unknown, n
     const key = suggestion.wheel === "rear" ? "rearKpa" : "frontKpa";
     const changed = suggestion.wheel ? { ...baseline, [key]: baseline[key] + suggestion.deltaKpa } : baseline;
     const merged = parseInput(setupSchema, { ...setup, baseline: changed });
-    try {
-      await setupRow.update({ baseline: merged.baseline ?? null }, { transaction });
-    } catch (error) {
-      if ((error as Error).name === "SequelizeOptimisticLockError") throw staleSetup(setupRow.lockVersion);
-      throw error;
-    }
+    await unlessStale(() => setupRow.update({ baseline: merged.baseline ?? null }, { transaction }), () => staleSetup(setupRow.lockVersion));
     await log.update({ appliedAt: now }, { transaction });
     return { setup: setupView(setupRow), rideLog: rideLogView(log) };
   });

@@ -1,11 +1,11 @@
 import "server-only";
 /** Writes to a rider's own setups: create, update with optimistic locking, delete. */
-import { OptimisticLockError } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { findOwnSetup, setupView, storedSetup } from "@/lib/setups/setup-queries";
 import { parseInput } from "@/lib/shared/parse";
 import { MAX_SETUPS_PER_RIDER, setupPatchSchema, setupSchema, type SetupInput } from "@/lib/setups/pure/setup-schema";
+import { unlessStale } from "@/lib/server/optimistic-lock";
 import { Setup } from "@/models";
 
 const columns = (s: SetupInput) => ({ ...s, baseline: s.baseline ?? null, suspension: s.suspension ?? null });
@@ -31,12 +31,10 @@ export async function updateSetup(actor: Actor | null, id: unknown, raw: unknown
   const { lockVersion, ...patch } = parseInput(setupPatchSchema, raw);
   if (lockVersion !== setup.lockVersion) throw staleSetup(setup.lockVersion);
   const merged = parseInput(setupSchema, { ...storedSetup(setup), ...patch });
-  try {
-    await setup.update(columns(merged));
-  } catch (error) {
-    if (error instanceof OptimisticLockError) throw staleSetup((await Setup.findByPk(setup.id, { useMaster: true }))?.lockVersion ?? lockVersion + 1);
-    throw error;
-  }
+  await unlessStale(
+    () => setup.update(columns(merged)),
+    async () => staleSetup((await Setup.findByPk(setup.id, { useMaster: true }))?.lockVersion ?? lockVersion + 1),
+  );
   return setupView(setup);
 }
 

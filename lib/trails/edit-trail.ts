@@ -1,5 +1,6 @@
 import "server-only";
-import { OptimisticLockError, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
+import { unlessStale } from "@/lib/server/optimistic-lock";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
@@ -23,27 +24,26 @@ export async function lockTrailForWrite(actor: Actor | null, trailId: string, tr
  * if someone saved in between, nothing changes and the 409 carries the current values.
  */
 export async function updateTrailMetadata(actor: Actor | null, trailId: string, input: unknown) {
-  try {
-    return await sequelize.transaction(async (transaction) => {
-      const trail = await lockTrailForWrite(actor, trailId, transaction);
-      const { lockVersion, ...changes } = trailPatchSchema.parse(input);
-      if (trail.lockVersion !== lockVersion) {
-        throw new AppError(409, "Someone else changed this trail since you opened it. Their values are shown; check them and save again.", undefined, { current: currentValues(trail) });
-      }
-      const changed = Object.fromEntries(Object.entries(changes).filter(([key, value]) => trail.get(key as keyof Trail) !== value));
-      if (Object.keys(changed).length === 0) return trail;
-      await trail.update(changed, { transaction });
-      await recordAudit({ parkId: trail.parkId, actorId: actor!.id, action: "trail.update", subjectType: "trail", subjectId: trail.id, data: { changed } }, transaction);
-      return trail;
-    });
-  } catch (error) {
+  return unlessStale(
+    () =>
+      sequelize.transaction(async (transaction) => {
+        const trail = await lockTrailForWrite(actor, trailId, transaction);
+        const { lockVersion, ...changes } = trailPatchSchema.parse(input);
+        if (trail.lockVersion !== lockVersion) {
+          throw new AppError(409, "Someone else changed this trail since you opened it. Their values are shown; check them and save again.", undefined, { current: currentValues(trail) });
+        }
+        const changed = Object.fromEntries(Object.entries(changes).filter(([key, value]) => trail.get(key as keyof Trail) !== value));
+        if (Object.keys(changed).length === 0) return trail;
+        await trail.update(changed, { transaction });
+        await recordAudit({ parkId: trail.parkId, actorId: actor!.id, action: "trail.update", subjectType: "trail", subjectId: trail.id, data: { changed } }, transaction);
+        return trail;
+      }),
     // Only reachable if a writer slipped past the row lock; answer the same way.
-    if (error instanceof OptimisticLockError) {
+    async () => {
       const fresh = await Trail.findByPk(trailId, { useMaster: true });
-      throw new AppError(409, "Someone else changed this trail since you opened it. Check the values and save again.", undefined, { current: fresh ? currentValues(fresh) : null });
-    }
-    throw error;
-  }
+      return new AppError(409, "Someone else changed this trail since you opened it. Check the values and save again.", undefined, { current: fresh ? currentValues(fresh) : null });
+    },
+  );
 }
 
 /** Archives a trail: it leaves every list and the map, and its versions, files and features are kept. */
