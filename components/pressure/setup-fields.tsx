@@ -1,13 +1,13 @@
 "use client";
 /** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline. */
 import { MASS_UNITS, PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/shared/units";
-import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
+import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES, wheelSizeLabel } from "@/lib/pressure/pure/schemas";
 import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/setups/pure/setup-form";
 import { CheckInput, MultiCheck, Segments, SelectInput, TextInput } from "./inputs";
 
 export const WHEEL_SIZES = BEAD_SEAT_DIAMETERS_MM.map((bsd) => ({
   value: String(bsd),
-  label: ({ 406: '20″ (406 mm)', 507: '24″ (507 mm)', 559: '26″ (559 mm)', 584: '27.5″ (584 mm)', 622: '29″ (622 mm)' } as const)[bsd],
+  label: `${wheelSizeLabel(bsd)} (${bsd} mm)`,
 }));
 const CASING_LABELS = { light: "Light", trail: "Trail", reinforced: "Reinforced", downhill: "Downhill" } as const;
 const PACE_LABELS = { easy: "Easy", steady: "Steady", hard: "Hard" } as const;

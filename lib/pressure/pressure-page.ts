@@ -1,4 +1,5 @@
 import "server-only";
+import { wheelSizeLabel } from "@/lib/pressure/pure/schemas";
 /** What the "Today's pressure" page needs, read in parallel on the server. */
 import { Op, fn, col } from "sequelize";
 import type { Actor } from "@/lib/server/auth/permissions";
@@ -12,8 +13,7 @@ import { Park, Trail } from "@/models";
 /** "29″ · 94 kg with bike · baseline 19.0 psi / 23.0 psi" — enough to tell setups apart. */
 export function setupSummary(setup: SetupView, units: { pressure: PressureUnit; mass: MassUnit }): string {
   const unit = units.pressure;
-  const size = (bsd: number) => ({ 406: '20″', 507: '24″', 559: '26″', 584: '27.5″', 622: '29″' })[bsd as 622] ?? `${bsd} mm`;
-  const wheels = setup.front.bsdMm === setup.rear.bsdMm ? size(setup.front.bsdMm) : `${size(setup.front.bsdMm)} / ${size(setup.rear.bsdMm)}`;
+  const wheels = setup.front.bsdMm === setup.rear.bsdMm ? wheelSizeLabel(setup.front.bsdMm) : `${wheelSizeLabel(setup.front.bsdMm)} / ${wheelSizeLabel(setup.rear.bsdMm)}`;
   const baseline = setup.baseline ? `baseline ${formatPressure(setup.baseline.frontKpa, unit)} / ${formatPressure(setup.baseline.rearKpa, unit)}` : "no baseline yet";
   return `${wheels} · ${formatMass(setup.riderMassKg + setup.bikeMassKg, units.mass, 0)} with bike · ${baseline}`;
 }

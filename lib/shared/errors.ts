@@ -18,9 +18,6 @@ export class AppError extends Error {
   }
 }
 
-export const badRequest = (message: string, field?: string) => new AppError(400, message, field);
-export const unprocessable = (message: string, field?: string) => new AppError(422, message, field);
 export const notFound = (message = "Not found.") => new AppError(404, message);
-export const forbidden = (message = "You do not have permission to do that.") => new AppError(403, message);
 export const unauthorized = (message = "Sign in first.") => new AppError(401, message);
 export const conflict = (message: string, details?: unknown) => new AppError(409, message, undefined, details);

@@ -5,13 +5,14 @@
 import { along, distance, length, lineString } from "@turf/turf";
 import { AppError } from "@/lib/shared/errors";
 import { formatDistance } from "@/lib/trails/pure/geo";
+import type { LonLat } from "@/lib/trails/pure/types";
 
 /** A pin further than this from the park's centre is refused as a typo or swapped coordinates. */
 export const MAX_HAZARD_DISTANCE_FROM_PARK_M = 20_000;
 
 const END_TOLERANCE_M = 1;
 
-export type LonLat = { lon: number; lat: number };
+export type { LonLat };
 
 export function assertWithinPark(point: LonLat, center: LonLat, maxM = MAX_HAZARD_DISTANCE_FROM_PARK_M): void {
   const away = distance([center.lon, center.lat], [point.lon, point.lat], { units: "meters" });

@@ -1,3 +1,6 @@
+import { SURFACES, type Surface } from "@/lib/conditions/pure/vocabulary";
+
+export { SURFACES, type Surface };
 /**
  * Schemas for the pressure engine: the public request (route body), the engine's own input
  * (with the day's conditions resolved per trail) and the ride-log feedback.
@@ -6,12 +9,14 @@
 import { z } from "zod";
 import { PRESSURE_UNITS } from "@/lib/shared/units";
 
-export const SURFACES = ["dry", "dusty", "tacky", "damp", "wet", "muddy", "loose", "rocky", "frozen", "snow"] as const;
 export const FEATURES = ["berm", "jump", "drop", "rock-garden", "roots", "wooden-feature"] as const;
 export const CASINGS = ["light", "trail", "reinforced", "downhill"] as const;
 export const PACES = ["easy", "steady", "hard"] as const;
-/** ISO 5775 bead-seat diameters (mm): 20", 24", 26", 27.5" (650B), 29" (700C). */
-export const BEAD_SEAT_DIAMETERS_MM = [406, 507, 559, 584, 622] as const;
+/** ISO 5775 bead-seat diameters (mm) and the wheel sizes riders call them by: the one wheel-size table. */
+export const WHEEL_SIZE_INCHES = { 406: "20″", 507: "24″", 559: "26″", 584: "27.5″", 622: "29″" } as const;
+export const BEAD_SEAT_DIAMETERS_MM = [406, 507, 559, 584, 622] as const satisfies readonly (keyof typeof WHEEL_SIZE_INCHES)[];
+/** "29″" for 622 mm; an unknown diameter in millimetres. */
+export const wheelSizeLabel = (bsdMm: number): string => WHEEL_SIZE_INCHES[bsdMm as keyof typeof WHEEL_SIZE_INCHES] ?? `${bsdMm} mm`;
 export const SYMPTOMS = ["squirm-in-berms", "rim-strike", "burp", "harsh", "sliding", "fine"] as const;
 
 /** A number within [min, max] whose messages name the field and the unit. */
@@ -121,7 +126,6 @@ export const sagInputSchema = z
   })
   .refine((v) => v.sagMm <= v.strokeMm, { error: "Sag cannot exceed the stroke or travel.", path: ["sagMm"] });
 
-export type Surface = z.infer<typeof surfaceSchema>;
 export type Feature = z.infer<typeof featureSchema>;
 export type Casing = (typeof CASINGS)[number];
 export type Pace = (typeof PACES)[number];

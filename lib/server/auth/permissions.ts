@@ -1,12 +1,13 @@
 import "server-only";
 import { AppError } from "@/lib/shared/errors";
+import type { ParkRole } from "@/models/park-membership";
 
 /**
  * Who may do what: the one place that decides. Pure, so it is unit-tested for every
  * role × action. Server code loads the Actor fresh from the database (lib/server/auth/actor.ts)
  * and calls `authorize` before acting.
  */
-export type ParkRole = "manager" | "ranger";
+export type { ParkRole };
 export type Actor = {
   id: string;
   email: string;
