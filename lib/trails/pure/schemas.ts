@@ -75,16 +75,16 @@ const onePlacement = (p: { lon?: number; distanceAlongM?: number }) => p.lon ===
 const onlyOne = { message: "Send either a distance along the trail or longitude and latitude, not both.", path: ["distanceAlongM"] };
 
 /** A new feature: its kind and size, and where it sits: a point (snapped onto the line) or a distance from the start. */
-export const trailFeatureCreateSchema = z
-  .object({
-    kind: featureKindSchema,
-    size: featureSizeSchema.nullable().optional(),
-    name: featureName.optional(),
-    lon: longitude.optional(),
-    lat: latitude.optional(),
-    distanceAlongM: distanceAlong.optional(),
-  })
-  .strict()
+const featureFields = z.strictObject({
+  kind: featureKindSchema,
+  size: featureSizeSchema.nullable().optional(),
+  name: featureName.optional(),
+  lon: longitude.optional(),
+  lat: latitude.optional(),
+  distanceAlongM: distanceAlong.optional(),
+});
+
+export const trailFeatureCreateSchema = featureFields
   .refine(lonLatTogether, together)
   .refine((p) => p.lon !== undefined || p.distanceAlongM !== undefined, {
     message: "Say where the feature is: a distance from the trail's start, or longitude and latitude.",
@@ -93,16 +93,8 @@ export const trailFeatureCreateSchema = z
   .refine(onePlacement, onlyOne);
 
 /** Move, retype or resize a feature; nothing else may change. */
-export const trailFeatureUpdateSchema = z
-  .object({
-    kind: featureKindSchema.optional(),
-    size: featureSizeSchema.nullable().optional(),
-    name: featureName.optional(),
-    lon: longitude.optional(),
-    lat: latitude.optional(),
-    distanceAlongM: distanceAlong.optional(),
-  })
-  .strict()
+export const trailFeatureUpdateSchema = featureFields
+  .extend({ kind: featureKindSchema.optional() })
   .refine(lonLatTogether, together)
   .refine(onePlacement, onlyOne);
 
