@@ -6,24 +6,30 @@
  * behaviour of RFC 5545 calendars and of `Date`): a time inside a spring-forward gap moves later by
  * the gap's length (02:30 on a night that jumps from 02:00 to 03:00 becomes 03:30), and a time an
  * autumn change repeats takes the earlier of its two instants.
+ *
+ * The other direction, an instant read on the park's clock, has exactly one answer; it uses Intl,
+ * which every browser has, so client pages that only show times (the board) do not ship the polyfill.
  */
 import { Temporal } from "temporal-polyfill";
 
-const zoned = (instant: Date, timeZone: string) => Temporal.Instant.fromEpochMilliseconds(instant.getTime()).toZonedDateTimeISO(timeZone);
+/** The park's wall clock at an instant: YYYY-MM-DD and HH:MM (24-hour). */
+function wallClock(instant: Date, timeZone: string): { date: string; time: string } {
+  const parts = new Intl.DateTimeFormat("en-US", { timeZone, hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit" }).formatToParts(instant);
+  const get = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)!.value;
+  return { date: `${get("year")}-${get("month")}-${get("day")}`, time: `${get("hour")}:${get("minute")}` };
+}
 
 /** The park's calendar date at an instant, as YYYY-MM-DD. */
-export function parkLocalDate(instant: Date, timeZone: string): string {
-  return zoned(instant, timeZone).toPlainDate().toString();
-}
+export const parkLocalDate = (instant: Date, timeZone: string): string => wallClock(instant, timeZone).date;
 
 /** The park's wall-clock time at an instant, as HH:MM (24-hour). */
-export function parkLocalTime(instant: Date, timeZone: string): string {
-  return zoned(instant, timeZone).toPlainTime().toString({ smallestUnit: "minute" });
-}
+export const parkLocalTime = (instant: Date, timeZone: string): string => wallClock(instant, timeZone).time;
 
-/** The calendar date `days` before or after a YYYY-MM-DD date. */
+/** The calendar date `days` before or after a YYYY-MM-DD date (calendar arithmetic: no zone involved). */
 export function shiftDate(date: string, days: number): string {
-  return Temporal.PlainDate.from(date).add({ days }).toString();
+  const d = new Date(`${date}T12:00:00Z`);
+  d.setUTCDate(d.getUTCDate() + days);
+  return d.toISOString().slice(0, 10);
 }
 
 /** True for a time-zone name Temporal (and so the IANA database shipped with the runtime) knows. */
@@ -58,5 +64,6 @@ export function parkLocalToInstant(local: string, timeZone: string): Date | null
 
 /** The `datetime-local` value showing an instant on the park's wall clock. */
 export function instantToParkLocal(instant: Date, timeZone: string): string {
-  return zoned(instant, timeZone).toPlainDateTime().toString({ smallestUnit: "minute" });
+  const { date, time } = wallClock(instant, timeZone);
+  return `${date}T${time}`;
 }

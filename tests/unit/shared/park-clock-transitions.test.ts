@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parkLocalInstant, parkLocalTime, parkLocalToInstant } from "@/lib/shared/park-clock";
+import { instantToParkLocal, parkLocalInstant, parkLocalTime, parkLocalToInstant } from "@/lib/shared/park-clock";
 
 /*
  * Wall-clock times at the 2026 daylight-saving changes, resolved with "compatible" semantics
@@ -47,6 +47,13 @@ describe("park clock at daylight-saving changes (IANA tz rules)", () => {
     expect(at("2026-04-05", "02:30", "Asia/Kolkata")).toBe("2026-04-04T21:00:00.000Z");
     expect(at("2026-10-25", "02:30", "Asia/Kolkata")).toBe("2026-10-24T21:00:00.000Z");
     expect(at("2026-11-01", "02:30", "Asia/Kolkata")).toBe("2026-10-31T21:00:00.000Z");
+  });
+
+  it("reading an instant back gives the wall clock on either side of a change (both 01:30s of 1 November in Los Angeles)", () => {
+    expect(parkLocalTime(new Date("2026-11-01T08:30:00Z"), "America/Los_Angeles")).toBe("01:30"); // PDT
+    expect(parkLocalTime(new Date("2026-11-01T09:30:00Z"), "America/Los_Angeles")).toBe("01:30"); // PST
+    expect(instantToParkLocal(new Date("2026-03-08T10:30:00Z"), "America/Los_Angeles")).toBe("2026-03-08T03:30");
+    expect(instantToParkLocal(new Date("2026-04-04T13:30:00Z"), "Pacific/Auckland")).toBe("2026-04-05T02:30");
   });
 
   it("a datetime-local field is read the same way", () => {
