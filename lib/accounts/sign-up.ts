@@ -2,7 +2,7 @@ import "server-only";
 import { UniqueConstraintError } from "sequelize";
 import { AppError } from "@/lib/shared/errors";
 import { AuditEvent, User } from "@/models";
-import { hashPassword, passwordSchema } from "../server/auth/password";
+import { hashPassword, passwordSchema } from "@/lib/server/auth/password";
 import { signUpFields } from "./pure/schemas";
 
 /** Rider self sign-up. Refuses short or common passwords and taken addresses; writes nothing on refusal. */

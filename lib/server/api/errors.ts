@@ -2,6 +2,7 @@ import "server-only";
 import { ZodError } from "zod";
 import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
 import { AppError } from "@/lib/shared/errors";
+import { logger } from "@/lib/server/logger";
 
 export type ErrorBody = { error: { message: string; field?: string; details?: unknown } };
 
@@ -20,9 +21,9 @@ export function errorResponse(error: unknown): Response {
     return Response.json({ error: { message: "The request body is not valid JSON." } } satisfies ErrorBody, { status: 400 });
   }
   if (isDatabaseUnavailable(error)) {
-    console.error("[api] database unavailable:", (error as Error).message);
+    logger.error({ err: error, source: "api" }, "database unavailable");
     return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } } satisfies ErrorBody, { status: 503, headers: { "retry-after": "5" } });
   }
-  console.error("[api] unexpected error:", error);
+  logger.error({ err: error, source: "api" }, "unexpected error");
   return Response.json({ error: { message: "Something went wrong on our side." } } satisfies ErrorBody, { status: 500 });
 }
