@@ -11,7 +11,6 @@ const MODELS = deny("^@/models(/|$)", "Models are read through lib/ (DEVELOPERS.
 const APP = deny("^@/app(/|$)", "Nothing imports app/: move what both need into lib/ or components/.");
 const TOOLING = deny("^@/(scripts|seeders|migrations|tests|bench)(/|$)", "Scripts, seeders, tests and benches are never imported by the product.");
 const UPWARD = deny("^\\.\\./", "Import across folders through @/… so these boundaries can see it.");
-const SERVER_INFRA = deny("^@/lib/server(/|$)", "lib/server is infrastructure for lib/<domain>, route handlers and pages.");
 // lib/server/**, and a domain's modules outside pure/ except its server actions (*actions.ts).
 const SERVER_MODULES = deny(
   "^@/lib/(server/|(?!client/|shared/)[^/]+/(?!pure(/|$))(?![^/]*actions$))",
@@ -59,6 +58,7 @@ export default defineConfig([
   ...nextTs,
   globalIgnores([".next/", ".local/", "public/vendor/", "test-results/", "playwright-report/", "next-env.d.ts"]),
   {
+    files: ["**/*.tsx"],
     rules: {
       // Intentional here: reading localStorage after hydration, and taking the server's values
       // after router.refresh(). A warning keeps them visible without failing the build.
