@@ -33,7 +33,7 @@ async function describeError(error: unknown): Promise<FormState> {
   }
   const log = await requestLogger();
   if (isDatabaseUnavailable(error)) {
-    log.error({ err: error, source: "action" }, "database unavailable");
+    log.error({ reason: (error as Error).message, source: "action" }, "database unavailable");
     return { ok: false, message: "The service is briefly unavailable. Nothing was saved; try again in a moment." };
   }
   log.error({ err: error, source: "action" }, "unexpected error");

@@ -57,6 +57,8 @@ export function createLogger(destination?: DestinationStream, level: Level = lev
 
 function serializeError(error: unknown) {
   const plain = pino.stdSerializers.err(error as Error);
+  // Sequelize keeps the driver's error twice, as `parent` and `original`: one copy is enough.
+  if (error && (error as { original?: unknown }).original === (error as { parent?: unknown }).parent) delete plain.original;
   if (typeof plain?.message === "string") plain.message = maskUrlPasswords(plain.message);
   if (typeof plain?.stack === "string") plain.stack = maskUrlPasswords(plain.stack);
   return plain;

@@ -21,7 +21,7 @@ export function errorResponse(error: unknown): Response {
     return Response.json({ error: { message: "The request body is not valid JSON." } } satisfies ErrorBody, { status: 400 });
   }
   if (isDatabaseUnavailable(error)) {
-    logger.error({ err: error, source: "api" }, "database unavailable");
+    logger.error({ reason: (error as Error).message, source: "api" }, "database unavailable");
     return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } } satisfies ErrorBody, { status: 503, headers: { "retry-after": "5" } });
   }
   logger.error({ err: error, source: "api" }, "unexpected error");
