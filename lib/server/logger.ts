@@ -1,7 +1,7 @@
 import "server-only";
 import { AsyncLocalStorage } from "node:async_hooks";
 import pino, { type DestinationStream, type Logger } from "pino";
-import { REQUEST_ID_HEADER } from "./request-id";
+import { REQUEST_ID_HEADER, requestIdFrom } from "./request-id";
 
 /**
  * One JSON line per event on standard output (docs/operations.md, Logging). Lines written while
@@ -74,6 +74,12 @@ export const logger = createLogger();
 /** Runs `fn` with every line it logs (through any logger made here) carrying `requestId`. */
 export function withRequestId<T>(requestId: string, fn: () => T): T {
   return requestContext.run({ requestId }, fn);
+}
+
+/** The logger for one request: inside handler() the context has the id; elsewhere the request's header. */
+export function loggerFor(request?: Request): Logger {
+  if (!request || requestContext.getStore()) return logger;
+  return logger.child({ requestId: requestIdFrom(request.headers) });
 }
 
 /**

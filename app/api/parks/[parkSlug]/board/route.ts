@@ -18,6 +18,6 @@ export async function GET(request: Request, context: { params: Promise<{ parkSlu
     if (request.headers.get("if-none-match") === etag) return new Response(null, { status: 304, headers });
     return Response.json(board, { headers });
   } catch (error) {
-    return errorResponse(error);
+    return errorResponse(error, request);
   }
 }
