@@ -1,10 +1,12 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { REQUEST_ID_HEADER, requestIdFrom } from "@/lib/server/request-id";
 import { contentSecurityPolicy, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
- * Runs before every page and API request. Two jobs only:
+ * Runs before every page and API request. Three jobs only:
  * 1. security headers, with a per-request CSP nonce;
- * 2. an optimistic redirect to sign in for private pages without a session cookie.
+ * 2. an optimistic redirect to sign in for private pages without a session cookie;
+ * 3. a request id (x-request-id) for the logs, passed on to the app and sent back in the response.
  * Pages and handlers still do the real permission checks on the server.
  */
 const PRIVATE = ["/staff", "/admin", "/me"];
@@ -15,6 +17,7 @@ export function proxy(request: NextRequest) {
   const hasSession = request.cookies.getAll().some((c) => c.name.endsWith("next-auth.session-token"));
 
   let response: NextResponse;
+  const requestId = requestIdFrom(request.headers);
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const csp = contentSecurityPolicy(nonce, { dev: process.env.NODE_ENV === "development" });
   if (isPrivate && !hasSession) {
@@ -26,9 +29,11 @@ export function proxy(request: NextRequest) {
     const headers = new Headers(request.headers);
     headers.set("x-nonce", nonce);
     headers.set("content-security-policy", csp);
+    headers.set(REQUEST_ID_HEADER, requestId);
     response = NextResponse.next({ request: { headers } });
   }
   response.headers.set("Content-Security-Policy", csp);
+  response.headers.set(REQUEST_ID_HEADER, requestId);
   const production = (process.env.APP_URL ?? "").startsWith("https://");
   for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) response.headers.set(name, value);
   return response;

@@ -1,7 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import { headers } from "next/headers";
 import localFont from "next/font/local";
-import { SiteHeader } from "@/components/site-header";
+import { SiteHeader } from "./site-header";
 import "./globals.css";
 
 const sans = localFont({ src: "./fonts/inter-latin-var.woff2", weight: "100 900", variable: "--font-sans", display: "swap" });

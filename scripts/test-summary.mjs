@@ -1,4 +1,5 @@
-// Adds up the test counts of the vitest and Playwright JSON reports into one closing line.
+// Adds up the test counts of the vitest and Playwright JSON reports into one closing line;
+// each lint error counts as one failure.
 import { existsSync, readFileSync } from "node:fs";
 
 let passed = 0, failed = 0, skipped = 0;
@@ -14,5 +15,10 @@ if (existsSync(".local/test-results/e2e.json")) {
   passed += (stats.expected ?? 0) + (stats.flaky ?? 0);
   failed += stats.unexpected ?? 0;
   skipped += stats.skipped ?? 0;
+}
+if (existsSync(".local/test-results/lint.json")) {
+  const lint = JSON.parse(readFileSync(".local/test-results/lint.json", "utf8"));
+  failed += lint.errors ?? 0;
+  console.log(`\nlint: ${lint.files} files, ${lint.errors} errors, ${lint.warnings} warnings in ${lint.seconds} s`);
 }
 console.log(`\nsummary: ${passed} passed, ${failed} failed, ${skipped} skipped`);

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm test: the same bootstrap as npm start, against a throwaway database, then
-# type-check, unit tests, integration tests (real PostgreSQL) and browser tests (Chromium).
+# lint (the layout's import boundaries), type-check, unit tests, integration tests (real PostgreSQL)
+# and browser tests (Chromium).
 set -uo pipefail
 . "$(dirname "$0")/bootstrap.sh"
 . scripts/pg.sh
@@ -35,6 +36,7 @@ run_step() {
   if "$@"; then RESULT[$name]=pass; else RESULT[$name]=FAIL; fi
 }
 
+run_step lint node scripts/lint/run.mjs --report .local/test-results/lint.json
 run_step typecheck node_modules/.bin/tsc --noEmit
 run_step unit node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile=.local/test-results/unit.json
 # Integration tests get a database of their own, so what they create never shows in the browser tests.
@@ -48,7 +50,7 @@ fi
 
 node scripts/test-summary.mjs
 status=0
-for step in typecheck unit integration build browser; do
+for step in lint typecheck unit integration build browser; do
   printf '  %-12s %s\n' "$step" "${RESULT[$step]}"
   [ "${RESULT[$step]}" = pass ] || status=1
 done

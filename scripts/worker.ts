@@ -6,6 +6,7 @@ import { drainDue, newWorkerId } from "@/lib/notices/delivery-worker";
 import { createNoticeTransport } from "@/lib/notices/notice-transport";
 import { report, runWorkerLoop } from "@/lib/notices/worker-loop";
 import { workerSettings } from "@/lib/notices/worker-settings";
+import { logger } from "@/lib/server/logger";
 import { sequelize } from "@/models";
 
 async function main() {
@@ -13,10 +14,11 @@ async function main() {
   const { connections, ...rest } = settings;
   const transport = createNoticeTransport({ maxConnections: connections });
   const options = { workerId: newWorkerId(), transport, ...rest };
+  const log = logger.child({ workerId: options.workerId });
   const stopping = new AbortController();
   const stop = (signal: string) => {
     if (stopping.signal.aborted) return;
-    console.log(`[worker] ${signal}: finishing the batch in hand, then stopping`);
+    log.info({ signal }, `${signal}: finishing the batch in hand, then stopping`);
     stopping.abort();
   };
   process.on("SIGINT", () => stop("SIGINT"));
@@ -25,11 +27,11 @@ async function main() {
   try {
     if (process.argv.includes("--once")) {
       const result = await drainDue(options, () => stopping.signal.aborted);
-      report(result, console.log);
-      console.log(`[worker] done: ${result.sent} sent, ${result.retrying} to retry later, ${result.failed} failed`);
+      report(result, log);
+      log.info({ ...result }, `done: ${result.sent} sent, ${result.retrying} to retry later, ${result.failed} failed`);
     } else {
-      console.log(`[worker] ${options.workerId} started (polling every ${settings.pollMs} ms)`);
-      await runWorkerLoop(options, { pollMs: settings.pollMs, signal: stopping.signal });
+      log.info({ pollMs: settings.pollMs }, `started (polling every ${settings.pollMs} ms)`);
+      await runWorkerLoop(options, { pollMs: settings.pollMs, signal: stopping.signal, log });
     }
   } finally {
     transport.close();
@@ -40,7 +42,7 @@ async function main() {
 main().then(
   () => process.exit(0),
   (error) => {
-    console.error("[worker] stopped by an error:", error);
+    logger.fatal({ err: error }, "worker stopped by an error");
     process.exit(1);
   },
 );

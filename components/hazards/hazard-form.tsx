@@ -135,7 +135,7 @@ export function HazardForm({ parkSlug, trails }: { parkSlug: string; trails: Tra
           </div>
         ) : (
           <div>
-            <label htmlFor="hazard-distance" className="label">Distance from the trail's start (m)</label>
+            <label htmlFor="hazard-distance" className="label">Distance from the trail&apos;s start (m)</label>
             <input id="hazard-distance" name="distanceAlongM" type="number" min={0} step={1} inputMode="numeric" className="field" required />
             <p className="field-error" aria-live="polite">{fieldError("distanceAlongM")}</p>
           </div>

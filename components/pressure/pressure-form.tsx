@@ -3,6 +3,7 @@
  * "Today's pressure": park, trails and setup → POST /api/pressure → the band. A plain form that
  * works with Tab and Enter alone; an unsaved setup can be kept in this browser only.
  */
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, useTransition } from "react";
 import { STANDARD_CAUTIONS } from "@/lib/pressure/pure/cautions";
@@ -137,7 +138,7 @@ export function PressureForm(props: Props) {
           ) : (
             <p className="text-loam-800">
               {props.signedIn ? (
-                <>Enter your bike below, or <a className="font-semibold underline" href="/me/setups/new">save a setup</a> to skip this next time.</>
+                <>Enter your bike below, or <Link className="font-semibold underline" href="/me/setups/new">save a setup</Link> to skip this next time.</>
               ) : (
                 <>Enter your bike below. <a className="font-semibold underline" href="/sign-in?callbackUrl=/pressure">Sign in</a> to save setups and baselines.</>
               )}

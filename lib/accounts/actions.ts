@@ -4,7 +4,8 @@ import { signUpRider } from "@/lib/accounts/sign-up";
 import { getActor } from "@/lib/server/auth/actor";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { acceptInvitation, inviteStaff } from "@/lib/staff/invitations";
-import { formError, type FormState } from "../shared/form-state";
+import { formError } from "@/lib/server/form-error";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** Server actions are reachable by a direct POST: each one checks its caller itself. */
 export async function signUpAction(_prev: FormState, form: FormData): Promise<FormState> {

@@ -2,7 +2,8 @@
 import { revalidatePath } from "next/cache";
 import { getActor } from "@/lib/server/auth/actor";
 import { updateUnits } from "@/lib/accounts/units";
-import { formError, type FormState } from "../shared/form-state";
+import { formError } from "@/lib/server/form-error";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** Server actions are reachable by a direct POST: updateUnits checks the caller itself. */
 export async function updateUnitsAction(_prev: FormState, form: FormData): Promise<FormState> {

@@ -6,7 +6,8 @@ import { clearParkState, setParkState } from "@/lib/conditions/park-state";
 import { parkToday } from "@/lib/conditions/park-today";
 import { getParkBySlug } from "@/lib/parks/queries";
 import { AppError } from "@/lib/shared/errors";
-import { formError, type FormState } from "../shared/form-state";
+import { formError } from "@/lib/server/form-error";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** Server actions are reachable by a direct POST: each one checks its caller itself (inside the lib call). */
 export async function setParkStateAction(_prev: FormState, form: FormData): Promise<FormState> {

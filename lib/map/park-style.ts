@@ -3,6 +3,7 @@ import type { StyleSpecification } from "maplibre-gl";
 import { z } from "zod";
 import { env } from "@/lib/server/env";
 import { buildParkStyle, overlayOnHostedStyle, type ParkStyleInput } from "./pure/style";
+import { requestLogger } from "@/lib/server/logger";
 
 /**
  * The style a park's map loads. With MAP_STYLE_URL set (production), the hosted vector style is
@@ -23,7 +24,7 @@ async function hostedStyle(url: string): Promise<StyleSpecification | null> {
     cached = { url, at: Date.now(), style };
     return style;
   } catch (error) {
-    console.warn(`[map] hosted style unavailable (${(error as Error).message}); using the park's own ground`);
+    (await requestLogger()).warn({ err: error, host: new URL(url).host }, "hosted map style unavailable; using the park's own ground");
     return null;
   }
 }

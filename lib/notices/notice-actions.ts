@@ -6,7 +6,8 @@ import { getParkBySlug } from "@/lib/parks/queries";
 import { AppError } from "@/lib/shared/errors";
 import { parkLocalToInstant } from "@/lib/shared/park-clock";
 import { previewNotice, retryFailedDeliveries, sendNotice } from "@/lib/notices/send-notice";
-import { formError, type FormState } from "../shared/form-state";
+import { formError } from "@/lib/server/form-error";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** Server actions are reachable by a direct POST: each one checks its caller itself (in lib/notices). */
 export type NoticePreview = { subject: string; text: string; html: string; recipientCount: number };

@@ -12,7 +12,7 @@ const CONNECT_TIMEOUT_MS = 10_000;
  * on the server's delayed ACK: about 85 messages/s against 1,200 with it off, measured here
  * with nodemailer and smtp-server on one machine. TLS (smtps) keeps nodemailer's own socket.
  * If our connect fails, nodemailer is left to connect itself: an error handed back from here
- * would leave its pool slot stuck (nodemailer 7.0.13), so the failure is reported its usual way.
+ * left a pool slot stuck in nodemailer 7 (10.x frees it), and falling back keeps the send going.
  */
 export function socketWithoutDelay(options: { host?: string; port?: number; secure?: boolean }, callback: (err: Error | null, socketOptions?: unknown) => void) {
   if (options.secure || !options.host || !options.port) return callback(null, false);

@@ -2,7 +2,8 @@
 import { revalidatePath } from "next/cache";
 import { getActor } from "@/lib/server/auth/actor";
 import { removeSubscription, saveSubscription } from "@/lib/notices/subscriptions";
-import { formError, type FormState } from "../shared/form-state";
+import { formError } from "@/lib/server/form-error";
+import type { FormState } from "@/lib/shared/form-state";
 
 /** Server actions are reachable by a direct POST: lib/notices/subscriptions checks the caller. */
 export async function saveSubscriptionAction(_prev: FormState, form: FormData): Promise<FormState> {

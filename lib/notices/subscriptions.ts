@@ -8,6 +8,7 @@ import { headerSafe, sendMail } from "@/lib/server/mail/transport";
 import { linkToken, subscriptionFields } from "@/lib/notices/pure/schemas";
 import { Park, Subscription, Trail } from "@/models";
 import { CONFIRM_LINK_DAYS, confirmToken, readConfirmToken, readUnsubscribeToken, subscriptionLinks } from "./link-tokens";
+import { requestLogger } from "@/lib/server/logger";
 
 /** A confirmation link is mailed at most this often per subscription (ASVS v5.0.0 2.4.1). */
 export const CONFIRMATION_RESEND_MINUTES = 10;
@@ -80,7 +81,7 @@ async function mailConfirmationLink(sub: Subscription, park: Park): Promise<bool
       text: `You asked Loamcast to e-mail you closures and other notices from ${park.name}.\n\nConfirm within ${CONFIRM_LINK_DAYS} days: ${link}\n\nIf this was not you, ignore this e-mail: nothing will be sent to you.`,
     });
   } catch (error) {
-    console.error("[subscriptions] confirmation mail not sent:", (error as Error)?.message);
+    (await requestLogger()).error({ err: error, subscriptionId: sub.id }, "confirmation mail not sent");
     return false;
   }
   await sub.update({ confirmationSentAt: new Date() });

@@ -1,4 +1,6 @@
 import "server-only";
+import type { Logger } from "pino";
+import { logger } from "@/lib/server/logger";
 import { drainDue, type BatchResult, type WorkerOptions } from "./delivery-worker";
 
 /**
@@ -7,7 +9,7 @@ import { drainDue, type BatchResult, type WorkerOptions } from "./delivery-worke
  */
 export async function runWorkerLoop(
   options: WorkerOptions,
-  { pollMs, signal, log = console.log }: { pollMs: number; signal: AbortSignal; log?: (line: string) => void },
+  { pollMs, signal, log = logger }: { pollMs: number; signal: AbortSignal; log?: Logger },
 ) {
   let errorStreak = 0;
   while (!signal.aborted) {
@@ -19,15 +21,15 @@ export async function runWorkerLoop(
       // The database or the mail server is away: keep the process, back off, try again.
       errorStreak++;
       wait = Math.min(30_000, pollMs * 2 ** errorStreak);
-      log(`[worker] error, trying again in ${wait} ms: ${(error as Error)?.message ?? error}`);
+      log.error({ err: error, retryInMs: wait }, `error, trying again in ${wait} ms`);
     }
     await sleep(wait, signal);
   }
 }
 
-export function report(result: BatchResult, log: (line: string) => void) {
+export function report(result: BatchResult, log: Logger) {
   if (result.claimed === 0 && result.failed === 0) return;
-  log(`[worker] claimed ${result.claimed}: sent ${result.sent}, retrying ${result.retrying}, failed ${result.failed}, lost claims ${result.lost}`);
+  log.info({ ...result }, `claimed ${result.claimed}: sent ${result.sent}, retrying ${result.retrying}, failed ${result.failed}, lost claims ${result.lost}`);
 }
 
 function sleep(ms: number, signal: AbortSignal) {

@@ -4,6 +4,7 @@ import type { Transaction } from "sequelize";
 import { photoStorage } from "@/lib/server/storage";
 import { Photo } from "@/models";
 import type { ProcessedPhoto } from "./process-photo";
+import { requestLogger } from "@/lib/server/logger";
 
 /**
  * Writes processed photos for one hazard: a Photo row per photo (inside the caller's
@@ -41,5 +42,6 @@ export async function storeHazardPhotos(
 /** Best effort: remove files of a write that did not commit. */
 export async function deleteStored(keys: string[]): Promise<void> {
   const storage = photoStorage();
-  await Promise.all(keys.map((key) => storage.delete(key).catch((error) => console.error("[photos] could not delete", key, error))));
+  const log = await requestLogger();
+  await Promise.all(keys.map((key) => storage.delete(key).catch((error) => log.error({ err: error, key }, "could not delete a stored photo"))));
 }

@@ -8,7 +8,7 @@ import { AppError } from "@/lib/shared/errors";
 import { FEATURES, SURFACES, type Feature, type Surface, type TrailConditions } from "@/lib/pressure/pure/schemas";
 import { isUuid } from "@/lib/shared/ids";
 import { Park, Trail, TrailFeature } from "@/models";
-import { currentReportsByTrail, parkToday } from "../conditions/park-today";
+import { currentReportsByTrail, parkToday } from "@/lib/conditions/park-today";
 
 export type TrailStatus = "open" | "caution" | "closed";
 export type TrailToday = {

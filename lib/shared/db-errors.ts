@@ -1,6 +1,6 @@
 /**
  * Telling "the database is away" (a restart, a failover, the network) from every other error.
- * Pure and import-free: form-state.ts, which client components import, uses it too. Checked by
+ * Pure and import-free, so every layer can use it. Checked by
  * name and SQLSTATE rather than instanceof, so it also holds for another copy of the driver.
  */
 

@@ -2,11 +2,15 @@ import "server-only";
 import { ZodError } from "zod";
 import { isDatabaseUnavailable } from "@/lib/shared/db-errors";
 import { AppError } from "@/lib/shared/errors";
+import { loggerFor } from "@/lib/server/logger";
 
 export type ErrorBody = { error: { message: string; field?: string; details?: unknown } };
 
-/** One mapping from anything thrown to one JSON error shape (ASVS 16.5.1: generic text for the unexpected). */
-export function errorResponse(error: unknown): Response {
+/**
+ * One mapping from anything thrown to one JSON error shape (ASVS 16.5.1: generic text for the unexpected).
+ * Routes that skip handler() pass their request, so the log line still carries its id.
+ */
+export function errorResponse(error: unknown, request?: Request): Response {
   if (error instanceof AppError) {
     const body: ErrorBody = { error: { message: error.message, field: error.field, details: error.details } };
     return Response.json(body, { status: error.status });
@@ -20,9 +24,9 @@ export function errorResponse(error: unknown): Response {
     return Response.json({ error: { message: "The request body is not valid JSON." } } satisfies ErrorBody, { status: 400 });
   }
   if (isDatabaseUnavailable(error)) {
-    console.error("[api] database unavailable:", (error as Error).message);
+    loggerFor(request).error({ reason: (error as Error).message, source: "api" }, "database unavailable");
     return Response.json({ error: { message: "The service is briefly unavailable. Try again in a moment." } } satisfies ErrorBody, { status: 503, headers: { "retry-after": "5" } });
   }
-  console.error("[api] unexpected error:", error);
+  loggerFor(request).error({ err: error, source: "api" }, "unexpected error");
   return Response.json({ error: { message: "Something went wrong on our side." } } satisfies ErrorBody, { status: 500 });
 }

@@ -3,6 +3,8 @@ import { getActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { env } from "@/lib/server/env";
+import { withRequestId } from "@/lib/server/logger";
+import { requestIdFrom } from "@/lib/server/request-id";
 import { errorResponse } from "./errors";
 
 type Context<P> = { params: Promise<P> };
@@ -30,10 +32,11 @@ export function assertSameOrigin(request: Request) {
 
 /**
  * Wraps a route handler: resolves params, loads the caller fresh from the database,
- * checks the origin of state changes and maps every error to the one JSON shape.
+ * checks the origin of state changes and maps every error to the one JSON shape. Every line
+ * logged meanwhile carries the request id (the proxy's x-request-id, or a new one).
  */
 export function handler<P = Record<string, never>>(fn: (args: HandlerArgs<P>) => Promise<Response>) {
-  return async (request: Request, context: Context<P>): Promise<Response> => {
+  const run = async (request: Request, context: Context<P>): Promise<Response> => {
     try {
       assertSameOrigin(request);
       const params = context?.params ? await context.params : ({} as P);
@@ -43,4 +46,5 @@ export function handler<P = Record<string, never>>(fn: (args: HandlerArgs<P>) =>
       return errorResponse(error);
     }
   };
+  return (request: Request, context: Context<P>) => withRequestId(requestIdFrom(request.headers), () => run(request, context));
 }

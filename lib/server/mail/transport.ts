@@ -1,5 +1,7 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
+import { parseConnectionUrl } from "nodemailer/lib/shared";
+import type SMTPTransport from "nodemailer/lib/smtp-transport";
 import { env, usesFakeMail } from "@/lib/server/env";
 
 /** One SMTP transport, unpooled: a dropped pooled connection can resend (see DEVELOPERS.md). */
@@ -7,12 +9,14 @@ let transport: Transporter | undefined;
 
 export function mailTransport(): Transporter {
   if (!transport) {
-    transport = nodemailer.createTransport(env().SMTP_URL, {
+    // Transport options belong in the first argument: createTransport's second one holds message defaults.
+    transport = nodemailer.createTransport({
+      ...parseConnectionUrl(env().SMTP_URL),
       ...(usesFakeMail() ? { ignoreTLS: true } : {}),
       connectionTimeout: 10_000,
       greetingTimeout: 10_000,
       socketTimeout: 20_000,
-    } as nodemailer.TransportOptions);
+    } satisfies SMTPTransport.Options);
   }
   return transport;
 }

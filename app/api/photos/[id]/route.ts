@@ -7,6 +7,6 @@ export async function GET(request: Request, context: { params: Promise<{ id: str
     const { id } = await context.params;
     return await photoResponse(id, new URL(request.url).searchParams.get("size"));
   } catch (error) {
-    return errorResponse(error);
+    return errorResponse(error, request);
   }
 }

@@ -15,6 +15,6 @@ export async function GET(request: Request, context: { params: Promise<{ parkSlu
     // The ETag ignores generatedAt, so an unchanged board answers 304 to a phone on poor signal.
     return jsonWithEtag(board, request, { tagOf: { ...board, generatedAt: null } });
   } catch (error) {
-    return errorResponse(error);
+    return errorResponse(error, request);
   }
 }

@@ -2,8 +2,8 @@ import Link from "next/link";
 import { getActor } from "@/lib/server/auth/actor";
 import { primaryRole } from "@/lib/server/auth/permissions";
 import { navigationFor } from "@/lib/server/navigation";
-import { SignOutButton } from "./sign-out-button";
-import { Wordmark } from "./wordmark";
+import { SignOutButton } from "@/components/sign-out-button";
+import { Wordmark } from "@/components/wordmark";
 
 export async function SiteHeader() {
   const actor = await getActor();
