@@ -23,3 +23,6 @@ export const frontRear = ([front, rear]: readonly [number, number] | readonly nu
 
 export const kpaAndPsi = (kPa: number) => `${kPa} kPa (≈ ${formatPressure(kPa, "psi")})`;
 export const percent = (fraction: number) => `${fraction > 0 ? "+" : fraction < 0 ? "\u2212" : ""}${Math.round(Math.abs(fraction) * 1000) / 10}\u00a0%`;
+
+/** [−0.055, −0.032] as "front −5.5 %, rear −3.2 %". */
+export const frontRearPercent = ([front, rear]: readonly [number, number] | readonly number[]) => `front ${percent(front)}, rear ${percent(rear)}`;

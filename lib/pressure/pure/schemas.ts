@@ -42,13 +42,20 @@ export const wheelSchema = z.strictObject({
   tubeless: z.boolean({ error: "Tubeless must be true or false." }),
   maxKpa: boundedNumber("The tyre's printed maximum", 100, 1100, "kPa"),
   rimMaxKpa: boundedNumber("The rim's printed maximum", 100, 1100, "kPa").optional(),
+  /** The tyre's printed minimum, when it has one. */
+  minKpa: boundedNumber("The tyre's printed minimum", 20, 1100, "kPa").optional(),
 });
 
 export const baselineSchema = z.strictObject({
   frontKpa: boundedNumber("Baseline front pressure", 20, 1100, "kPa"),
   rearKpa: boundedNumber("Baseline rear pressure", 20, 1100, "kPa"),
   surfaces: surfaceList.min(1, { error: "Name at least one surface the baseline was set on." }).default(["dry"]),
+  /** Where the baseline was checked with a gauge (air temperature, elevation). */
   temperatureC: boundedNumber("Baseline temperature", -40, 50, "°C").optional(),
+  elevationM: boundedNumber("Baseline elevation", -500, 5000, "m").optional(),
+  /** What it was ridden in, when that differs from where it was checked. */
+  rideTemperatureC: boundedNumber("Baseline ride temperature", -40, 50, "°C").optional(),
+  rideElevationM: boundedNumber("Baseline ride elevation", -500, 5000, "m").optional(),
 });
 
 /** Air temperatures and elevations of the day; each optional (missing means "same as the other"). */
@@ -57,6 +64,10 @@ const airFields = {
   pumpTemperatureC: boundedNumber("Pump temperature", -40, 50, "°C").optional(),
   rideElevationM: boundedNumber("Ride elevation", -500, 5000, "m").optional(),
   pumpElevationM: boundedNumber("Pump elevation", -500, 5000, "m").optional(),
+  /** The highest point of the planned trails: the printed maximum is checked there too. */
+  highestElevationM: boundedNumber("Highest elevation", -500, 5000, "m").optional(),
+  /** The lowest point of the planned trails: the band widens with the span. */
+  lowestElevationM: boundedNumber("Lowest elevation", -500, 5000, "m").optional(),
 };
 
 export const trailConditionsSchema = z.strictObject({
@@ -104,7 +115,20 @@ export const savedSetupPressureRequestSchema = z.strictObject({
   unit: setupFields.unit.unwrap().optional(),
   today: todayRequestSchema.optional(),
 });
-export const pressureInputSchema = z.strictObject({ ...setupFields, today: dayConditionsSchema.optional() });
+/** What one ride log tells the engine (learning.ts): what was run and how each tyre felt, on what ground. */
+export const rideEvidenceSchema = z.strictObject({
+  frontKpa: boundedNumber("Front pressure you ran", 20, 1100, "kPa"),
+  rearKpa: boundedNumber("Rear pressure you ran", 20, 1100, "kPa"),
+  symptoms: z.strictObject({ front: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length), rear: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length) }),
+  surfaces: surfaceList.default([]),
+});
+
+export const pressureInputSchema = z.strictObject({
+  ...setupFields,
+  today: dayConditionsSchema.optional(),
+  /** This setup's ride logs, newest first (saved setups only). */
+  rides: z.array(rideEvidenceSchema).max(100).optional(),
+});
 
 export const wheelSymptomsSchema = uniqueList(
   z.enum(SYMPTOMS, { error: `Symptom must be one of: ${SYMPTOMS.join(", ")}.` }),
@@ -136,4 +160,5 @@ export type PressureRequestInput = z.input<typeof pressureRequestSchema>;
 export type PressureInput = z.infer<typeof pressureInputSchema>;
 export type PressureInputRaw = z.input<typeof pressureInputSchema>;
 export type RideSymptoms = z.infer<typeof rideSymptomsSchema>;
+export type RideEvidence = z.infer<typeof rideEvidenceSchema>;
 export type SagInput = z.infer<typeof sagInputSchema>;
