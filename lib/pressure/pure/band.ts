@@ -14,7 +14,7 @@ import {
   FLOOR_DROP_INSERT_BONUS,
   FLOOR_DROP_TUBELESS,
   FLOOR_DROP_TUBES,
-  TUBELESS_FLOOR_KPA,
+  WHEEL_FLOOR_KPA,
 } from "./settings";
 import type { WheelPosition } from "./types";
 
@@ -32,9 +32,13 @@ export function floorKpa(totalMassKg: number, position: WheelPosition, wheel: Wh
   return Math.max(minimumKpa(wheel), pressureAtDropKpa(totalMassKg, position, wheel, floorDrop(wheel)));
 }
 
-/** Whatever the load: the tubeless bead floor for this wheel size, or the tube floor; the printed minimum if higher. */
+/**
+ * Whatever the load: the floor for this wheel size (set by tubeless bead retention; a tube is
+ * never advised below it either, so tubes never come out lower than tubeless), never below the
+ * absolute floor, and the tyre's printed minimum if that is higher.
+ */
 export const minimumKpa = (wheel: WheelSetup) =>
-  Math.max(wheel.tubeless ? (TUBELESS_FLOOR_KPA[wheel.bsdMm] ?? ABSOLUTE_FLOOR_KPA) : ABSOLUTE_FLOOR_KPA, wheel.minKpa ?? 0);
+  Math.max(ABSOLUTE_FLOOR_KPA, WHEEL_FLOOR_KPA[wheel.bsdMm] ?? ABSOLUTE_FLOOR_KPA, wheel.minKpa ?? 0);
 
 export const wheelLimits = (totalMassKg: number, position: WheelPosition, wheel: WheelSetup): WheelLimits => ({
   floorKpa: floorKpa(totalMassKg, position, wheel),

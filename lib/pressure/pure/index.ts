@@ -128,7 +128,7 @@ export function computePressureBand(raw: PressureInput | PressureInputRaw): Pres
 
 /** Contributions smaller than this (0.2 psi) on both wheels are summed into one "small adjustments" reason. */
 export const SMALL_REASON_KPA = 0.2 * KPA_PER_PSI;
-const BASIS_IDS = /^(basis-|estimate-load$)/;
+const BASIS_IDS = /^(basis-|estimate-)/;
 
 function foldSmall(reasons: Reason[], id: string, unit: PressureUnit): Reason[] {
   const small = reasons.filter((r) => !BASIS_IDS.test(r.id) && Math.abs(r.frontKpa) < SMALL_REASON_KPA && Math.abs(r.rearKpa) < SMALL_REASON_KPA);

@@ -34,16 +34,17 @@ export const PACE_FACTOR: Record<Pace, number> = { easy: 0.92, steady: 1, hard: 
  * Common practice, no published source. Tubes pinch earlier than tubeless; an insert lets the
  * tyre go deeper. floor = design load / patch area at this drop.
  */
-export const FLOOR_DROP_TUBELESS = 0.26;
-export const FLOOR_DROP_TUBES = 0.24;
-export const FLOOR_DROP_INSERT_BONUS = 0.04;
-/** No tyre with a tube is run below this, whatever the model says (≈ 5 psi). Common practice. */
+export const FLOOR_DROP_TUBELESS = 0.2;
+export const FLOOR_DROP_TUBES = 0.19;
+export const FLOOR_DROP_INSERT_BONUS = 0.03;
+/** No tyre is run below this, whatever the model says (≈ 5 psi). Common practice. */
 export const ABSOLUTE_FLOOR_KPA = 35;
 /**
- * Tubeless tyres need more to keep the bead sealed, and small wheels more than big ones (a tighter
- * bead curve, riders' reports of burping). Trade judgement, no published source; by bead-seat diameter.
+ * Floor by bead-seat diameter: a tubeless tyre needs this much to keep its bead sealed, small
+ * wheels more than big ones (a tighter bead curve, riders' reports of burping). Tubes get the same
+ * floor, so they never come out below tubeless. Trade judgement, no published source.
  */
-export const TUBELESS_FLOOR_KPA: Record<number, number> = { 406: 62, 507: 59, 559: 55, 584: 55, 622: 52 };
+export const WHEEL_FLOOR_KPA: Record<number, number> = { 406: 62, 507: 59, 559: 55, 584: 55, 622: 52 };
 
 /**
  * Today's steps are fractions of the wheel's basis pressure (a child and a heavy rider get

@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import { computePressureBand } from "@/lib/pressure/pure";
 import { RULE_SECTIONS, ruleIds } from "@/lib/pressure/pure/catalogue";
 import { FEEDBACK_RULES } from "@/lib/pressure/pure/feedback";
-import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import { TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
 import { CASINGS, FEATURES, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
 
 const wheel = fc.record({
@@ -68,7 +68,8 @@ describe("rule catalogue", () => {
   it("takes its numbers from the engine's settings", () => {
     const rules = RULE_SECTIONS.flatMap((s) => s.rules);
     const wet = rules.find((r) => r.id === "grip-wet");
-    expect(wet?.numbers).toContain(`front \u2212${-SURFACE_GRIP_KPA.wet[0]} kPa, rear \u2212${-SURFACE_GRIP_KPA.wet[1]} kPa`);
+    expect(wet?.numbers).toContain("front \u22125.5\u00a0%, rear \u22123.2\u00a0%");
+    expect(rules.some((r) => r.source.kind === "from memory")).toBe(false);
     expect(rules.find((r) => r.id === "tweak-bound")?.numbers).toContain(`${TWEAK_BOUND_KPA} kPa`);
     expect(rules.filter((r) => r.id.startsWith("feedback-")).length).toBe(FEEDBACK_RULES.length);
   });
