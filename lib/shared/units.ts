@@ -122,3 +122,13 @@ export function tyreSizeText(bsdMm: number, widthMm: number): string {
   const wheel = WHEEL_SIZE_LABELS[bsdMm] ?? `${bsdMm} mm`;
   return `${wheel} × ${Number(inches.toFixed(2))} in`;
 }
+
+/** Screen steps for a band: the estimate is good to about ±1.5 psi and gauges to about ±1 psi, so finer would mislead. */
+const BAND_STEP: Record<PressureUnit, { step: number; decimals: number }> = { psi: { step: 0.5, decimals: 1 }, bar: { step: 0.05, decimals: 2 }, kPa: { step: 5, decimals: 0 } };
+
+/** A band value for the screen: "18.5 psi", "1.30 bar", "130 kPa" (to 0.5 psi, 0.05 bar, 5 kPa). */
+export function formatBandPressure(kPa: number, unit: PressureUnit): string {
+  const { step, decimals } = BAND_STEP[unit];
+  const value = Math.round(kpaTo(kPa, unit) / step) * step;
+  return `${formatNumber(value, decimals, false)} ${unit}`;
+}
