@@ -62,12 +62,12 @@ export const LIMITS: RuleSection = {
 export const AFTER_THE_RIDE: RuleSection = {
   id: "after-the-ride",
   title: "After the ride, and suspension",
-  intro: "A ride log gives exactly one suggested change to your baseline, safety first: change one thing at a time. A change never goes past the printed maximum or below the floor.",
+  intro: "A ride log gives exactly one suggested change, safety first: change one thing at a time. It starts from what you actually ran, on your baseline's ground, and never goes past the printed maximum or below the floor.",
   rules: [
     ...FEEDBACK_RULES.map((rule, i) => ({
       id: `feedback-${rule.symptom}`,
-      plain: `Priority ${i + 1}: ${rule.symptom.replace(/-/g, " ")} — ${rule.deltaKpa > 0 ? "more" : "less"} air, because ${rule.why}.`,
-      numbers: `${rule.deltaKpa > 0 ? "+" : "\u2212"}${kpaAndPsi(Math.abs(rule.deltaKpa))} on that wheel; ties go to the front`,
+      plain: `Priority ${i + 1}: ${rule.symptom.replace(/-/g, " ")} — ${rule.fraction > 0 ? "more" : "less"} air than you ran, because ${rule.why}.${rule.fraction > 0 ? " On both wheels, both change." : ""}${rule.symptom === "sliding" ? " Not when the ground was slicker than your baseline's: that is the ground, and today's band already allows for it." : ""}`,
+      numbers: `${percent(rule.fraction)} of the pressure run, ${STEP_MIN_KPA}–${STEP_MAX_KPA} kPa; ties go to the front`,
       source: COMMON_PRACTICE,
     })),
     { id: "sag-rear", plain: "Rear sag: the shock's travel used with you sitting on the bike, as a share of its stroke.", numbers: `${SAG_TARGET_PERCENT.rear.min}–${SAG_TARGET_PERCENT.rear.max} % of the shock stroke`, source: { kind: "common practice", text: "Common practice, no published standard (some guides say 20–30 %); follow the maker's figure." } },
