@@ -64,11 +64,11 @@ export async function pressureForRequest(actor: Actor | null, raw: unknown, now 
     const chosen = pickTrails(parkDay, today.trailIds?.length ? today.trailIds : defaultTrailIds(parkDay), "today.trailIds");
     trails = chosen.map((t) => trailConditions(t, now));
     closed = chosen.filter((t) => t.status === "closed");
-    // Riders ride between base and summit: the midpoint stands for the day unless they say otherwise.
-    today.rideElevationM ??= Math.round((park.baseElevationM + park.summitElevationM) / 2);
-    // The maximum is checked at the top of the planned trails, and the band widens with their span.
+    // The planned trails' heights (the park's base and summit where a trail has none): the maximum is
+    // checked at the top, the band widens with the span, and the midpoint stands for the day.
     today.highestElevationM ??= Math.max(...chosen.map((t) => t.maxElevationM ?? park.summitElevationM));
     today.lowestElevationM ??= Math.min(...chosen.map((t) => t.minElevationM ?? park.baseElevationM));
+    today.rideElevationM ??= Math.round((today.lowestElevationM + today.highestElevationM) / 2);
     conditions = {
       park: { slug: park.slug, name: park.name, baseElevationM: park.baseElevationM, summitElevationM: park.summitElevationM },
       reportDate: parkDay.reportDate,

@@ -137,7 +137,7 @@ function foldSmall(reasons: Reason[], id: string, unit: PressureUnit): Reason[] 
   const f = small.reduce((a, r) => a + r.frontKpa, 0);
   const r = small.reduce((a, x) => a + x.rearKpa, 0);
   if (isNegligible(f) && isNegligible(r)) return kept;
-  const what = small.map((x) => x.text.split(":")[0].toLowerCase()).join("; ");
+  const what = small.map((x) => { const head = x.text.split(":")[0]; return head.charAt(0).toLowerCase() + head.slice(1); }).join("; ");
   return [...kept, { id, text: `Small adjustments (${what}): ${wheelsText(f, r, unit)}`, frontKpa: f, rearKpa: r }];
 }
 

@@ -10,7 +10,7 @@
  * bracket. Bounds that cross (a rim strike above a harsh ride) contradict each other: the ± then
  * spans them, and the reason says so.
  */
-import { formatPressure, type PressureUnit } from "@/lib/shared/units";
+import { formatBandPressure, type PressureUnit } from "@/lib/shared/units";
 import type { RideEvidence, Surface, Symptom } from "@/lib/pressure/pure/schemas";
 import { leastGrippy } from "./rules-grip";
 import { ESTIMATE_UNCERTAINTY, MAX_LEARNING_LOGS, MIN_LEARNING_LOGS, ONE_SIDED_STEP, SURFACE_GRIP } from "./settings";
@@ -67,7 +67,7 @@ function bracketText(logs: readonly RideEvidence[], w: WheelLearning, position: 
   const named = (bound: number | undefined, symptoms: readonly Symptom[]) => {
     if (bound === undefined) return undefined;
     const which = logs.flatMap((l) => l.symptoms[position]).find((s): s is Exclude<Symptom, "fine"> => symptoms.includes(s) && s !== "fine");
-    return `${which ? SYMPTOM_WORDS[which] : "trouble"} at ${formatPressure(bound, unit, { decimals: unit === "psi" ? 0 : undefined })}`;
+    return `${which ? SYMPTOM_WORDS[which] : "trouble"} at ${formatBandPressure(bound, unit)}`;
   };
   const parts = [named(w.lowKpa, TOO_SOFT), named(w.highKpa, ["harsh", "sliding"])].filter(Boolean);
   return parts.length ? `${position} ${parts.join(", ")}` : `${position} felt fine`;
@@ -83,6 +83,6 @@ export function learnFromRides(raw: readonly RideEvidence[] | undefined, referen
   const text =
     `From ${logs.length} of your rides on this setup (${bracketText(logs, front, "front", unit)}; ${bracketText(logs, rear, "rear", unit)})` +
     (disagree ? ", which disagree with each other: the band is wider until more rides settle it" : "") +
-    `: ${formatPressure(front.centreKpa, unit)} front, ${formatPressure(rear.centreKpa, unit)} rear`;
+    `: ${formatBandPressure(front.centreKpa, unit)} front, ${formatBandPressure(rear.centreKpa, unit)} rear`;
   return { front, rear, rides: logs.length, reasons: [{ id: disagree ? "basis-rides-disagree" : "basis-rides", text, frontKpa: front.centreKpa, rearKpa: rear.centreKpa }] };
 }

@@ -24,7 +24,7 @@ describe("learning from ride logs", () => {
     expect(kpaToPsi(l.front.lowKpa!)).toBeCloseTo(21, 9);
     expect(kpaToPsi(l.front.highKpa!)).toBeCloseTo(27, 9);
     expect(kpaToPsi(l.front.centreKpa)).toBeCloseTo(24, 9);
-    expect(l.reasons[0].text).toMatch(/^From 2 of your rides on this setup \(front rim strikes at 21 psi, harsh at 27 psi/);
+    expect(l.reasons[0].text).toMatch(/^From 2 of your rides on this setup \(front rim strikes at 21.0 psi, harsh at 27.0 psi/);
   });
 
   it("fine rides sit inside the bracket; five rides give a band narrower than the estimate", () => {
