@@ -26,6 +26,9 @@ export type PressureConditions = {
   park: { slug: string; name: string; baseElevationM: number; summitElevationM: number };
   reportDate: string;
   rideElevationM: number;
+  /** The planned trails' height range: the maximum is checked at the top, the band widens with the span. */
+  lowestElevationM: number;
+  highestElevationM: number;
   trails: Pick<TrailToday, "id" | "name" | "status" | "surfaces" | "features">[];
 };
 export type PressureAnswer = PressureResult & { unit: PressureUnit; setupId?: string; conditions?: PressureConditions };
@@ -73,6 +76,8 @@ export async function pressureForRequest(actor: Actor | null, raw: unknown, now 
       park: { slug: park.slug, name: park.name, baseElevationM: park.baseElevationM, summitElevationM: park.summitElevationM },
       reportDate: parkDay.reportDate,
       rideElevationM: today.rideElevationM,
+      lowestElevationM: today.lowestElevationM,
+      highestElevationM: today.highestElevationM,
       trails: chosen.map(({ id, name, status, surfaces, features }) => ({ id, name, status, surfaces, features })),
     };
   }

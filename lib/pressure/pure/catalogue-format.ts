@@ -1,7 +1,8 @@
 /** Shapes and number wording for the rule catalogue (/pressure/how-it-works). */
 import { formatPressure } from "@/lib/shared/units";
 
-export type Source = "published" | "computed" | "common practice" | "from memory" | "our choice" | "safety";
+/** Where a rule's numbers come from; "from memory" is not a kind: every rule is verified or marked common practice. */
+export type Source = "published" | "computed" | "common practice" | "our choice" | "safety";
 export type RuleEntry = {
   id: string;
   /** What the rule does, in plain words. */

@@ -76,7 +76,7 @@ export function estimatePressures(input: PressureInput): Estimate {
   const check = `; at the final pressure your weight alone presses the tyres in about ${percentOf(front.staticDrop)} front, ${percentOf(rear.staticDrop)} rear`;
   add(
     "estimate-load",
-    `Starting point for ${mass.toFixed(0)} kg of rider and bike on ${sizes}, so that braking, berms and landings press each tyre in about ${percentOf(TARGET_DROP)} of its height (${Math.round(FRONT_STATIC_SHARE * 100)} % of the weight on the front, ${Math.round((1 - FRONT_STATIC_SHARE) * 100)} % on the rear)${check}`,
+    `Starting point for ${mass.toFixed(1)} kg of rider and bike on ${sizes}, so that braking, berms and landings press each tyre in about ${percentOf(TARGET_DROP)} of its height (${Math.round(FRONT_STATIC_SHARE * 100)} % of the weight on the front, ${Math.round((1 - FRONT_STATIC_SHARE) * 100)} % on the rear)${check}`,
     front.loadKpa,
     rear.loadKpa,
     true,

@@ -17,7 +17,7 @@ export const SYMPTOMS = ["squirm-in-berms", "rim-strike", "burp", "harsh", "slid
 /** A number within [min, max] whose messages name the field and the unit. */
 export const boundedNumber = (label: string, min: number, max: number, unit: string) =>
   z
-    .number({ error: `${label} must be a number.` })
+    .number({ error: (issue) => (issue.input === undefined ? `${label} is required.` : `${label} must be a number.`) })
     .min(min, { error: `${label} must be at least ${min} ${unit}.` })
     .max(max, { error: `${label} must be at most ${max} ${unit}.` });
 
