@@ -1,5 +1,6 @@
 // The rule catalogue behind /pressure/how-it-works: every reason the engine can give has an
 // entry (id, plain words, numbers, source), and its numbers come from settings.ts.
+import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computePressureBand } from "@/lib/pressure/pure";
@@ -63,6 +64,11 @@ describe("rule catalogue", () => {
     );
     // The sample reached the grip, support, protection and pump rules at least.
     for (const id of ["grip-wet", "support-jump-drop", "protection-rocks", "pump-temperature", "pump-elevation"]) expect(seen.has(id), id).toBe(true);
+  });
+
+  it("every rule id is named in docs/pressure-rules.md", () => {
+    const doc = readFileSync("docs/pressure-rules.md", "utf8");
+    expect(ruleIds().filter((id) => !doc.includes(`\`${id}\``))).toEqual([]);
   });
 
   it("takes its numbers from the engine's settings", () => {
