@@ -28,12 +28,12 @@ const contribution = (id: string, kPa: number, unit: PressureUnit) => (STARTS.ha
 /** The table shows the numbers in their own columns, so the text's trailing figures are left out. */
 export const reasonWords = (text: string) => text.replace(/: [^:]*\b(front|rear)( to pump now)?$/, "");
 
-/** ": tacky on 10, rocky on 2" — what ground the planned trails report today, most common first. */
+/** " Ground: tacky on 10, rocky on 2." — what ground the planned trails report today, most common first. */
 function groundText(trails: { surfaces: readonly string[] }[]): string {
   const counts = new Map<string, number>();
   for (const t of trails) for (const s of t.surfaces) counts.set(s, (counts.get(s) ?? 0) + 1);
-  if (counts.size === 0) return ": no ground reported yet today";
-  return `: ${[...counts].sort((a, b) => b[1] - a[1]).map(([s, n]) => `${s} on ${n}`).join(", ")}`;
+  if (counts.size === 0) return " No ground reported yet today.";
+  return ` Ground: ${[...counts].sort((a, b) => b[1] - a[1]).map(([s, n]) => `${s} on ${n}`).join(", ")}.`;
 }
 
 function WheelCard({ title, band, unit, basis }: { title: string; band: Band; unit: PressureUnit; basis: PressureAnswer["basis"] }) {
@@ -104,7 +104,7 @@ export const BandResult = forwardRef<HTMLHeadingElement, { answer: PressureAnswe
         </h2>
         <p className="font-semibold text-loam-800">
           {BASIS_WORDS[answer.basis].start}
-          {answer.conditions && ` ${answer.conditions.park.name}, ${answer.conditions.trails.length} trail${answer.conditions.trails.length === 1 ? "" : "s"}${groundText(answer.conditions.trails)}.`}
+          {answer.conditions && ` ${answer.conditions.park.name}, ${answer.conditions.trails.length} trail${answer.conditions.trails.length === 1 ? "" : "s"}.${groundText(answer.conditions.trails)}`}
         </p>
       </div>
       <div className="grid grid-cols-2 gap-3">

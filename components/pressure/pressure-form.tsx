@@ -145,9 +145,6 @@ export function PressureForm(props: Props) {
 
   return (
     <div className="grid gap-6 lg:grid-cols-2 lg:items-start">
-      <div aria-live="polite" className={`${answer ? "order-first" : "order-last"} lg:order-last lg:sticky lg:top-4`}>
-        {answer ? <BandResult ref={resultHeading} answer={answer} /> : busy && setupId ? <p className="card font-semibold">Working out today&apos;s band…</p> : <Cautions cautions={STANDARD_CAUTIONS} />}
-      </div>
       <form ref={formRef} onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Today's pressure">
         <DayFields parks={props.parks} park={props.park} trails={props.trails} anyReport={props.anyReport} day={day} errors={errors} onChange={setDay} onParkChange={changePark} loadingPark={loadingPark} />
         <fieldset className="card space-y-3">
@@ -185,9 +182,13 @@ export function PressureForm(props: Props) {
           {message ?? ""}
         </p>
         <button type="submit" className="btn-primary w-full text-lg" disabled={busy}>
-          {busy ? "Working it out…" : setupId ? "Work it out again" : "Show my pressure band"}
+          {busy ? "Working it out…" : "Show my pressure band"}
         </button>
       </form>
+      {/* After the form in reading and Tab order; shown first on a phone once there is a band, beside the form on a desktop. */}
+      <div aria-live="polite" className={`${answer ? "order-first" : ""} lg:order-none lg:sticky lg:top-4`}>
+        {answer ? <BandResult ref={resultHeading} answer={answer} /> : busy && setupId ? <p className="card font-semibold">Working out today&apos;s band…</p> : <Cautions cautions={STANDARD_CAUTIONS} />}
+      </div>
     </div>
   );
 }

@@ -67,7 +67,7 @@ test("the demo rider picks a saved setup and today's trails, and sees band, reas
   await page.getByLabel("Tumblewire").check();
   await page.getByLabel("Gnarlroot").check();
   // …and follows the day as the trails change.
-  await expect(page.getByTestId("band-result")).toContainText(/Harrow Ridge Bike Park, 2 trails: tacky on 2/);
+  await expect(page.getByTestId("band-result")).toContainText("Harrow Ridge Bike Park, 2 trails. Ground: tacky on 2.");
   const reasons = page.getByTestId("reasons");
   const ridesRow = reasons.locator("tr[data-reason^=basis-rides]");
   await expect(ridesRow).toContainText(/From \d+ of your rides on this setup/);
