@@ -1,14 +1,22 @@
 /**
  * Today's band, readable at a glance in sunlight: large dark numbers on white, the pump reading
  * spelled out, every reason with its signed share per wheel, and the cautions always shown.
+ * Band values are shown to 0.5 psi (0.05 bar, 5 kPa): the estimate is good to about ±1.5 psi
+ * and gauges to about ±1 psi, so finer figures would claim what nobody can measure.
  */
 import { forwardRef } from "react";
 import type { PressureAnswer } from "@/lib/pressure/pressure-today";
-import { formatPressure, type PressureUnit } from "@/lib/shared/units";
+import { formatBandPressure, formatPressure, type PressureUnit } from "@/lib/shared/units";
 
 type Band = PressureAnswer["front"];
 
-const fmt = (kPa: number, unit: PressureUnit) => formatPressure(kPa, unit);
+const fmt = (kPa: number, unit: PressureUnit) => formatBandPressure(kPa, unit);
+const BASIS_WORDS: Record<PressureAnswer["basis"], { start: string; versus: string }> = {
+  rides: { start: "From your own logged rides on this setup.", versus: "your rides" },
+  baseline: { start: "Starting from your baseline.", versus: "your baseline" },
+  estimate: { start: "A starting estimate from weight and tyre size (no baseline yet).", versus: "the estimate" },
+};
+const STARTS = new Set(["basis-baseline", "basis-rides", "basis-rides-disagree", "estimate-load"]);
 /** A signed change; one that rounds to nothing in this unit reads "≈ 0" rather than "±0.0". */
 function signed(kPa: number, unit: PressureUnit) {
   if (kPa === 0) return "—";
@@ -16,9 +24,17 @@ function signed(kPa: number, unit: PressureUnit) {
   return text.startsWith("±") ? `≈ 0 ${unit}` : text;
 }
 /** Absolute for the starting point (baseline or estimate), signed for every change after it. */
-const contribution = (id: string, kPa: number, unit: PressureUnit) => (id === "basis-baseline" || id === "estimate-load" ? fmt(kPa, unit) : signed(kPa, unit));
+const contribution = (id: string, kPa: number, unit: PressureUnit) => (STARTS.has(id) ? formatPressure(kPa, unit) : signed(kPa, unit));
 /** The table shows the numbers in their own columns, so the text's trailing figures are left out. */
 export const reasonWords = (text: string) => text.replace(/: [^:]*\b(front|rear)( to pump now)?$/, "");
+
+/** " Ground: tacky on 10, rocky on 2." — what ground the planned trails report today, most common first. */
+function groundText(trails: { surfaces: readonly string[] }[]): string {
+  const counts = new Map<string, number>();
+  for (const t of trails) for (const s of t.surfaces) counts.set(s, (counts.get(s) ?? 0) + 1);
+  if (counts.size === 0) return " No ground reported yet today.";
+  return ` Ground: ${[...counts].sort((a, b) => b[1] - a[1]).map(([s, n]) => `${s} on ${n}`).join(", ")}.`;
+}
 
 function WheelCard({ title, band, unit, basis }: { title: string; band: Band; unit: PressureUnit; basis: PressureAnswer["basis"] }) {
   const [value, unitLabel] = fmt(band.targetKpa, unit).split(" ");
@@ -36,7 +52,7 @@ function WheelCard({ title, band, unit, basis }: { title: string; band: Band; un
         <span className="block text-2xl font-black tabular-nums">{fmt(band.pumpToKpa, unit)}</span>
       </p>
       <p className="mt-1 text-sm font-semibold text-loam-800">
-        {signed(band.deltaKpa, unit)} vs {basis === "baseline" ? "your baseline" : "the estimate"}
+        {signed(band.deltaKpa, unit)} vs {BASIS_WORDS[basis].versus}
       </p>
     </section>
   );
@@ -49,8 +65,8 @@ function ReasonRows({ reasons, unit }: { reasons: PressureAnswer["reasons"]; uni
         <tr key={r.id} className="border-t border-loam-200 align-top" data-reason={r.id}>
           <td className="py-2 pr-2 text-loam-900">
             {reasonWords(r.text)}{" "}
-            <a href={`/pressure/how-it-works#rule-${r.id}`} className="whitespace-nowrap font-mono text-xs text-loam-800 underline" aria-label={`Rule ${r.id}`}>
-              {r.id}
+            <a href={`/pressure/how-it-works#rule-${r.id}`} className="whitespace-nowrap text-sm font-semibold text-loam-800 underline" aria-label={`How this rule works: ${reasonWords(r.text).slice(0, 60)}`}>
+              how?
             </a>
           </td>
           <td className="whitespace-nowrap py-2 pr-2 text-right font-bold tabular-nums">{contribution(r.id, r.frontKpa, unit)}</td>
@@ -87,8 +103,8 @@ export const BandResult = forwardRef<HTMLHeadingElement, { answer: PressureAnswe
           Today&apos;s band
         </h2>
         <p className="font-semibold text-loam-800">
-          {answer.basis === "baseline" ? "Starting from your baseline." : "A starting estimate from weight and tyre size (no baseline)."}
-          {answer.conditions && ` ${answer.conditions.park.name}, ${answer.conditions.trails.length} trail${answer.conditions.trails.length === 1 ? "" : "s"}.`}
+          {BASIS_WORDS[answer.basis].start}
+          {answer.conditions && ` ${answer.conditions.park.name}, ${answer.conditions.trails.length} trail${answer.conditions.trails.length === 1 ? "" : "s"}.${groundText(answer.conditions.trails)}`}
         </p>
       </div>
       <div className="grid grid-cols-2 gap-3">

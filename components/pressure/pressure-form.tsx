@@ -1,7 +1,9 @@
 "use client";
 /**
- * "Today's pressure": park, trails and setup → POST /api/pressure → the band. A plain form that
- * works with Tab and Enter alone; an unsaved setup can be kept in this browser only.
+ * "Today's pressure": the day (park, trails) and the setup → POST /api/pressure → the band. A
+ * saved setup computes at once, and again whenever the day changes; a bike typed in computes on
+ * submit. The band sits beside the form on a desktop and above it on a phone; errors sit beside
+ * their fields and focus moves to the first. An unsaved setup can be kept in this browser only.
  */
 import Link from "next/link";
 import { useRouter } from "next/navigation";
@@ -44,6 +46,9 @@ export function PressureForm(props: Props) {
   const [answer, setAnswer] = useState<PressureAnswer | null>(null);
   const [busy, setBusy] = useState(false);
   const resultHeading = useRef<HTMLHeadingElement>(null);
+  const formRef = useRef<HTMLFormElement>(null);
+  /** Only a rider's own submit moves focus to the band; a band computed at once leaves focus where it is. */
+  const focusResult = useRef(false);
 
   // A setup kept on this device (anonymous riders only), read once after the first render.
   const { signedIn } = props;
@@ -68,8 +73,23 @@ export function PressureForm(props: Props) {
   }, [parkSlug, defaults]);
 
   useEffect(() => {
-    if (answer) resultHeading.current?.focus();
+    if (answer && focusResult.current) resultHeading.current?.focus();
+    focusResult.current = false;
   }, [answer]);
+
+  // Errors sit beside their fields; focus moves to the first one.
+  useEffect(() => {
+    if (Object.keys(errors).length === 0) return;
+    formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus();
+  }, [errors]);
+
+  // A saved setup goes straight to today's band, and follows the day as it changes.
+  // (computeLatest always holds this render's compute; the effect runs when the answer's inputs change.)
+  const computeLatest = useRef<(byRider: boolean) => Promise<void>>(async () => {});
+  const trailKey = day.trailIds.join(",");
+  useEffect(() => {
+    if (setupId) void computeLatest.current(false);
+  }, [setupId, day.parkSlug, trailKey, unit]);
 
   function changePark(slug: string) {
     setDay((d) => ({ ...d, parkSlug: slug || null, trailIds: [] }));
@@ -89,6 +109,10 @@ export function PressureForm(props: Props) {
 
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
+    await compute(true);
+  }
+
+  async function compute(byRider: boolean) {
     setMessage(null);
     // A setup typed by hand is shown in the unit it was typed in: one switch, not two.
     const built = pressureRequestFrom({ setupId, draft, day, unit: setupId ? unit : draft.pressureUnit });
@@ -109,6 +133,7 @@ export function PressureForm(props: Props) {
         return;
       }
       keepOnDevice();
+      focusResult.current = byRider;
       setAnswer(body as PressureAnswer);
     } catch {
       setMessage("No connection. Nothing you typed was lost; try again.");
@@ -117,9 +142,11 @@ export function PressureForm(props: Props) {
     }
   }
 
+  computeLatest.current = compute;
+
   return (
-    <div className="space-y-6">
-      <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Today's pressure">
+    <div className="grid gap-6 lg:grid-cols-2 lg:items-start">
+      <form ref={formRef} onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Today's pressure">
         <DayFields parks={props.parks} park={props.park} trails={props.trails} anyReport={props.anyReport} day={day} errors={errors} onChange={setDay} onParkChange={changePark} loadingPark={loadingPark} />
         <fieldset className="card space-y-3">
           <legend className="px-1 text-lg font-bold">Your bike</legend>
@@ -159,7 +186,10 @@ export function PressureForm(props: Props) {
           {busy ? "Working it out…" : "Show my pressure band"}
         </button>
       </form>
-      <div aria-live="polite">{answer ? <BandResult ref={resultHeading} answer={answer} /> : <Cautions cautions={STANDARD_CAUTIONS} />}</div>
+      {/* After the form in reading and Tab order; shown first on a phone once there is a band, beside the form on a desktop. */}
+      <div aria-live="polite" className={`${answer ? "order-first" : ""} lg:order-none lg:sticky lg:top-4`}>
+        {answer ? <BandResult ref={resultHeading} answer={answer} /> : busy && setupId ? <p className="card font-semibold">Working out today&apos;s band…</p> : <Cautions cautions={STANDARD_CAUTIONS} />}
+      </div>
     </div>
   );
 }

@@ -101,7 +101,12 @@ export function RideLogForm({ setups, parks, park, trails, today, unit }: Props)
 
   if (logged) {
     const s = logged.suggestion;
-    const change = s.deltaKpa === 0 ? "No change" : `${formatPressure(s.deltaKpa, unit, { signed: true })} ${s.wheel}`;
+    const both = s.wheel === "both" && s.deltas;
+    const change = s.deltaKpa === 0 && !both
+      ? "No change"
+      : both
+        ? `${formatPressure(s.deltas!.frontKpa, unit, { signed: true })} front, ${formatPressure(s.deltas!.rearKpa, unit, { signed: true })} rear`
+        : `${formatPressure(s.deltaKpa, unit, { signed: true })} ${s.wheel}`;
     return (
       <section className="space-y-4" aria-labelledby="suggestion-heading" data-testid="suggestion">
         <h2 id="suggestion-heading" ref={suggestionHeading} tabIndex={-1} className="text-2xl font-extrabold focus:outline-3 focus:outline-moss-600">One change for next time</h2>

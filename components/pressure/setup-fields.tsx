@@ -1,13 +1,13 @@
 "use client";
 /** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline. */
-import { MASS_UNITS, PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/shared/units";
-import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES, wheelSizeLabel } from "@/lib/pressure/pure/schemas";
+import { MASS_UNITS, PRESSURE_UNITS, wheelSizeText, type MassUnit, type PressureUnit } from "@/lib/shared/units";
+import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
 import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/setups/pure/setup-form";
 import { CheckInput, MultiCheck, Segments, SelectInput, TextInput } from "./inputs";
 
 export const WHEEL_SIZES = BEAD_SEAT_DIAMETERS_MM.map((bsd) => ({
   value: String(bsd),
-  label: `${wheelSizeLabel(bsd)} (${bsd} mm)`,
+  label: `${wheelSizeText(bsd)} (${bsd} mm)`,
 }));
 const CASING_LABELS = { light: "Light", trail: "Trail", reinforced: "Reinforced", downhill: "Downhill" } as const;
 const PACE_LABELS = { easy: "Easy", steady: "Steady", hard: "Hard" } as const;
@@ -76,7 +76,12 @@ export function SetupFields(props: Props) {
             <TextInput id={id("baseline-rear")} label={`Rear (${draft.pressureUnit})`} value={draft.baselineRear} onChange={(baselineRear) => onChange({ ...draft, baselineRear })} error={errors.baselineRear} />
           </div>
           <MultiCheck name={id("baseline-surfaces")} legend="Ground it was set on" values={draft.baselineSurfaces} options={surfaceOptions} onChange={(baselineSurfaces) => onChange({ ...draft, baselineSurfaces })} error={errors.baselineSurfaces} />
-          <TextInput id={id("baseline-temperature")} label="Air temperature when checked (°C, optional)" value={draft.baselineTemperature} onChange={(baselineTemperature) => onChange({ ...draft, baselineTemperature })} error={errors.baselineTemperature} />
+          <div className="grid grid-cols-2 gap-3">
+            <TextInput id={id("baseline-temperature")} label="Air where you checked it (°C, optional)" value={draft.baselineTemperature} onChange={(baselineTemperature) => onChange({ ...draft, baselineTemperature })} error={errors.baselineTemperature} inputMode="text" />
+            <TextInput id={id("baseline-elevation")} label="Height where you checked it (m, optional)" value={draft.baselineElevation} onChange={(baselineElevation) => onChange({ ...draft, baselineElevation })} error={errors.baselineElevation} inputMode="numeric" />
+            <TextInput id={id("baseline-ride-temperature")} label="Air on the trail that day (°C, optional)" value={draft.baselineRideTemperature} onChange={(baselineRideTemperature) => onChange({ ...draft, baselineRideTemperature })} error={errors.baselineRideTemperature} hint="Blank: same as where you checked it." inputMode="text" />
+            <TextInput id={id("baseline-ride-elevation")} label="Height of the trail (m, optional)" value={draft.baselineRideElevation} onChange={(baselineRideElevation) => onChange({ ...draft, baselineRideElevation })} error={errors.baselineRideElevation} hint="Blank: same as where you checked it." inputMode="numeric" />
+          </div>
         </fieldset>
       )}
     </div>

@@ -4,7 +4,7 @@ import { suspensionSag, type SagResult } from "@/lib/pressure/pure/sag";
 import { numberFrom, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
 import { TextInput } from "./inputs";
 
-const VERDICT = { "too-little": "Too little sag", "in-range": "In range", "too-much": "Too much sag" } as const;
+const VERDICT = { "too-little": "Too little sag", "in-range": "In range", "too-much": "Too much sag", "measure-again": "Measure again" } as const;
 
 function SagVerdict({ label, result, testId }: { label: string; result?: SagResult; testId: string }) {
   if (!result) return <p className="text-sm text-loam-800">{label}: enter the sag and the {label === "Rear" ? "shock stroke" : "fork travel"} to check it.</p>;
@@ -12,7 +12,7 @@ function SagVerdict({ label, result, testId }: { label: string; result?: SagResu
   return (
     <div className={`rounded-lg border-2 p-3 ${ok ? "border-moss-600 bg-moss-100" : "border-flare-500 bg-flare-100"}`} data-testid={testId} aria-live="polite">
       <p className="text-lg font-extrabold text-loam-900">
-        {label}: {result.percent.toFixed(0)} % — {VERDICT[result.verdict]} (target {result.min}–{result.max} %)
+        {label}: {result.percent.toFixed(1)} % — {VERDICT[result.verdict]} (target {result.min}–{result.max} %)
       </p>
       <p className="text-loam-900">{result.text}</p>
     </div>

@@ -1,5 +1,4 @@
 import "server-only";
-import { wheelSizeLabel } from "@/lib/pressure/pure/schemas";
 /** What the "Today's pressure" page needs, read in parallel on the server. */
 import { Op, fn, col } from "sequelize";
 import type { Actor } from "@/lib/server/auth/permissions";
@@ -7,13 +6,13 @@ import { parkSummary } from "@/lib/parks/queries";
 import { listSetups, type SetupView } from "@/lib/setups/setup-queries";
 import { defaultTrailIds, trailsToday } from "@/lib/pressure/trails-today";
 import { unitsFor } from "@/lib/accounts/units";
-import { formatMass, formatPressure, type MassUnit, type PressureUnit } from "@/lib/shared/units";
+import { formatMass, formatPressure, wheelSizeText, type MassUnit, type PressureUnit } from "@/lib/shared/units";
 import { Park, Trail } from "@/models";
 
 /** "29″ · 94 kg with bike · baseline 19.0 psi / 23.0 psi" — enough to tell setups apart. */
 export function setupSummary(setup: SetupView, units: { pressure: PressureUnit; mass: MassUnit }): string {
   const unit = units.pressure;
-  const wheels = setup.front.bsdMm === setup.rear.bsdMm ? wheelSizeLabel(setup.front.bsdMm) : `${wheelSizeLabel(setup.front.bsdMm)} / ${wheelSizeLabel(setup.rear.bsdMm)}`;
+  const wheels = setup.front.bsdMm === setup.rear.bsdMm ? wheelSizeText(setup.front.bsdMm) : `${wheelSizeText(setup.front.bsdMm)} / ${wheelSizeText(setup.rear.bsdMm)}`;
   const baseline = setup.baseline ? `baseline ${formatPressure(setup.baseline.frontKpa, unit)} / ${formatPressure(setup.baseline.rearKpa, unit)}` : "no baseline yet";
   return `${wheels} · ${formatMass(setup.riderMassKg + setup.bikeMassKg, units.mass, 0)} with bike · ${baseline}`;
 }

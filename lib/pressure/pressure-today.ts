@@ -18,12 +18,17 @@ import {
   type TrailConditions,
 } from "@/lib/pressure/pure/schemas";
 import { unitsOf } from "@/lib/accounts/pure/units-schema";
+import { rideEvidence } from "@/lib/setups/ride-log-queries";
+import type { RideEvidence } from "@/lib/pressure/pure/schemas";
 import { User } from "@/models";
 
 export type PressureConditions = {
   park: { slug: string; name: string; baseElevationM: number; summitElevationM: number };
   reportDate: string;
   rideElevationM: number;
+  /** The planned trails' height range: the maximum is checked at the top, the band widens with the span. */
+  lowestElevationM: number;
+  highestElevationM: number;
   trails: Pick<TrailToday, "id" | "name" | "status" | "surfaces" | "features">[];
 };
 export type PressureAnswer = PressureResult & { unit: PressureUnit; setupId?: string; conditions?: PressureConditions };
@@ -31,7 +36,7 @@ export type PressureAnswer = PressureResult & { unit: PressureUnit; setupId?: st
 const hasSetupId = (raw: unknown) => typeof raw === "object" && raw !== null && "setupId" in raw;
 
 /** The request with its setup filled in: inline, or from one of the caller's saved setups. */
-async function setupRequest(actor: Actor | null, raw: unknown): Promise<{ request: PressureRequest; setupId?: string }> {
+async function setupRequest(actor: Actor | null, raw: unknown): Promise<{ request: PressureRequest; setupId?: string; rides?: RideEvidence[] }> {
   if (!hasSetupId(raw)) return { request: parseInput(pressureRequestSchema, raw) };
   const body = parseInput(savedSetupPressureRequestSchema, raw);
   const setup = await findOwnSetup(actor, body.setupId);
@@ -43,14 +48,14 @@ async function setupRequest(actor: Actor | null, raw: unknown): Promise<{ reques
     unit: body.unit ?? unitsOf(user?.units).pressure,
     ...(body.today ? { today: body.today } : {}),
   });
-  return { request, setupId: setup.id };
+  return { request, setupId: setup.id, rides: await rideEvidence(setup.id) };
 }
 
 const closedCaution = (closed: TrailToday[]) =>
   `Closed today: ${closed.map((t) => t.name).join(", ")}. Do not ride closed trails; follow park signage and staff.`;
 
 export async function pressureForRequest(actor: Actor | null, raw: unknown, now = new Date()): Promise<PressureAnswer> {
-  const { request, setupId } = await setupRequest(actor, raw);
+  const { request, setupId, rides } = await setupRequest(actor, raw);
   const today = request.today;
   let trails: TrailConditions[] = [];
   let conditions: PressureConditions | undefined;
@@ -62,16 +67,21 @@ export async function pressureForRequest(actor: Actor | null, raw: unknown, now 
     const chosen = pickTrails(parkDay, today.trailIds?.length ? today.trailIds : defaultTrailIds(parkDay), "today.trailIds");
     trails = chosen.map((t) => trailConditions(t, now));
     closed = chosen.filter((t) => t.status === "closed");
-    // Riders ride between base and summit: the midpoint stands for the day unless they say otherwise.
-    today.rideElevationM ??= Math.round((park.baseElevationM + park.summitElevationM) / 2);
+    // The planned trails' heights (the park's base and summit where a trail has none): the maximum is
+    // checked at the top, the band widens with the span, and the midpoint stands for the day.
+    today.highestElevationM ??= Math.max(...chosen.map((t) => t.maxElevationM ?? park.summitElevationM));
+    today.lowestElevationM ??= Math.min(...chosen.map((t) => t.minElevationM ?? park.baseElevationM));
+    today.rideElevationM ??= Math.round((today.lowestElevationM + today.highestElevationM) / 2);
     conditions = {
       park: { slug: park.slug, name: park.name, baseElevationM: park.baseElevationM, summitElevationM: park.summitElevationM },
       reportDate: parkDay.reportDate,
       rideElevationM: today.rideElevationM,
+      lowestElevationM: today.lowestElevationM,
+      highestElevationM: today.highestElevationM,
       trails: chosen.map(({ id, name, status, surfaces, features }) => ({ id, name, status, surfaces, features })),
     };
   }
-  const result = computePressureBand(inputFromRequest(request, trails));
+  const result = computePressureBand({ ...inputFromRequest(request, trails), ...(rides?.length ? { rides } : {}) });
   const cautions = closed.length > 0 ? [closedCaution(closed), ...result.cautions] : result.cautions;
   return { ...result, cautions, unit: request.unit, ...(setupId ? { setupId } : {}), ...(conditions ? { conditions } : {}) };
 }

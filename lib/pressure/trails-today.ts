@@ -20,6 +20,9 @@ export type TrailToday = {
   surfaces: Surface[];
   features: Feature[];
   reportedAt: Date | null;
+  /** Mapped elevation range, when the trail's line has heights. */
+  minElevationM: number | null;
+  maxElevationM: number | null;
 };
 export type ParkToday = { reportDate: string; trails: TrailToday[]; anyReport: boolean };
 
@@ -30,7 +33,7 @@ export async function trailsToday(park: Park, now = new Date()): Promise<ParkTod
   const reportDate = parkToday(park, now);
   const trails = await Trail.findAll({
     where: { parkId: park.id, archivedAt: { [Op.is]: null } },
-    attributes: ["id", "name", "difficulty"],
+    attributes: ["id", "name", "difficulty", "minElevationM", "maxElevationM"],
     order: [["name", "ASC"]],
   });
   const [features, reports] = await Promise.all([
@@ -52,6 +55,8 @@ export async function trailsToday(park: Park, now = new Date()): Promise<ParkTod
         surfaces: known(SURFACES, report?.surfaces),
         features: known(FEATURES, kinds.get(t.id)),
         reportedAt: report?.reportedAt ?? null,
+        minElevationM: t.minElevationM ?? null,
+        maxElevationM: t.maxElevationM ?? null,
       };
     }),
   };

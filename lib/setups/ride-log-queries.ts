@@ -1,7 +1,9 @@
 import "server-only";
-/** A rider's own ride logs, newest first, with setup, park and trail names for display. */
+/** A rider's own ride logs, newest first, with setup, park and trail names for display; and a setup's logs as evidence for the band. */
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { rideLogView } from "@/lib/setups/ride-logs";
+import { rideEvidenceSchema, type RideEvidence } from "@/lib/pressure/pure/schemas";
+import { MAX_LEARNING_LOGS } from "@/lib/pressure/pure/settings";
 import { Park, RideLog, Setup, Trail } from "@/models";
 
 export const RIDE_LOG_PAGE = 100;
@@ -33,3 +35,21 @@ export async function listRideLogs(actor: Actor | null) {
   });
 }
 export type RideLogListItem = Awaited<ReturnType<typeof listRideLogs>>[number];
+
+/**
+ * What a setup's ride logs tell the pressure engine, newest first (lib/pressure/pure/learning.ts).
+ * Callers have already checked the setup is the caller's own (findOwnSetup). Logs that no longer
+ * pass the engine's schema are left out rather than failing the band.
+ */
+export async function rideEvidence(setupId: string): Promise<RideEvidence[]> {
+  const logs = await RideLog.findAll({
+    where: { setupId },
+    attributes: ["frontKpa", "rearKpa", "symptoms", "surfaces"],
+    order: [["riddenOn", "DESC"], ["createdAt", "DESC"]],
+    limit: MAX_LEARNING_LOGS,
+  });
+  return logs.flatMap((log) => {
+    const parsed = rideEvidenceSchema.safeParse({ frontKpa: log.frontKpa, rearKpa: log.rearKpa, symptoms: log.symptoms, surfaces: log.surfaces });
+    return parsed.success ? [parsed.data] : [];
+  });
+}

@@ -9,6 +9,8 @@ import { findOwnSetup, setupView, storedSetup } from "@/lib/setups/setup-queries
 import { parkForRequest, pickTrails, trailsToday } from "@/lib/pressure/trails-today";
 import { ceilingKpa, floorKpa } from "@/lib/pressure/pure/band";
 import { suggestBaselineChange } from "@/lib/pressure/pure/feedback";
+import { onReferenceGround } from "@/lib/pressure/pure/learning";
+import type { Surface } from "@/lib/pressure/pure/schemas";
 import { shiftDate } from "@/lib/shared/park-clock";
 import { isUuid } from "@/lib/shared/ids";
 import { parseInput } from "@/lib/shared/parse";
@@ -18,17 +20,18 @@ import { unitsOf } from "@/lib/accounts/pure/units-schema";
 import { unlessStale } from "@/lib/server/optimistic-lock";
 import { RideLog, Setup, User, sequelize } from "@/models";
 import { staleSetup } from "./setup-writes";
-import { canApply, type StoredSuggestion } from "./pure/suggestion";
+import { canApply, proposedBaseline, type StoredSuggestion } from "./pure/suggestion";
 
 export type { StoredSuggestion } from "./pure/suggestion";
 
 const WHEELS = ["front", "rear"] as const;
 
-/** Limits for the suggestion: the pressure it changes (baseline, else what was run), max and floor. */
-function feedbackLimits(setup: SetupInput, ran: { frontKpa: number; rearKpa: number }) {
+/** Limits for the suggestion: what was run (brought to the baseline's ground), max and floor. */
+function feedbackLimits(setup: SetupInput, ran: { frontKpa: number; rearKpa: number; surfaces?: Surface[] }) {
   const mass = setup.riderMassKg + setup.bikeMassKg;
+  const reference = setup.baseline?.surfaces ?? ran.surfaces ?? [];
   const limit = (w: (typeof WHEELS)[number]) => ({
-    currentKpa: setup.baseline?.[`${w}Kpa`] ?? ran[`${w}Kpa`],
+    currentKpa: onReferenceGround(ran[`${w}Kpa`], ran.surfaces ?? [], reference, w),
     maxKpa: ceilingKpa(setup[w]),
     floorKpa: floorKpa(mass, w, setup[w]),
   });
@@ -48,7 +51,12 @@ export async function createRideLog(actor: Actor | null, raw: unknown, now = new
 
   const setup = storedSetup(setupRow);
   const user = await User.findByPk(actor.id, { attributes: ["units"] });
-  const suggestion = suggestBaselineChange(input.symptoms, { unit: unitsOf(user?.units).pressure, limits: feedbackLimits(setup, input) });
+  const suggestion = suggestBaselineChange(input.symptoms, {
+    unit: unitsOf(user?.units).pressure,
+    limits: feedbackLimits(setup, input),
+    surfaces: input.surfaces ?? [],
+    referenceSurfaces: setup.baseline?.surfaces ?? input.surfaces ?? [],
+  });
   const stored: StoredSuggestion = { ...suggestion, appliesTo: setup.baseline ? "baseline" : "ran" };
   const log = await RideLog.create({
     userId: actor.id,
@@ -99,8 +107,7 @@ export async function applyRideLogSuggestion(actor: Actor | null, id: unknown, n
       throw new AppError(409, "Nothing to change: keep the baseline as it is.");
     }
     const baseline = setup.baseline ?? { frontKpa: log.frontKpa, rearKpa: log.rearKpa, surfaces: log.surfaces.length ? log.surfaces : ["dry"] };
-    const key = suggestion.wheel === "rear" ? "rearKpa" : "frontKpa";
-    const changed = suggestion.wheel ? { ...baseline, [key]: baseline[key] + suggestion.deltaKpa } : baseline;
+    const changed = proposedBaseline(baseline, suggestion);
     const merged = parseInput(setupSchema, { ...setup, baseline: changed });
     await unlessStale(() => setupRow.update({ baseline: merged.baseline ?? null }, { transaction }), () => staleSetup(setupRow.lockVersion));
     await log.update({ appliedAt: now }, { transaction });

@@ -109,3 +109,26 @@ export const formatHeight = (m: number, system: DistanceSystem) => formatLength(
 
 /** A grade in percent: "8.4 %". */
 export const formatGrade = (pct: number, decimals = 1) => `${formatNumber(pct, decimals, false)} %`;
+
+/** Wheel-size labels by ISO 5775 bead-seat diameter (mm): the one table for every screen and reason. */
+export const WHEEL_SIZE_LABELS: Readonly<Record<number, string>> = { 406: "20", 507: "24", 559: "26", 584: "27.5", 622: "29" };
+
+/** A wheel's everyday name: "29″", or the bead-seat diameter in mm for one without a label. */
+export const wheelSizeText = (bsdMm: number) => (WHEEL_SIZE_LABELS[bsdMm] ? `${WHEEL_SIZE_LABELS[bsdMm]}″` : `${bsdMm} mm`);
+
+/** ETRTO "61-622" in riders' words: "29 × 2.4 in" (width to the nearest 0.05 in). */
+export function tyreSizeText(bsdMm: number, widthMm: number): string {
+  const inches = Math.round(mmToIn(widthMm) * 20) / 20;
+  const wheel = WHEEL_SIZE_LABELS[bsdMm] ?? `${bsdMm} mm`;
+  return `${wheel} × ${Number(inches.toFixed(2))} in`;
+}
+
+/** Screen steps for a band: the estimate is good to about ±1.5 psi and gauges to about ±1 psi, so finer would mislead. */
+const BAND_STEP: Record<PressureUnit, { step: number; decimals: number }> = { psi: { step: 0.5, decimals: 1 }, bar: { step: 0.05, decimals: 2 }, kPa: { step: 5, decimals: 0 } };
+
+/** A band value for the screen: "18.5 psi", "1.30 bar", "130 kPa" (to 0.5 psi, 0.05 bar, 5 kPa). */
+export function formatBandPressure(kPa: number, unit: PressureUnit): string {
+  const { step, decimals } = BAND_STEP[unit];
+  const value = Math.round(kpaTo(kPa, unit) / step) * step;
+  return `${formatNumber(value, decimals, false)} ${unit}`;
+}

@@ -26,8 +26,9 @@ test("an anonymous rider gets a band for an unsaved setup, with the cautions", a
   await page.getByLabel("Bike (kg)").fill("15.5");
   await page.getByLabel("Front wheel: tyre's printed maximum (psi)").fill("40");
   await page.getByRole("button", { name: "Show my pressure band" }).click();
-  // The rear maximum is missing: the field says so and nothing typed is lost.
-  await expect(page.locator("#setup-rear-max-error")).toContainText("must be a number");
+  // The rear maximum is missing: the field says "required", focus moves to it, and nothing typed is lost.
+  await expect(page.locator("#setup-rear-max-error")).toContainText("is required");
+  await expect(page.getByLabel("Rear wheel: tyre's printed maximum (psi)")).toBeFocused();
   await expect(page.getByLabel("Rider with kit (kg)")).toHaveValue("72");
   await page.getByLabel("Rear wheel: tyre's printed maximum (psi)").fill("40");
   await page.getByRole("button", { name: "Show my pressure band" }).click();
@@ -36,7 +37,10 @@ test("an anonymous rider gets a band for an unsaved setup, with the cautions", a
   await expect(result).toContainText("A starting estimate");
   await expect(page.getByTestId("band-front")).toContainText(/\d+\.\d psi/);
   await expect(page.getByTestId("band-rear")).toContainText("Pump to");
-  await expect(page.getByTestId("reasons")).toContainText("Starting point from 87.5 kg");
+  await expect(page.getByTestId("reasons")).toContainText("Starting point for 87.5 kg");
+  await expect(page.getByTestId("reasons")).toContainText("29 × 2.4 in tyres");
+  // Band values to 0.5 psi on screen.
+  await expect(page.getByTestId("band-front")).toContainText(/\d+\.[05] psi/);
   await expect(page.getByTestId("cautions")).toContainText(STANDARD_CAUTION);
   await expect(page.getByTestId("cautions")).toContainText("Check both tyres with a gauge");
   await shot(page, "pressure-anonymous-band");
@@ -56,19 +60,19 @@ test("the demo rider picks a saved setup and today's trails, and sees band, reas
   await signInAs(page, demo("rider"), undefined, "/pressure");
   await page.goto("/pressure");
   await expect(page.getByRole("radio", { name: /Hardpack 29er/ })).toBeChecked();
+  // A saved setup goes straight to today's band, before anything is typed; the demo rider has logged
+  // rides on it, so the band starts from them.
+  await expect(page.getByTestId("band-result")).toContainText("From your own logged rides on this setup.");
   await page.getByRole("button", { name: "None" }).click();
   await page.getByLabel("Tumblewire").check();
   await page.getByLabel("Gnarlroot").check();
-  await page.getByRole("button", { name: "Show my pressure band" }).click();
-
-  await expect(page.getByTestId("band-result")).toContainText("Starting from your baseline.");
-  await expect(page.getByTestId("band-result")).toContainText("Harrow Ridge Bike Park, 2 trails.");
+  // …and follows the day as the trails change.
+  await expect(page.getByTestId("band-result")).toContainText("Harrow Ridge Bike Park, 2 trails. Ground: tacky on 2.");
   const reasons = page.getByTestId("reasons");
-  const baselineRow = reasons.locator("tr[data-reason=basis-baseline]");
-  await expect(baselineRow).toContainText("Your baseline, checked at 16 °C on dry ground");
-  await expect(baselineRow).toContainText("20.5 psi");
-  await expect(baselineRow).toContainText("24.0 psi");
-  await expect(reasons).toContainText("Jumps or drops on 2 of 2 trails (Tumblewire, Gnarlroot)");
+  const ridesRow = reasons.locator("tr[data-reason^=basis-rides]");
+  await expect(ridesRow).toContainText(/From \d+ of your rides on this setup/);
+  // Support takes the most demanding planned trail and names it.
+  await expect(reasons).toContainText(/(Jumps|Drops|Jumps and drops) on (Tumblewire|Gnarlroot)/);
   await expect(page.getByTestId("cautions")).toContainText(STANDARD_CAUTION);
   await expect(page.getByTestId("cautions")).toContainText("Follow park signage, closures and staff instructions.");
   await shot(page, "pressure-rider-band");
@@ -112,13 +116,13 @@ test("a new setup: errors per field keep what was typed; the sag check is shown 
   await expect(page.locator("#setup-front-width-error")).toHaveText("");
   await page.getByLabel("Shock stroke (mm)").fill("60");
   await page.getByLabel("Rear sag (mm)").fill("17");
-  await expect(page.getByTestId("sag-rear")).toContainText("Rear: 28 % — In range (target 25–30 %)");
+  await expect(page.getByTestId("sag-rear")).toContainText("Rear: 28.3 % — In range (target 25–30 %)");
   await page.getByLabel("Rear sag (mm)").fill("24");
   await expect(page.getByTestId("sag-rear")).toContainText("Too much sag");
   await page.getByRole("button", { name: "Save setup" }).click();
   await expect(page).toHaveURL(/\/me\/setups\/[0-9a-f-]{36}\?saved=1/);
   await expect(page.getByRole("status").filter({ hasText: "Setup saved." })).toBeVisible();
-  await expect(page.getByTestId("sag-rear")).toContainText("40 %");
+  await expect(page.getByTestId("sag-rear")).toContainText("40.0 %");
   await shot(page, "setup-editor");
 });
 
@@ -130,12 +134,13 @@ test("a ride log produces one suggestion, which the rider applies to the baselin
   await page.getByRole("group", { name: "Rear tyre" }).getByLabel("Rim strike").check();
   await page.getByRole("button", { name: "Log ride and get one suggestion" }).click();
   const suggestion = page.getByTestId("suggestion");
-  await expect(page.getByTestId("suggestion-change")).toHaveText("+1.5 psi rear");
+  // +7 % of the 19.5 psi run on the rear.
+  await expect(page.getByTestId("suggestion-change")).toHaveText("+1.4 psi rear");
   await expect(suggestion).toContainText("Rear rim strike");
   await expect(suggestion).not.toContainText("Front sliding");
   await shot(page, "ride-suggestion");
   await page.getByRole("button", { name: "Apply to my baseline" }).click();
-  await expect(page.getByRole("status")).toContainText("Baseline of Light climber is now 17.0 psi front, 21.0 psi rear.");
+  await expect(page.getByRole("status")).toContainText("Baseline of Light climber is now 17.0 psi front, 20.9 psi rear.");
   await page.goto("/me/rides");
   await expect(page.getByTestId("ride-history")).toContainText("applied");
 });
@@ -167,7 +172,10 @@ test("the API: public band, 422 for another park's trails, 401 and 404 for setup
   expect(band.basis).toBe("baseline");
   expect(Object.keys(band.front).sort()).toEqual(["deltaKpa", "highKpa", "lowKpa", "pumpToKpa", "targetKpa"]);
   expect(band.reasons.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining(["basis-baseline", "pump-temperature", "pump-elevation"]));
-  expect(band.conditions.rideElevationM).toBe(980);
+  // The day rides at the planned trails' midpoint; the maximum is checked at their top.
+  expect(band.conditions.rideElevationM).toBe(Math.round((band.conditions.lowestElevationM + band.conditions.highestElevationM) / 2));
+  expect(band.conditions.highestElevationM).toBeGreaterThan(band.conditions.lowestElevationM);
+  expect(band.uncertainty.front.elevationKpa).toBeGreaterThan(0);
   expect(band.cautions).toContain("Never go above the tyre's or the rim's printed maximum pressure, whichever is lower.");
 
   const trails = (await (await request.post("/api/pressure", { data: { ...body, today: { parkSlug: "harrow-ridge" } } })).json()).conditions.trails;
@@ -196,9 +204,11 @@ test("every rule is documented on a public page, with its id, numbers and source
   await page.goto("/pressure/how-it-works");
   await expect(page.getByRole("heading", { name: "How the pressure band works" })).toBeVisible();
   const wet = page.locator("#rule-grip-wet");
-  await expect(wet).toContainText("grip-wet");
-  await expect(wet).toContainText("front \u22127 kPa, rear \u22125 kPa");
+  await expect(wet.getByRole("link", { name: /Link to this rule/ })).toHaveAttribute("href", "#rule-grip-wet");
+  await expect(wet).toContainText("front \u22125.5\u00a0%, rear \u22123.2\u00a0%");
   await expect(wet).toContainText("common practice");
+  await expect(page.locator("#rule-basis-rides")).toContainText("your own rides");
+  await expect(page.locator("body")).not.toContainText(/from memory/i);
   await expect(page.locator("#rule-atmosphere-iso-2533")).toContainText("ISO 2533:1975");
   await expect(page.getByRole("heading", { name: "Always" })).toBeVisible();
   await shot(page, "pressure-how-it-works");

@@ -6,7 +6,6 @@ export const metadata = { title: "How the pressure band works" };
 const SOURCE_STYLE: Record<Source, string> = {
   published: "bg-moss-100 text-moss-700",
   computed: "bg-moss-100 text-moss-700",
-  "from memory": "bg-flare-100 text-loam-900",
   "common practice": "bg-loam-100 text-loam-900",
   "our choice": "bg-loam-100 text-loam-900",
   safety: "bg-brick-100 text-brick-600",
@@ -18,8 +17,8 @@ export default function HowItWorksPage() {
       <header className="space-y-2">
         <h1 className="text-3xl font-extrabold tracking-tight">How the pressure band works</h1>
         <p className="max-w-prose text-lg text-loam-900">
-          Every rule the band uses, with its id (the same id shown beside each reason), what it does in plain words, its numbers and where they come
-          from. Rules marked <em>common practice</em> are trade rules of thumb with no published source. Back to{" "}
+          Every rule the band uses: what it does in plain words, its numbers and where they come from. The <em>how?</em> link beside each reason
+          opens its rule here. Rules marked <em>common practice</em> are trade rules of thumb with no published source. Back to{" "}
           <Link href="/pressure" className="font-semibold underline">today&apos;s pressure</Link>.
         </p>
       </header>
@@ -35,12 +34,12 @@ export default function HowItWorksPage() {
           <ul className="space-y-3">
             {section.rules.map((rule) => (
               <li key={rule.id} id={`rule-${rule.id}`} className="card space-y-1">
-                <p className="font-mono text-sm font-bold text-loam-800">{rule.id}</p>
                 <p className="text-lg font-semibold text-loam-900">{rule.plain}</p>
                 <p className="text-loam-900"><span className="font-semibold">Numbers:</span> {rule.numbers}</p>
                 <p className="text-sm text-loam-900">
                   <span className={`mr-2 rounded px-2 py-0.5 text-xs font-bold uppercase ${SOURCE_STYLE[rule.source.kind]}`}>{rule.source.kind}</span>
-                  {rule.source.text}
+                  {rule.source.text}{" "}
+                  <a href={`#rule-${rule.id}`} className="whitespace-nowrap text-loam-800 underline" aria-label={`Link to this rule (${rule.id})`}>Link to this rule</a>
                 </p>
               </li>
             ))}

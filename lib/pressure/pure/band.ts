@@ -1,8 +1,9 @@
 /**
  * Band and limits per wheel. Ceiling: the lower of the tyre's and the rim's printed maximum.
  * Floor: the pressure at which the design load would press the tyre in past the drop where rim
- * strikes and burps become likely (settings.ts), never below an absolute minimum. The ceiling
- * always wins over the floor: nothing is ever advised above a printed maximum.
+ * strikes and burps become likely (settings.ts), never below the tubeless bead floor (higher on
+ * small wheels), the tube floor, or the tyre's printed minimum. The ceiling always wins over the
+ * floor: nothing is ever advised above a printed maximum.
  */
 import type { PressureUnit } from "@/lib/shared/units";
 import type { WheelSetup } from "@/lib/pressure/pure/schemas";
@@ -10,13 +11,10 @@ import { floorAboveMaxCaution, floorCaution, maxCaution } from "./cautions";
 import { pressureAtDropKpa } from "./estimate";
 import {
   ABSOLUTE_FLOOR_KPA,
-  BAND_FRACTION_BASELINE,
-  BAND_FRACTION_ESTIMATE,
-  BAND_MAX_HALF_KPA,
-  BAND_MIN_HALF_KPA,
   FLOOR_DROP_INSERT_BONUS,
   FLOOR_DROP_TUBELESS,
   FLOOR_DROP_TUBES,
+  WHEEL_FLOOR_KPA,
 } from "./settings";
 import type { WheelPosition } from "./types";
 
@@ -31,8 +29,16 @@ export const floorDrop = (wheel: WheelSetup) =>
 
 /** Pressure below which rim strikes and burps become likely for this load and tyre. */
 export function floorKpa(totalMassKg: number, position: WheelPosition, wheel: WheelSetup): number {
-  return Math.max(ABSOLUTE_FLOOR_KPA, pressureAtDropKpa(totalMassKg, position, wheel, floorDrop(wheel)));
+  return Math.max(minimumKpa(wheel), pressureAtDropKpa(totalMassKg, position, wheel, floorDrop(wheel)));
 }
+
+/**
+ * Whatever the load: the floor for this wheel size (set by tubeless bead retention; a tube is
+ * never advised below it either, so tubes never come out lower than tubeless), never below the
+ * absolute floor, and the tyre's printed minimum if that is higher.
+ */
+export const minimumKpa = (wheel: WheelSetup) =>
+  Math.max(ABSOLUTE_FLOOR_KPA, WHEEL_FLOOR_KPA[wheel.bsdMm] ?? ABSOLUTE_FLOOR_KPA, wheel.minKpa ?? 0);
 
 export const wheelLimits = (totalMassKg: number, position: WheelPosition, wheel: WheelSetup): WheelLimits => ({
   floorKpa: floorKpa(totalMassKg, position, wheel),
@@ -59,19 +65,12 @@ export function limitTarget(requestedKpa: number, limits: WheelLimits): LimitedT
 
 export type BandEdges = { lowKpa: number; highKpa: number; lowAtFloor: boolean; highAtMax: boolean };
 
-/** Band half-width: wider for an estimate, which is less certain than a rider's own baseline. */
-export function bandHalfWidthKpa(targetKpa: number, basis: "baseline" | "estimate"): number {
-  const fraction = basis === "baseline" ? BAND_FRACTION_BASELINE : BAND_FRACTION_ESTIMATE;
-  return Math.min(BAND_MAX_HALF_KPA, Math.max(BAND_MIN_HALF_KPA, fraction * targetKpa));
-}
-
-/** Low and high edges around a limited target; low ≤ target ≤ high ≤ max always. */
-export function bandEdges(targetKpa: number, limits: WheelLimits, basis: "baseline" | "estimate"): BandEdges {
-  const half = bandHalfWidthKpa(targetKpa, basis);
+/** Low and high edges `halfKpa` around a limited target; low ≤ target ≤ high ≤ max always. */
+export function bandEdges(targetKpa: number, limits: WheelLimits, halfKpa: number): BandEdges {
   const lowFloor = Math.min(limits.floorKpa, targetKpa);
-  const lowKpa = Math.max(targetKpa - half, lowFloor);
-  const highKpa = Math.max(targetKpa, Math.min(targetKpa + half, limits.maxKpa));
-  return { lowKpa, highKpa, lowAtFloor: targetKpa - half < lowFloor, highAtMax: targetKpa + half > limits.maxKpa };
+  const lowKpa = Math.max(targetKpa - halfKpa, lowFloor);
+  const highKpa = Math.max(targetKpa, Math.min(targetKpa + halfKpa, limits.maxKpa));
+  return { lowKpa, highKpa, lowAtFloor: targetKpa - halfKpa < lowFloor, highAtMax: targetKpa + halfKpa > limits.maxKpa };
 }
 
 export type LimitedWheel = { limits: WheelLimits; target: LimitedTarget; edges: BandEdges; cautions: string[] };
@@ -80,12 +79,12 @@ export type LimitedWheel = { limits: WheelLimits; target: LimitedTarget; edges: 
 export function limitWheel(
   requestedKpa: number,
   limits: WheelLimits,
-  basis: "baseline" | "estimate",
+  halfKpa: number,
   position: WheelPosition,
   unit: PressureUnit,
 ): LimitedWheel {
   const target = limitTarget(requestedKpa, limits);
-  const edges = bandEdges(target.targetKpa, limits, basis);
+  const edges = bandEdges(target.targetKpa, limits, halfKpa);
   const cautions: string[] = [];
   if (target.binding === "floor-above-max") {
     cautions.push(floorAboveMaxCaution(position, limits.floorKpa, limits.maxKpa, unit));

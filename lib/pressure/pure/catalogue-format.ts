@@ -1,7 +1,8 @@
 /** Shapes and number wording for the rule catalogue (/pressure/how-it-works). */
 import { formatPressure } from "@/lib/shared/units";
 
-export type Source = "published" | "computed" | "common practice" | "from memory" | "our choice" | "safety";
+/** Where a rule's numbers come from; "from memory" is not a kind: every rule is verified or marked common practice. */
+export type Source = "published" | "computed" | "common practice" | "our choice" | "safety";
 export type RuleEntry = {
   id: string;
   /** What the rule does, in plain words. */
@@ -23,3 +24,6 @@ export const frontRear = ([front, rear]: readonly [number, number] | readonly nu
 
 export const kpaAndPsi = (kPa: number) => `${kPa} kPa (≈ ${formatPressure(kPa, "psi")})`;
 export const percent = (fraction: number) => `${fraction > 0 ? "+" : fraction < 0 ? "\u2212" : ""}${Math.round(Math.abs(fraction) * 1000) / 10}\u00a0%`;
+
+/** [−0.055, −0.032] as "front −5.5 %, rear −3.2 %". */
+export const frontRearPercent = ([front, rear]: readonly [number, number] | readonly number[]) => `front ${percent(front)}, rear ${percent(rear)}`;

@@ -1,28 +1,30 @@
 /**
- * Starting estimate when the rider has no baseline. Physical core: the pressure that gives the
- * wheel's design load a contact patch of the target size (A ≈ F/p, so p = F/A), where the
- * target patch grows with tyre width and wheel diameter (lib/pressure/pure/physics/contact-patch.ts).
- * Then construction and pace terms as fractions of the core. All numbers: settings.ts.
+ * Starting estimate when the rider has no baseline, per wheel:
+ *   p = shape pressure (casing) + design load / patch area at the target drop × tubes × insert,
+ * with the design load = weight × (static share + riding loads) × pace. The footprint is the
+ * F ∝ p·d^(3/2) law of physics/contact-patch.ts; every number is in settings.ts and checked against
+ * the common-practice anchor points (docs/pressure-grid.md). Each term is counted once.
  */
-import { patchAreaAtDropM2, pressureForPatchKpa, weightN } from "@/lib/pressure/pure/physics/contact-patch";
-import type { PressureUnit } from "@/lib/shared/units";
+import { dropAtPressure, patchAreaAtDropM2, pressureForPatchKpa, weightN } from "@/lib/pressure/pure/physics/contact-patch";
+import { tyreSizeText, type PressureUnit } from "@/lib/shared/units";
 import type { Pace, PressureInput, WheelSetup } from "@/lib/pressure/pure/schemas";
-import { capitalise, isNegligible, pairText, percentText, wheelsText } from "./format";
+import { capitalise, isNegligible, pairText, wheelsText } from "./format";
 import {
-  CASING_TERM,
   DYNAMIC_ALLOWANCE,
   FRONT_STATIC_SHARE,
-  INSERT_TERM,
-  PACE_TERM,
+  INSERT_FACTOR,
+  PACE_FACTOR,
+  SHAPE_PRESSURE_KPA,
   TARGET_DROP,
-  TUBE_TERM,
+  TUBE_FACTOR,
 } from "./settings";
 import type { Reason, WheelPosition } from "./types";
 
-/** Design load (N) on one wheel: static share plus the dynamic allowance, times total weight. */
+const staticShare = (position: WheelPosition) => (position === "front" ? FRONT_STATIC_SHARE : 1 - FRONT_STATIC_SHARE);
+
+/** Design load (N) on one wheel at steady pace: static share plus the riding loads, times total weight. */
 export function designLoadN(totalMassKg: number, position: WheelPosition): number {
-  const share = position === "front" ? FRONT_STATIC_SHARE : 1 - FRONT_STATIC_SHARE;
-  return weightN(totalMassKg) * (share + DYNAMIC_ALLOWANCE);
+  return weightN(totalMassKg) * (staticShare(position) + DYNAMIC_ALLOWANCE);
 }
 
 /** Pressure (kPa) at which the design load presses the tyre in by `dropFraction` of its height. */
@@ -31,59 +33,58 @@ export function pressureAtDropKpa(totalMassKg: number, position: WheelPosition, 
 }
 
 export type WheelEstimate = {
-  coreKpa: number;
-  casingKpa: number;
+  shapeKpa: number;
+  loadKpa: number;
   tubesKpa: number;
   insertKpa: number;
   paceKpa: number;
   totalKpa: number;
+  /** Drop under the rider's and bike's static weight alone at the estimate (fraction of height). */
+  staticDrop: number;
 };
 
-/** The estimate for one wheel, split into its terms. */
+/** The estimate for one wheel, split into its terms (they add up to totalKpa). */
 export function estimateWheel(totalMassKg: number, position: WheelPosition, wheel: WheelSetup, pace: Pace): WheelEstimate {
-  const coreKpa = pressureAtDropKpa(totalMassKg, position, wheel, TARGET_DROP);
-  const casingKpa = coreKpa * CASING_TERM[wheel.casing];
-  const tubesKpa = wheel.tubeless ? 0 : coreKpa * TUBE_TERM;
-  const insertKpa = wheel.insert ? coreKpa * INSERT_TERM : 0;
-  const paceKpa = coreKpa * PACE_TERM[pace];
-  return { coreKpa, casingKpa, tubesKpa, insertKpa, paceKpa, totalKpa: coreKpa + casingKpa + tubesKpa + insertKpa + paceKpa };
+  const shapeKpa = SHAPE_PRESSURE_KPA[wheel.casing];
+  const loadKpa = pressureAtDropKpa(totalMassKg, position, wheel, TARGET_DROP);
+  const paceKpa = loadKpa * (PACE_FACTOR[pace] - 1);
+  const paced = loadKpa + paceKpa;
+  const tubesKpa = wheel.tubeless ? 0 : paced * (TUBE_FACTOR - 1);
+  const insertKpa = wheel.insert ? (paced + tubesKpa) * (INSERT_FACTOR - 1) : 0;
+  const totalKpa = shapeKpa + paced + tubesKpa + insertKpa;
+  const staticDrop = dropAtPressure(wheel.bsdMm, wheel.widthMm, weightN(totalMassKg) * staticShare(position), totalKpa);
+  return { shapeKpa, loadKpa, tubesKpa, insertKpa, paceKpa, totalKpa, staticDrop };
 }
 
 export type Estimate = { frontKpa: number; rearKpa: number; reasons: Reason[] };
 
-const designation = (w: WheelSetup) => `${Math.round(w.widthMm)}-${w.bsdMm}`;
+const percentOf = (fraction: number) => `${Math.round(fraction * 100)} %`;
 
-/** Estimate for both wheels, each term explained. */
+/** Estimate for both wheels, each term explained in plain words. */
 export function estimatePressures(input: PressureInput): Estimate {
   const mass = input.riderMassKg + input.bikeMassKg;
   const unit: PressureUnit = input.unit;
   const front = estimateWheel(mass, "front", input.front, input.pace);
   const rear = estimateWheel(mass, "rear", input.rear, input.pace);
-  const split = `${Math.round(FRONT_STATIC_SHARE * 100)}/${Math.round((1 - FRONT_STATIC_SHARE) * 100)}`;
-  const sizes =
-    designation(input.front) === designation(input.rear)
-      ? `${designation(input.front)} tyres`
-      : `${designation(input.front)} front and ${designation(input.rear)} rear tyres`;
-  const reasons: Reason[] = [
-    {
-      id: "estimate-load",
-      text: `Starting point from ${mass.toFixed(1)} kg of rider and bike (${split} split plus riding loads) on ${sizes}, sized for a ${Math.round(TARGET_DROP * 100)} % tyre drop: ${pairText(front.coreKpa, rear.coreKpa, unit)}`,
-      frontKpa: front.coreKpa,
-      rearKpa: rear.coreKpa,
-    },
-  ];
-  const add = (id: string, label: string, f: number, r: number) => {
-    if (isNegligible(f) && isNegligible(r)) return;
-    reasons.push({ id, text: `${label}: ${wheelsText(f, r, unit)}`, frontKpa: f, rearKpa: r });
+  const [f, r] = [tyreSizeText(input.front.bsdMm, input.front.widthMm), tyreSizeText(input.rear.bsdMm, input.rear.widthMm)];
+  const sizes = f === r ? `${f} tyres` : `${f} front and ${r} rear`;
+  const reasons: Reason[] = [];
+  const add = (id: string, text: string, fk: number, rk: number, absolute = false) => {
+    if (isNegligible(fk) && isNegligible(rk)) return;
+    reasons.push({ id, text: `${text}: ${absolute ? pairText(fk, rk, unit) : wheelsText(fk, rk, unit)}`, frontKpa: fk, rearKpa: rk });
   };
-  const casingLabel =
-    input.front.casing === input.rear.casing
-      ? `${capitalise(input.front.casing)} casing (${percentText(CASING_TERM[input.front.casing])})`
-      : `Casings (${input.front.casing} front ${percentText(CASING_TERM[input.front.casing])}, ${input.rear.casing} rear ${percentText(CASING_TERM[input.rear.casing])})`;
-  add("estimate-casing", `${casingLabel}; thinner casings need more air to hold their shape`, front.casingKpa, rear.casingKpa);
-  add("estimate-tubes", `Inner tubes (${percentText(TUBE_TERM)}) to keep them from pinching`, front.tubesKpa, rear.tubesKpa);
-  add("estimate-insert", `Tyre insert (${percentText(INSERT_TERM)}); it backs the tyre up in hard hits`, front.insertKpa, rear.insertKpa);
-  add("estimate-pace", `${capitalise(input.pace)} pace (${percentText(PACE_TERM[input.pace])})`, front.paceKpa, rear.paceKpa);
+  const check = `; at the final pressure your weight alone presses the tyres in about ${percentOf(front.staticDrop)} front, ${percentOf(rear.staticDrop)} rear`;
+  add(
+    "estimate-load",
+    `Starting point for ${mass.toFixed(1)} kg of rider and bike on ${sizes}, so that braking, berms and landings press each tyre in about ${percentOf(TARGET_DROP)} of its height (${Math.round(FRONT_STATIC_SHARE * 100)} % of the weight on the front, ${Math.round((1 - FRONT_STATIC_SHARE) * 100)} % on the rear)${check}`,
+    front.loadKpa,
+    rear.loadKpa,
+    true,
+  );
+  const casings = input.front.casing === input.rear.casing ? `${capitalise(input.front.casing)} casing` : `${capitalise(input.front.casing)} casing front, ${input.rear.casing} rear`;
+  add("estimate-casing", `${casings}: what every tyre needs to hold its shape in corners and keep its bead seated, less for stiffer casings`, front.shapeKpa, rear.shapeKpa);
+  add("estimate-pace", `${capitalise(input.pace)} pace: ${input.pace === "hard" ? "harder hits and turns load the tyres more" : "gentler riding loads the tyres less"}`, front.paceKpa, rear.paceKpa);
+  add("estimate-tubes", "Inner tubes: more air so they do not pinch", front.tubesKpa, rear.tubesKpa);
+  add("estimate-insert", "Tyre insert: it backs the tyre up in hard hits, so a little less air", front.insertKpa, rear.insertKpa);
   return { frontKpa: front.totalKpa, rearKpa: rear.totalKpa, reasons };
 }
-

@@ -1,13 +1,15 @@
 /**
  * Grip rules: slick or loose ground wants less pressure so the tyre conforms. Each trail counts
  * by its least grippy surface, compared with the surface the baseline was set on, so a baseline
- * set in the wet and ridden dry moves up. Contributions are weighted by the share of trails.
+ * set in the wet and ridden dry moves up. Grip is the share-weighted mean over the planned trails
+ * (a tyre rides every one of them); steps are fractions of the basis (steps.ts).
  */
 import type { PressureUnit } from "@/lib/shared/units";
 import { SURFACES, type Surface } from "@/lib/pressure/pure/schemas";
 import { shareText } from "./conditions";
 import { capitalise, isNegligible, wheelsText } from "./format";
-import { SLICK_ROOTS_KPA, SLICK_SURFACES, SLICK_WOOD_KPA, SURFACE_GRIP_KPA } from "./settings";
+import { ROCK_GRIP_PROTECTED, SLICK_ROOTS, SLICK_SURFACES, SLICK_WOOD, SURFACE_GRIP } from "./settings";
+import { stepsKpa, type Basis } from "./steps";
 import type { PlannedDay, PlannedTrail, Reason } from "./types";
 
 /** The least grippy of a set of surfaces (ties go to the earlier one in SURFACES); undefined if empty. */
@@ -15,7 +17,7 @@ export function leastGrippy(surfaces: readonly Surface[]): Surface | undefined {
   let worst: Surface | undefined;
   for (const surface of SURFACES) {
     if (!surfaces.includes(surface)) continue;
-    if (worst === undefined || SURFACE_GRIP_KPA[surface][0] < SURFACE_GRIP_KPA[worst][0]) worst = surface;
+    if (worst === undefined || SURFACE_GRIP[surface][0] < SURFACE_GRIP[worst][0]) worst = surface;
   }
   return worst;
 }
@@ -26,9 +28,9 @@ const ADJECTIVE: Record<Surface, string> = {
 };
 
 /** Surface rules: one reason per least-grippy surface that differs from the reference. */
-export function surfaceReasons(day: PlannedDay, referenceSurfaces: readonly Surface[], unit: PressureUnit): Reason[] {
+export function surfaceReasons(day: PlannedDay, referenceSurfaces: readonly Surface[], basis: Basis, unit: PressureUnit): Reason[] {
   const reference = leastGrippy(referenceSurfaces) ?? "dry";
-  const [refFront, refRear] = SURFACE_GRIP_KPA[reference];
+  const [refFront, refRear] = SURFACE_GRIP[reference];
   const groups = new Map<Surface, PlannedTrail[]>();
   for (const trail of day.trails) {
     const surface = leastGrippy(trail.surfaces);
@@ -39,8 +41,7 @@ export function surfaceReasons(day: PlannedDay, referenceSurfaces: readonly Surf
   const total = day.trails.length;
   for (const [surface, trails] of groups) {
     const share = trails.length / total;
-    const front = (SURFACE_GRIP_KPA[surface][0] - refFront) * share;
-    const rear = (SURFACE_GRIP_KPA[surface][1] - refRear) * share;
+    const [front, rear] = stepsKpa([SURFACE_GRIP[surface][0] - refFront, SURFACE_GRIP[surface][1] - refRear], basis, share);
     if (isNegligible(front) && isNegligible(rear)) continue;
     const why = front + rear < 0 ? "less grip" : "more grip";
     const versus = reference === "dry" ? "than dry ground" : `than the ${ADJECTIVE[reference]} ground your baseline was set on`;
@@ -55,11 +56,11 @@ export function surfaceReasons(day: PlannedDay, referenceSurfaces: readonly Surf
 }
 
 /** Roots and wooden features turn slick on wet, muddy, frozen or snowy ground. */
-export function slickFeatureReasons(day: PlannedDay, unit: PressureUnit): Reason[] {
+export function slickFeatureReasons(day: PlannedDay, basis: Basis, unit: PressureUnit): Reason[] {
   const reasons: Reason[] = [];
   const items = [
-    { id: "grip-slick-roots", feature: "roots", noun: "roots", kpa: SLICK_ROOTS_KPA },
-    { id: "grip-slick-wood", feature: "wooden-feature", noun: "wooden features", kpa: SLICK_WOOD_KPA },
+    { id: "grip-slick-roots", feature: "roots", noun: "roots", fractions: SLICK_ROOTS },
+    { id: "grip-slick-wood", feature: "wooden-feature", noun: "wooden features", fractions: SLICK_WOOD },
   ] as const;
   for (const item of items) {
     const trails = day.trails.filter(
@@ -67,8 +68,7 @@ export function slickFeatureReasons(day: PlannedDay, unit: PressureUnit): Reason
     );
     if (trails.length === 0) continue;
     const share = trails.length / day.trails.length;
-    const front = item.kpa[0] * share;
-    const rear = item.kpa[1] * share;
+    const [front, rear] = stepsKpa(item.fractions, basis, share);
     const slick = [...new Set(trails.map((t) => leastGrippy(t.surfaces.filter((s) => SLICK_SURFACES.includes(s)))))];
     const adjective = slick.length === 1 && slick[0] ? ADJECTIVE[slick[0]] : "slick";
     reasons.push({
@@ -79,4 +79,23 @@ export function slickFeatureReasons(day: PlannedDay, unit: PressureUnit): Reason
     });
   }
   return reasons;
+}
+
+/**
+ * Rocky ground where the casing or an insert already protects the rim: a small cut for grip, so
+ * the tyre wraps the rocks (protectionReasons adds air instead where the rim is exposed).
+ */
+export function protectedRockReasons(day: PlannedDay, protectedWheels: { front: boolean; rear: boolean }, basis: Basis, unit: PressureUnit): Reason[] {
+  if (!protectedWheels.front && !protectedWheels.rear) return [];
+  const rocky = day.trails.filter((t) => t.surfaces.includes("rocky") || t.features.includes("rock-garden"));
+  if (rocky.length === 0) return [];
+  const [f, r] = stepsKpa(ROCK_GRIP_PROTECTED, basis, rocky.length / day.trails.length);
+  const front = protectedWheels.front ? f : 0;
+  const rear = protectedWheels.rear ? r : 0;
+  return [{
+    id: "grip-rocky-protected",
+    text: `Rocks${shareText(day, rocky)}, and your casing or insert protects the rim: a little less for grip on the rocks: ${wheelsText(front, rear, unit)}`,
+    frontKpa: front,
+    rearKpa: rear,
+  }];
 }

@@ -1,48 +1,63 @@
 /**
  * Support and protection rules. High-G berms and jump or drop landings want more support so the
  * tyre does not fold, roll or burp (rear most); rocks want protection for rims and casings,
- * more with tubes or a light casing, less with an insert. The rider's pace scales both.
+ * more with tubes or a light casing, less with an insert. Safety takes the worst case: the most
+ * demanding planned trail sets each rule, and the reason names it. Pace is already in the basis
+ * (the estimate's riding loads, or the rider's own baseline), so it is not counted again.
  */
 import type { PressureUnit } from "@/lib/shared/units";
-import type { Pace, WheelSetup } from "@/lib/pressure/pure/schemas";
-import { shareText } from "./conditions";
-import { isNegligible, wheelsText } from "./format";
+import type { WheelSetup } from "@/lib/pressure/pure/schemas";
+import { wheelsText } from "./format";
 import {
-  BERM_SUPPORT_KPA,
+  BERM_SUPPORT,
   CASING_VULNERABILITY,
   INSERT_VULNERABILITY_FACTOR,
-  JUMP_DROP_SUPPORT_KPA,
-  PACE_LOAD_FACTOR,
-  ROCK_PROTECTION_KPA,
+  JUMP_DROP_SUPPORT,
+  PROTECTED_VULNERABILITY,
+  ROCK_GARDEN_WEIGHT,
+  ROCK_PROTECTION,
+  ROCKY_SURFACE_WEIGHT,
   TUBE_VULNERABILITY,
 } from "./settings";
+import { stepsKpa, type Basis } from "./steps";
 import type { PlannedDay, PlannedTrail, Reason } from "./types";
 
-const paceNote = (pace: Pace) => (pace === "steady" ? "" : ` (${pace} pace, ×${PACE_LOAD_FACTOR[pace]})`);
+type Demand = { weight: number; what: string };
 
-/** Each trail counts once, by its most demanding feature: jumps or drops, else berms. */
-export function supportReasons(day: PlannedDay, pace: Pace, unit: PressureUnit): Reason[] {
-  const jumpy = day.trails.filter((t) => t.features.includes("jump") || t.features.includes("drop"));
-  const bermed = day.trails.filter((t) => !jumpy.includes(t) && t.features.includes("berm"));
-  const factor = PACE_LOAD_FACTOR[pace];
-  const groups = [
-    { id: "support-jump-drop", label: "Jumps or drops", why: "support on landings", trails: jumpy, kpa: JUMP_DROP_SUPPORT_KPA },
-    { id: "support-berm", label: "Berms", why: "support in high-G turns", trails: bermed, kpa: BERM_SUPPORT_KPA },
-  ];
-  const reasons: Reason[] = [];
-  for (const group of groups) {
-    if (group.trails.length === 0) continue;
-    const share = group.trails.length / day.trails.length;
-    const front = group.kpa[0] * factor * share;
-    const rear = group.kpa[1] * factor * share;
-    reasons.push({
-      id: group.id,
-      text: `${group.label}${shareText(day, group.trails)}${paceNote(pace)}, more ${group.why}: ${wheelsText(front, rear, unit)}`,
+/** The most demanding of the planned trails (first on ties), or undefined when none demands anything. */
+function worstTrail(day: PlannedDay, demand: (t: PlannedTrail) => Demand | undefined) {
+  let worst: { trail: PlannedTrail; demand: Demand } | undefined;
+  for (const trail of day.trails) {
+    const d = demand(trail);
+    if (d && d.weight > (worst?.demand.weight ?? 0)) worst = { trail, demand: d };
+  }
+  return worst;
+}
+
+const where = (day: PlannedDay, trail: PlannedTrail) => (day.scope === "day" ? " today" : ` on ${trail.name}`);
+const othersText = (count: number) => (count > 0 ? ` (and ${count} more planned trail${count === 1 ? "" : "s"} like it)` : "");
+
+/** Support for the biggest feature planned: jumps or drops, else berms. */
+export function supportReasons(day: PlannedDay, basis: Basis, unit: PressureUnit): Reason[] {
+  const demand = (t: PlannedTrail): Demand | undefined => {
+    if (t.features.includes("jump") || t.features.includes("drop")) {
+      return { weight: 2, what: t.features.includes("jump") ? (t.features.includes("drop") ? "Jumps and drops" : "Jumps") : "Drops" };
+    }
+    return t.features.includes("berm") ? { weight: 1, what: "Berms" } : undefined;
+  };
+  const worst = worstTrail(day, demand);
+  if (!worst) return [];
+  const jumpy = worst.demand.weight === 2;
+  const [front, rear] = stepsKpa(jumpy ? JUMP_DROP_SUPPORT : BERM_SUPPORT, basis);
+  const others = day.trails.filter((t) => t !== worst.trail && demand(t)?.weight === worst.demand.weight).length;
+  return [
+    {
+      id: jumpy ? "support-jump-drop" : "support-berm",
+      text: `${worst.demand.what}${where(day, worst.trail)}${othersText(others)}, more support ${jumpy ? "on landings" : "in high-G turns"}: ${wheelsText(front, rear, unit)}`,
       frontKpa: front,
       rearKpa: rear,
-    });
-  }
-  return reasons;
+    },
+  ];
 }
 
 /** How exposed a wheel is to pinch flats, casing cuts and rim damage (0 = not at all). */
@@ -51,29 +66,37 @@ export function vulnerability(wheel: WheelSetup): number {
   return wheel.insert ? base * INSERT_VULNERABILITY_FACTOR : base;
 }
 
-const isRocky = (t: PlannedTrail) => t.surfaces.includes("rocky") || t.features.includes("rock-garden");
+/** A casing or insert that protects the rim well enough that rocks call for grip, not air. */
+export const rimProtected = (wheel: WheelSetup) => vulnerability(wheel) <= PROTECTED_VULNERABILITY;
+
+const rockDemand = (t: PlannedTrail): Demand | undefined =>
+  t.features.includes("rock-garden")
+    ? { weight: ROCK_GARDEN_WEIGHT, what: "Rock garden" }
+    : t.surfaces.includes("rocky")
+      ? { weight: ROCKY_SURFACE_WEIGHT, what: "Rocky ground" }
+      : undefined;
 
 function exposureNote(front: WheelSetup, rear: WheelSetup): string {
   const notes: string[] = [];
-  if (!front.tubeless || !rear.tubeless) notes.push("tubes");
+  if (!front.tubeless || !rear.tubeless) notes.push("tubes pinch");
   if (front.casing === "light" || rear.casing === "light") notes.push("light casing");
-  if (front.insert || rear.insert) notes.push("inserts halve it");
+  if (front.insert || rear.insert) notes.push("an insert halves it");
   return notes.length ? ` (${notes.join("; ")})` : "";
 }
 
-/** Rocky surfaces and rock gardens: protection scaled by each wheel's vulnerability and pace. */
-export function protectionReasons(day: PlannedDay, front: WheelSetup, rear: WheelSetup, pace: Pace, unit: PressureUnit): Reason[] {
-  const rocky = day.trails.filter(isRocky);
-  if (rocky.length === 0) return [];
-  const share = rocky.length / day.trails.length;
-  const factor = PACE_LOAD_FACTOR[pace] * share;
-  const frontKpa = ROCK_PROTECTION_KPA[0] * vulnerability(front) * factor;
-  const rearKpa = ROCK_PROTECTION_KPA[1] * vulnerability(rear) * factor;
-  if (isNegligible(frontKpa) && isNegligible(rearKpa)) return [];
+/** The rockiest planned trail: protection scaled by each exposed wheel's vulnerability. */
+export function protectionReasons(day: PlannedDay, front: WheelSetup, rear: WheelSetup, basis: Basis, unit: PressureUnit): Reason[] {
+  const worst = worstTrail(day, rockDemand);
+  const exposed = (w: WheelSetup) => (rimProtected(w) ? 0 : vulnerability(w) * (worst?.demand.weight ?? 0));
+  if (!worst || (exposed(front) === 0 && exposed(rear) === 0)) return [];
+  const [f, r] = stepsKpa(ROCK_PROTECTION, basis);
+  const frontKpa = f * exposed(front);
+  const rearKpa = r * exposed(rear);
+  const others = day.trails.filter((t) => t !== worst.trail && rockDemand(t)?.weight === worst.demand.weight).length;
   return [
     {
       id: "protection-rocks",
-      text: `Rocks${shareText(day, rocky)}${paceNote(pace)}, more air to protect rims and casings${exposureNote(front, rear)}: ${wheelsText(frontKpa, rearKpa, unit)}`,
+      text: `${worst.demand.what}${where(day, worst.trail)}${othersText(others)}, more air to protect rims and casings${exposureNote(front, rear)}: ${wheelsText(frontKpa, rearKpa, unit)}`,
       frontKpa,
       rearKpa,
     },

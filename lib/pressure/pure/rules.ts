@@ -4,10 +4,11 @@
  * an estimate (the estimate is calibrated for ordinary dry conditions).
  */
 import { formatPressure, type PressureUnit } from "@/lib/shared/units";
-import type { Pace, Surface, WheelSetup } from "@/lib/pressure/pure/schemas";
+import type { Surface, WheelSetup } from "@/lib/pressure/pure/schemas";
 import { isNegligible, wheelsText } from "./format";
-import { surfaceReasons, slickFeatureReasons } from "./rules-grip";
-import { protectionReasons, supportReasons } from "./rules-load";
+import { protectedRockReasons, surfaceReasons, slickFeatureReasons } from "./rules-grip";
+import { protectionReasons, rimProtected, supportReasons } from "./rules-load";
+import type { Basis } from "./steps";
 import { TWEAK_BOUND_KPA } from "./settings";
 import type { PlannedDay, Reason } from "./types";
 
@@ -16,7 +17,8 @@ export type TweakInput = {
   referenceSurfaces: readonly Surface[];
   front: WheelSetup;
   rear: WheelSetup;
-  pace: Pace;
+  /** The basis each step is a fraction of (trail gauge pressure, kPa). */
+  basis: Basis;
   unit: PressureUnit;
 };
 
@@ -26,13 +28,14 @@ const clamp = (value: number, bound: number) => Math.min(bound, Math.max(-bound,
 
 /** All of today's rules for the planned day, bounded per wheel. */
 export function todaysTweak(input: TweakInput): Tweak {
-  const { day, unit } = input;
+  const { day, unit, basis } = input;
   if (day.trails.length === 0) return { frontKpa: 0, rearKpa: 0, reasons: [] };
   const reasons = [
-    ...surfaceReasons(day, input.referenceSurfaces, unit),
-    ...slickFeatureReasons(day, unit),
-    ...supportReasons(day, input.pace, unit),
-    ...protectionReasons(day, input.front, input.rear, input.pace, unit),
+    ...surfaceReasons(day, input.referenceSurfaces, basis, unit),
+    ...slickFeatureReasons(day, basis, unit),
+    ...protectedRockReasons(day, { front: rimProtected(input.front), rear: rimProtected(input.rear) }, basis, unit),
+    ...supportReasons(day, basis, unit),
+    ...protectionReasons(day, input.front, input.rear, basis, unit),
   ];
   const rawFront = reasons.reduce((sum, r) => sum + r.frontKpa, 0);
   const rawRear = reasons.reduce((sum, r) => sum + r.rearKpa, 0);

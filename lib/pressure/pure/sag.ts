@@ -1,6 +1,8 @@
 /**
  * Sag check: sag % = sag at rest ÷ shock stroke (or fork travel). Target bands are common
- * practice, no published standard: rear 25–30 % (some guides 20–30 %); fork 15–25 % (from memory).
+ * practice, no published standard: rear 25–30 % (some guides 20–30 %); fork 15–25 %. The verdict
+ * compares the unrounded percentage; outside SAG_PLAUSIBLE_PERCENT a reading is more likely a
+ * misread than a setting, so the answer is "measure again" (common practice, no published source).
  * Follow the suspension maker's own figure when it gives one.
  */
 import { AppError } from "@/lib/shared/errors";
@@ -8,7 +10,9 @@ import { sagInputSchema, type SagInput } from "@/lib/pressure/pure/schemas";
 
 export const SAG_TARGET_PERCENT = { rear: { min: 25, max: 30 }, fork: { min: 15, max: 25 } } as const;
 
-export type SagVerdict = "too-little" | "in-range" | "too-much";
+export const SAG_PLAUSIBLE_PERCENT = { min: 10, max: 45 } as const;
+
+export type SagVerdict = "too-little" | "in-range" | "too-much" | "measure-again";
 export type SagResult = { percent: number; min: number; max: number; verdict: SagVerdict; text: string; cautions: string[] };
 
 export const SAG_CAUTIONS = [
@@ -29,9 +33,12 @@ export function checkSag(raw: SagInput | unknown): SagResult {
   const { end, sagMm, strokeMm } = parsed.data;
   const percent = sagPercent(sagMm, strokeMm);
   const { min, max } = SAG_TARGET_PERCENT[end];
-  const shown = `${percent.toFixed(0)} %`;
+  const shown = `${percent.toFixed(1)} %`;
   const part = end === "rear" ? "shock" : "fork";
   const range = `${min}–${max} %`;
+  if (percent < SAG_PLAUSIBLE_PERCENT.min || percent > SAG_PLAUSIBLE_PERCENT.max) {
+    return { percent, min, max, verdict: "measure-again", cautions: [...SAG_CAUTIONS], text: `Sag ${shown} is outside anything a ridden ${part} sits at: measure again. Push the O-ring (or a zip tie) against the seal, get on in riding kit in your riding position without bouncing, step off gently, and measure from the seal to the ring against the ${end === "rear" ? "shock's stroke (not the wheel travel)" : "fork's travel"}.` };
+  }
   if (percent < min) {
     return { percent, min, max, verdict: "too-little", cautions: [...SAG_CAUTIONS], text: `Sag ${shown} is below the usual ${range}: soften the ${part} spring (less air or a lighter coil) a little, then measure again.` };
   }

@@ -12,17 +12,14 @@ import { PRESSURE_UNITS } from "@/lib/shared/units";
 export const FEATURES = ["berm", "jump", "drop", "rock-garden", "roots", "wooden-feature"] as const;
 export const CASINGS = ["light", "trail", "reinforced", "downhill"] as const;
 export const PACES = ["easy", "steady", "hard"] as const;
-/** ISO 5775 bead-seat diameters (mm) and the wheel sizes riders call them by: the one wheel-size table. */
-export const WHEEL_SIZE_INCHES = { 406: "20″", 507: "24″", 559: "26″", 584: "27.5″", 622: "29″" } as const;
-export const BEAD_SEAT_DIAMETERS_MM = [406, 507, 559, 584, 622] as const satisfies readonly (keyof typeof WHEEL_SIZE_INCHES)[];
-/** "29″" for 622 mm; an unknown diameter in millimetres. */
-export const wheelSizeLabel = (bsdMm: number): string => WHEEL_SIZE_INCHES[bsdMm as keyof typeof WHEEL_SIZE_INCHES] ?? `${bsdMm} mm`;
+/** ISO 5775 bead-seat diameters (mm): 20", 24", 26", 27.5" (650B), 29" (700C); their names in WHEEL_SIZE_LABELS (lib/shared/units.ts). */
+export const BEAD_SEAT_DIAMETERS_MM = [406, 507, 559, 584, 622] as const;
 export const SYMPTOMS = ["squirm-in-berms", "rim-strike", "burp", "harsh", "sliding", "fine"] as const;
 
 /** A number within [min, max] whose messages name the field and the unit. */
 export const boundedNumber = (label: string, min: number, max: number, unit: string) =>
   z
-    .number({ error: `${label} must be a number.` })
+    .number({ error: (issue) => (issue.input === undefined ? `${label} is required.` : `${label} must be a number.`) })
     .min(min, { error: `${label} must be at least ${min} ${unit}.` })
     .max(max, { error: `${label} must be at most ${max} ${unit}.` });
 
@@ -47,13 +44,20 @@ export const wheelSchema = z.strictObject({
   tubeless: z.boolean({ error: "Tubeless must be true or false." }),
   maxKpa: boundedNumber("The tyre's printed maximum", 100, 1100, "kPa"),
   rimMaxKpa: boundedNumber("The rim's printed maximum", 100, 1100, "kPa").optional(),
+  /** The tyre's printed minimum, when it has one. */
+  minKpa: boundedNumber("The tyre's printed minimum", 20, 1100, "kPa").optional(),
 });
 
 export const baselineSchema = z.strictObject({
   frontKpa: boundedNumber("Baseline front pressure", 20, 1100, "kPa"),
   rearKpa: boundedNumber("Baseline rear pressure", 20, 1100, "kPa"),
   surfaces: surfaceList.min(1, { error: "Name at least one surface the baseline was set on." }).default(["dry"]),
+  /** Where the baseline was checked with a gauge (air temperature, elevation). */
   temperatureC: boundedNumber("Baseline temperature", -40, 50, "°C").optional(),
+  elevationM: boundedNumber("Baseline elevation", -500, 5000, "m").optional(),
+  /** What it was ridden in, when that differs from where it was checked. */
+  rideTemperatureC: boundedNumber("Baseline ride temperature", -40, 50, "°C").optional(),
+  rideElevationM: boundedNumber("Baseline ride elevation", -500, 5000, "m").optional(),
 });
 
 /** Air temperatures and elevations of the day; each optional (missing means "same as the other"). */
@@ -62,6 +66,10 @@ const airFields = {
   pumpTemperatureC: boundedNumber("Pump temperature", -40, 50, "°C").optional(),
   rideElevationM: boundedNumber("Ride elevation", -500, 5000, "m").optional(),
   pumpElevationM: boundedNumber("Pump elevation", -500, 5000, "m").optional(),
+  /** The highest point of the planned trails: the printed maximum is checked there too. */
+  highestElevationM: boundedNumber("Highest elevation", -500, 5000, "m").optional(),
+  /** The lowest point of the planned trails: the band widens with the span. */
+  lowestElevationM: boundedNumber("Lowest elevation", -500, 5000, "m").optional(),
 };
 
 export const trailConditionsSchema = z.strictObject({
@@ -109,7 +117,20 @@ export const savedSetupPressureRequestSchema = z.strictObject({
   unit: setupFields.unit.unwrap().optional(),
   today: todayRequestSchema.optional(),
 });
-export const pressureInputSchema = z.strictObject({ ...setupFields, today: dayConditionsSchema.optional() });
+/** What one ride log tells the engine (learning.ts): what was run and how each tyre felt, on what ground. */
+export const rideEvidenceSchema = z.strictObject({
+  frontKpa: boundedNumber("Front pressure you ran", 20, 1100, "kPa"),
+  rearKpa: boundedNumber("Rear pressure you ran", 20, 1100, "kPa"),
+  symptoms: z.strictObject({ front: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length), rear: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length) }),
+  surfaces: surfaceList.default([]),
+});
+
+export const pressureInputSchema = z.strictObject({
+  ...setupFields,
+  today: dayConditionsSchema.optional(),
+  /** This setup's ride logs, newest first (saved setups only). */
+  rides: z.array(rideEvidenceSchema).max(100).optional(),
+});
 
 export const wheelSymptomsSchema = uniqueList(
   z.enum(SYMPTOMS, { error: `Symptom must be one of: ${SYMPTOMS.join(", ")}.` }),
@@ -140,4 +161,5 @@ export type PressureRequestInput = z.input<typeof pressureRequestSchema>;
 export type PressureInput = z.infer<typeof pressureInputSchema>;
 export type PressureInputRaw = z.input<typeof pressureInputSchema>;
 export type RideSymptoms = z.infer<typeof rideSymptomsSchema>;
+export type RideEvidence = z.infer<typeof rideEvidenceSchema>;
 export type SagInput = z.infer<typeof sagInputSchema>;

@@ -4,82 +4,118 @@
  */
 import type { Casing, Pace, Surface } from "@/lib/pressure/pure/schemas";
 
-/** Static front share of rider + bike weight (~40/60): from memory; a setting, not an oracle. */
+/** Static front share of rider + bike weight on a mountain bike (~40/60). Common practice, no published source. */
 export const FRONT_STATIC_SHARE = 0.4;
 /**
- * Dynamic allowance added to each wheel's share of the weight: braking, cornering and landings
- * load both wheels, so riders run the front closer to the rear than the static split suggests.
- * Common practice calibration, no published source: with 0.5 the design loads are 0.9 and 1.1 × weight.
+ * Riding loads added to each wheel's static share of the weight: braking, berms and landings load
+ * both wheels, so the design loads are (0.4 + 0.53) and (0.6 + 0.53) × weight. Common practice
+ * calibration (rear about 3 psi above front on equal tyres for a ~70 kg rider), no published source.
  */
-export const DYNAMIC_ALLOWANCE = 0.5;
+export const DYNAMIC_ALLOWANCE = 0.9;
 /**
- * Target tyre drop as a fraction of section height under the design load. About 15 % follows
- * F. Berto's tyre-drop studies (road and touring tyres; a trend, not a mountain-bike measurement).
+ * Drop (fraction of section height) the design load presses the tyre in at the estimate's load
+ * term, in the footprint of physics/contact-patch.ts. Our calibration against the common-practice
+ * anchor points (docs/pressure-grid.md); the static drop at the result is shown in the reason.
  */
-export const TARGET_DROP = 0.15;
-
-/** Estimate terms as fractions of the load/patch pressure (common practice, no published source). */
-export const CASING_TERM: Record<Casing, number> = { light: 0.08, trail: 0, reinforced: -0.04, downhill: -0.08 };
-export const TUBE_TERM = 0.15;
-export const INSERT_TERM = -0.06;
-export const PACE_TERM: Record<Pace, number> = { easy: -0.05, steady: 0, hard: 0.06 };
+export const TARGET_DROP = 0.185;
+/**
+ * Pressure every tyre needs whatever its load, to hold its shape in corners and keep the bead
+ * seated; stiffer casings hold their shape with less. Common practice calibration, no published source.
+ */
+export const SHAPE_PRESSURE_KPA: Record<Casing, number> = { light: 33, trail: 30, reinforced: 28, downhill: 26.5 };
+/** Construction and pace, each counted once, as factors on the load term (common practice, no published source). */
+export const TUBE_FACTOR = 1.12;
+export const INSERT_FACTOR = 0.97;
+/** Pace scales the riding loads in the estimate; it is not counted again in today's rules. */
+export const PACE_FACTOR: Record<Pace, number> = { easy: 0.92, steady: 1, hard: 1.08 };
 
 /**
- * Floor: the drop (fraction of section height) under the design load beyond which rim strikes
- * and burps become likely. Common practice, no published source. Tubes pinch earlier than
- * tubeless; an insert lets the tyre go deeper. floor = design load / patch area at this drop.
+ * Floor: the drop under the design load beyond which rim strikes and burps become likely.
+ * Common practice, no published source. Tubes pinch earlier than tubeless; an insert lets the
+ * tyre go deeper. floor = design load / patch area at this drop.
  */
-export const FLOOR_DROP_TUBELESS = 0.19;
-export const FLOOR_DROP_TUBES = 0.175;
-export const FLOOR_DROP_INSERT_BONUS = 0.04;
+export const FLOOR_DROP_TUBELESS = 0.2;
+export const FLOOR_DROP_TUBES = 0.19;
+export const FLOOR_DROP_INSERT_BONUS = 0.03;
 /** No tyre is run below this, whatever the model says (≈ 5 psi). Common practice. */
 export const ABSOLUTE_FLOOR_KPA = 35;
+/**
+ * Floor by bead-seat diameter: a tubeless tyre needs this much to keep its bead sealed, small
+ * wheels more than big ones (a tighter bead curve, riders' reports of burping). Tubes get the same
+ * floor, so they never come out below tubeless. Trade judgement, no published source.
+ */
+export const WHEEL_FLOOR_KPA: Record<number, number> = { 406: 62, 507: 59, 559: 55, 584: 55, 622: 52 };
 
 /**
- * Grip: change from a dry reference for each surface, [front, rear] kPa (1 psi ≈ 6.9 kPa).
+ * Today's steps are fractions of the wheel's basis pressure (a child and a heavy rider get
+ * proportionate changes), each held between STEP_MIN_KPA and STEP_MAX_KPA in size.
+ * Our choice: about 0.15 psi is below what a gauge shows, about 2 psi is a big change for one rule.
+ */
+export const STEP_MIN_KPA = 1;
+export const STEP_MAX_KPA = 14;
+
+/**
+ * Grip: change from a dry reference for each surface, [front, rear] as fractions of the basis.
  * Lower pressure lets the tyre conform and grip on slick or loose ground; the front steers,
  * so it drops more. Common practice, no published source.
  */
-export const SURFACE_GRIP_KPA: Record<Surface, readonly [number, number]> = {
+export const SURFACE_GRIP: Record<Surface, readonly [number, number]> = {
   dry: [0, 0],
   tacky: [0, 0],
   rocky: [0, 0],
-  dusty: [-3.5, -2],
-  damp: [-3.5, -2],
-  loose: [-5, -3.5],
-  frozen: [-5, -3.5],
-  wet: [-7, -5],
-  muddy: [-10, -7],
-  snow: [-10, -7],
+  dusty: [-0.025, -0.013],
+  damp: [-0.025, -0.013],
+  loose: [-0.04, -0.022],
+  frozen: [-0.04, -0.022],
+  wet: [-0.055, -0.032],
+  muddy: [-0.075, -0.045],
+  snow: [-0.075, -0.045],
 };
 /** Surfaces that make roots and wooden features slick. */
 export const SLICK_SURFACES: readonly Surface[] = ["damp", "wet", "muddy", "frozen", "snow"];
 /** Extra grip drop on a trail with roots / wooden features on a slick surface, [front, rear]. */
-export const SLICK_ROOTS_KPA = [-3.5, -2] as const;
-export const SLICK_WOOD_KPA = [-2, -1] as const;
+export const SLICK_ROOTS = [-0.027, -0.013] as const;
+export const SLICK_WOOD = [-0.015, -0.007] as const;
+/** Rocky ground on a wheel whose casing or insert protects the rim: a little less for grip. */
+export const ROCK_GRIP_PROTECTED = [-0.02, -0.012] as const;
 
-/** Support for high-G features, [front, rear] kPa, at steady pace. Common practice. */
-export const BERM_SUPPORT_KPA = [2, 3.5] as const;
-export const JUMP_DROP_SUPPORT_KPA = [3.5, 7] as const;
+/** Support for the most demanding feature planned, [front, rear] fractions. Common practice. */
+export const BERM_SUPPORT = [0.015, 0.022] as const;
+export const JUMP_DROP_SUPPORT = [0.027, 0.045] as const;
 
-/** Protection on rocky trails per unit of vulnerability, [front, rear] kPa. Common practice. */
-export const ROCK_PROTECTION_KPA = [5, 7] as const;
+/** Protection on the rockiest planned trail per unit of vulnerability, [front, rear]. Common practice. */
+export const ROCK_PROTECTION = [0.04, 0.045] as const;
 export const CASING_VULNERABILITY: Record<Casing, number> = { light: 1, trail: 0.5, reinforced: 0.25, downhill: 0 };
 export const TUBE_VULNERABILITY = 0.75;
 /** An insert halves the protection needed. */
 export const INSERT_VULNERABILITY_FACTOR = 0.5;
-
-/** Pace scales support and protection (more speed, more load). Common practice. */
-export const PACE_LOAD_FACTOR: Record<Pace, number> = { easy: 0.5, steady: 1, hard: 1.5 };
+/** At or below this vulnerability the rim is protected: rocks cut for grip instead of adding air. */
+export const PROTECTED_VULNERABILITY = 0.25;
+/** A rock garden counts more than rocky ground (a line of square hits, not scattered ones). */
+export const ROCK_GARDEN_WEIGHT = 1;
+export const ROCKY_SURFACE_WEIGHT = 0.6;
 
 /** Today's tweaks together are bounded per wheel (≈ ±2.9 psi). */
 export const TWEAK_BOUND_KPA = 20;
 
-/** Band half-width: a fraction of the target, kept between a min and max (common practice). */
-export const BAND_FRACTION_BASELINE = 0.04;
-export const BAND_FRACTION_ESTIMATE = 0.08;
-export const BAND_MIN_HALF_KPA = 3;
-export const BAND_MAX_HALF_KPA = 14;
+/**
+ * The band's half-width is built from independent parts, added in quadrature (uncertainty.ts):
+ * the basis (estimate, baseline or rides), the gauge, the park's elevation span and the day's
+ * temperature swing. The fractions and the swing are common practice, no published source.
+ */
+export const ESTIMATE_UNCERTAINTY = 0.07;
+export const BASELINE_UNCERTAINTY = 0.02;
+/** Between gauges about ±1 psi; the same gauge repeats to about ±0.5 psi (a baseline or ride log was read on it). */
+export const GAUGE_ACCURACY_KPA = 6.9;
+export const GAUGE_REPEATABILITY_KPA = 3.4;
+/** Air temperature over a riding day, morning to afternoon, when nothing else is known (°C, whole swing). */
+export const DAY_TEMPERATURE_SWING_C = 6;
+
+/** Learning from ride logs (learning.ts): at least this many logs, the newest this many. */
+export const MIN_LEARNING_LOGS = 2;
+export const MAX_LEARNING_LOGS = 20;
+/** Beyond a one-sided bracket, the best guess sits this fraction of the pressure inside it. */
+export const ONE_SIDED_STEP = 0.05;
 
 /** Reports older than this trigger a caution. */
 export const STALE_REPORT_HOURS = 24;

@@ -1,5 +1,6 @@
 /** Shapes shared by the pressure engine's parts. Pressures in kPa (gauge). */
 import type { Feature, Surface } from "@/lib/pressure/pure/schemas";
+import type { UncertaintyParts } from "./uncertainty";
 
 export type WheelPosition = "front" | "rear";
 
@@ -18,11 +19,14 @@ export type WheelBand = {
 };
 
 export type PressureResult = {
-  basis: "baseline" | "estimate";
+  /** Where the band starts: the rider's own rides, their baseline, or the starting estimate. */
+  basis: "baseline" | "estimate" | "rides";
   front: WheelBand;
   rear: WheelBand;
   reasons: Reason[];
   cautions: string[];
+  /** The band's half-width parts per wheel (kPa), added in quadrature (uncertainty.ts). */
+  uncertainty: { front: UncertaintyParts; rear: UncertaintyParts };
 };
 
 /** A trail as the rules see it, with the whole day's conditions merged in. */

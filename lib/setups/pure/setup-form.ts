@@ -25,6 +25,10 @@ export type SetupDraft = {
   baselineRear: string;
   baselineSurfaces: Surface[];
   baselineTemperature: string;
+  /** Where the baseline was checked, and (optionally) the air and height it was ridden in. */
+  baselineElevation: string;
+  baselineRideTemperature: string;
+  baselineRideElevation: string;
   rearStroke: string;
   rearSag: string;
   forkTravel: string;
@@ -48,6 +52,9 @@ export const emptySetupDraft = (units: { pressure: PressureUnit; mass: MassUnit 
   baselineRear: "",
   baselineSurfaces: ["dry"],
   baselineTemperature: "",
+  baselineElevation: "",
+  baselineRideTemperature: "",
+  baselineRideElevation: "",
   rearStroke: "",
   rearSag: "",
   forkTravel: "",
@@ -60,7 +67,8 @@ const wheelDraftSchema = z.object({ bsd: text, width: text, widthUnit: z.enum(["
 export const setupDraftSchema = z.object({
   name: text, massUnit: z.enum(MASS_UNITS), pressureUnit: z.enum(PRESSURE_UNITS), riderMass: text, bikeMass: text, pace: z.enum(PACES),
   front: wheelDraftSchema, rear: wheelDraftSchema, baselineFront: text, baselineRear: text, baselineSurfaces: z.array(surfaceSchema).max(10),
-  baselineTemperature: text, rearStroke: text, rearSag: text, forkTravel: text, frontSag: text,
+  baselineTemperature: text, baselineElevation: text.default(""), baselineRideTemperature: text.default(""), baselineRideElevation: text.default(""),
+  rearStroke: text, rearSag: text, forkTravel: text, frontSag: text,
 });
 
 /** Blank → undefined; "19,5" → 19.5; anything else that is not a number → NaN (refused by zod). */
@@ -111,6 +119,9 @@ export function setupFromDraft(draft: SetupDraft): Record<string, unknown> {
           rearKpa: map(numberFrom(draft.baselineRear), (v) => kpaFrom(v, p)),
           surfaces: draft.baselineSurfaces,
           temperatureC: numberFrom(draft.baselineTemperature),
+          elevationM: numberFrom(draft.baselineElevation),
+          rideTemperatureC: numberFrom(draft.baselineRideTemperature),
+          rideElevationM: numberFrom(draft.baselineRideElevation),
         }
       : null,
     suspension: hasSuspension ? suspension : null,
@@ -125,6 +136,9 @@ const FIELD_OF: Record<string, string> = {
   "baseline.rearKpa": "baselineRear",
   "baseline.surfaces": "baselineSurfaces",
   "baseline.temperatureC": "baselineTemperature",
+  "baseline.elevationM": "baselineElevation",
+  "baseline.rideTemperatureC": "baselineRideTemperature",
+  "baseline.rideElevationM": "baselineRideElevation",
   "suspension.rearStrokeMm": "rearStroke",
   "suspension.rearSagMm": "rearSag",
   "suspension.forkTravelMm": "forkTravel",
@@ -208,6 +222,9 @@ export function draftFromSetup(setup: SetupInput, units: { pressure: PressureUni
     baselineRear: pressureText(setup.baseline?.rearKpa, p),
     baselineSurfaces: setup.baseline?.surfaces ?? ["dry"],
     baselineTemperature: setup.baseline?.temperatureC === undefined ? "" : numberText(setup.baseline.temperatureC, 1),
+    baselineElevation: setup.baseline?.elevationM === undefined ? "" : numberText(setup.baseline.elevationM, 0),
+    baselineRideTemperature: setup.baseline?.rideTemperatureC === undefined ? "" : numberText(setup.baseline.rideTemperatureC, 1),
+    baselineRideElevation: setup.baseline?.rideElevationM === undefined ? "" : numberText(setup.baseline.rideElevationM, 0),
     rearStroke: mm(s.rearStrokeMm),
     rearSag: mm(s.rearSagMm),
     forkTravel: mm(s.forkTravelMm),

@@ -9,3 +9,19 @@ export function canApply(log: { suggestion: StoredSuggestion | null; appliedAt: 
   if (!log.suggestion || log.appliedAt || !log.setupId) return false;
   return !setupHasBaseline || log.suggestion.deltaKpa !== 0;
 }
+
+type BaselineLike = { frontKpa: number; rearKpa: number };
+
+/**
+ * The baseline a suggestion proposes: the pressure run plus the change (newer logs), else the
+ * saved baseline plus the change on the wheel named (logs stored before suggestions carried it).
+ */
+export function proposedBaseline<T extends BaselineLike>(baseline: T, suggestion: StoredSuggestion): T {
+  if (!suggestion.wheel) return baseline;
+  if (suggestion.proposedKpa) {
+    const { frontKpa, rearKpa } = suggestion.proposedKpa;
+    return { ...baseline, ...(suggestion.wheel !== "rear" ? { frontKpa } : {}), ...(suggestion.wheel !== "front" ? { rearKpa } : {}) };
+  }
+  const key = suggestion.wheel === "rear" ? "rearKpa" : "frontKpa";
+  return { ...baseline, [key]: baseline[key] + suggestion.deltaKpa };
+}

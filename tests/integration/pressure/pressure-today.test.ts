@@ -3,6 +3,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { AppError } from "@/lib/shared/errors";
 import { pressureForRequest } from "@/lib/pressure/pressure-today";
+import { createRideLog } from "@/lib/setups/ride-logs";
 import { psiToKpa } from "@/lib/shared/units";
 import { sequelize } from "@/models";
 import { createPark } from "../helpers";
@@ -36,13 +37,15 @@ describe("pressure band for today's trails", () => {
     const answer = await pressureForRequest(null, { ...inlineSetup, today: { parkSlug: park.slug, trailIds: [wet.id, jumps.id, unreported.id] } });
     const text = answer.reasons.map((r) => `${r.id}: ${r.text}`).join("\n");
     expect(text).toMatch(/grip-wet: Wet on 1 of 3 trails \(Fernwash\)/);
-    expect(text).toMatch(/grip-slick-roots: Wet roots on 1 of 3 trails \(Fernwash\)/);
-    expect(text).toMatch(/support-jump-drop: Jumps or drops on 1 of 3 trails \(Skylark Jumps\)/);
-    expect(text).toMatch(/support-berm: Berms on 1 of 3 trails \(Fernwash\)/);
+    // Under 0.2 psi on both wheels, the wet roots are folded into the small adjustments.
+    expect(text).toMatch(/small-adjustments: Small adjustments \(wet roots on 1 of 3 trails \(Fernwash\)/);
+    // Support takes the most demanding planned trail, by name; berms elsewhere do not add to it.
+    expect(text).toMatch(/support-jump-drop: Jumps on Skylark Jumps, more support on landings/);
+    expect(text).not.toMatch(/support-berm/);
     expect(answer.cautions).toContain("No report today for Quiet Climb: the ground there is unknown and left out (its mapped features still count). Check the conditions board.");
     expect(answer.basis).toBe("baseline");
-    // Test park: base 900 m, summit 1800 m → rides at the midpoint unless told otherwise.
-    expect(answer.conditions).toMatchObject({ park: { slug: park.slug }, rideElevationM: 1350 });
+    // Test trails run 900–920 m (Quiet Climb too): the day rides at their midpoint unless told otherwise.
+    expect(answer.conditions).toMatchObject({ park: { slug: park.slug }, rideElevationM: 910 });
     expect(answer.conditions?.trails.map((t) => [t.name, t.status])).toEqual([["Fernwash", "open"], ["Skylark Jumps", "caution"], ["Quiet Climb", null]]);
     // Wet ground lowers the front; the jump line raises the rear.
     expect(answer.front.targetKpa).toBeLessThan(psiToKpa(19));
@@ -83,5 +86,22 @@ describe("pressure band for today's trails", () => {
     expect(answer.reasons[0].text).toContain("1.31 bar front");
     expect((await refusal(pressureForRequest(await newRider(), { setupId: setup.id }))).status).toBe(404);
     expect((await refusal(pressureForRequest(null, { setupId: setup.id }))).status).toBe(401);
+  });
+
+  it("a saved setup with five logged rides gets a band from its own rides, narrower than the estimate", async () => {
+    const { actor, setup } = await riderWithSetup({ baseline: null });
+    const log = (front: number, rear: number, f: string[], r: string[]) =>
+      createRideLog(actor, { setupId: setup.id, riddenOn: "2026-11-20", frontKpa: psiToKpa(front), rearKpa: psiToKpa(rear), symptoms: { front: f, rear: r }, surfaces: ["dry"] });
+    await log(17.5, 21.5, ["rim-strike"], ["rim-strike"]);
+    await log(21.5, 25.5, ["harsh"], ["harsh"]);
+    await log(19, 23, ["fine"], ["fine"]);
+    await log(19.5, 23.5, ["fine"], ["fine"]);
+    await log(19, 23, ["fine"], ["fine"]);
+    const learned = await pressureForRequest(actor, { setupId: setup.id, unit: "psi", today: { surfaces: ["dry"] } });
+    const estimate = await pressureForRequest(null, { ...inlineSetup, baseline: undefined, today: { surfaces: ["dry"] } });
+    expect(learned.basis).toBe("rides");
+    expect(learned.reasons[0].text).toMatch(/^From 5 of your rides on this setup \(front rim strikes at 17.5 psi, harsh at 21.5 psi/);
+    expect(learned.front.highKpa - learned.front.lowKpa).toBeLessThan(estimate.front.highKpa - estimate.front.lowKpa);
+    expect(learned.front.targetKpa).toBeCloseTo(psiToKpa((19 + 19.5 + 19) / 3), 0);
   });
 });

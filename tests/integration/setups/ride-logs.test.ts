@@ -33,18 +33,19 @@ describe("ride logs", () => {
     const trail = await createTrail(park, "Cinderline", ["rock-garden"]);
     const { actor, setup } = await riderWithSetup();
     const { rideLog, suggestion } = await createRideLog(actor, ride(setup.id, { parkSlug: park.slug, trailIds: [trail.id], note: "Rocky top section" }));
-    // Rim strike (rear) outranks sliding (front): +10 kPa rear.
-    expect(suggestion).toMatchObject({ wheel: "rear", symptom: "rim-strike", deltaKpa: 10, appliesTo: "baseline" });
-    expect(suggestion.reason).toMatch(/^Rear rim strike: \+1\.5 psi rear/);
+    // Rim strike (rear) outranks sliding (front): +7 % of the 23 psi run on the rear.
+    expect(suggestion).toMatchObject({ wheel: "rear", symptom: "rim-strike", appliesTo: "baseline" });
+    expect(suggestion.deltaKpa).toBeCloseTo(0.07 * psiToKpa(23), 9);
+    expect(suggestion.reason).toMatch(/^Rear rim strike: \+1\.6 psi rear from what you ran/);
     expect(rideLog.suggestion).toEqual(suggestion);
 
     const applied = await applyRideLogSuggestion(actor, rideLog.id);
-    expect(applied.setup.baseline?.rearKpa).toBeCloseTo(psiToKpa(23) + 10, 9);
+    expect(applied.setup.baseline?.rearKpa).toBeCloseTo(psiToKpa(23) * 1.07, 9);
     expect(applied.setup.baseline?.frontKpa).toBeCloseTo(psiToKpa(19), 9);
     expect(applied.setup.lockVersion).toBe(1);
     expect(applied.rideLog.appliedAt).not.toBeNull();
     expect((await refusal(applyRideLogSuggestion(actor, rideLog.id))).status).toBe(409);
-    expect((await Setup.findByPk(setup.id))?.baseline).toMatchObject({ rearKpa: psiToKpa(23) + 10 });
+    expect((await Setup.findByPk(setup.id))?.baseline).toMatchObject({ rearKpa: psiToKpa(23) * 1.07 });
 
     const [listed] = await listRideLogs(actor);
     expect(listed).toMatchObject({ id: rideLog.id, park: { slug: park.slug }, trails: [{ name: "Cinderline" }], setup: { name: "Test 29er" } });
@@ -60,7 +61,7 @@ describe("ride logs", () => {
 
   it("a suggestion never goes above the printed maximum", async () => {
     const { actor, setup } = await riderWithSetup({ baseline: { frontKpa: psiToKpa(19), rearKpa: psiToKpa(40), surfaces: ["dry"] } });
-    const { suggestion } = await createRideLog(actor, ride(setup.id, { symptoms: { front: [], rear: ["burp"] } }));
+    const { suggestion } = await createRideLog(actor, ride(setup.id, { rearKpa: psiToKpa(40), symptoms: { front: [], rear: ["burp"] } }));
     expect(suggestion.deltaKpa).toBe(0);
     expect(suggestion.reason).toContain("already at its printed maximum");
   });

@@ -2,7 +2,7 @@
 import { describe, expect, it } from "vitest";
 import { bandEdges, ceilingKpa, floorKpa, limitTarget } from "@/lib/pressure/pure/band";
 import { estimateWheel } from "@/lib/pressure/pure/estimate";
-import { ABSOLUTE_FLOOR_KPA } from "@/lib/pressure/pure/settings";
+import { WHEEL_FLOOR_KPA } from "@/lib/pressure/pure/settings";
 import { computePressureBand } from "@/lib/pressure/pure";
 import { kpaToPsi, psiToKpa } from "@/lib/shared/units";
 import { adult, trailWheel29, withBaseline } from "./fixtures";
@@ -21,7 +21,13 @@ describe("limits", () => {
     expect(kpaToPsi(tubeless)).toBeGreaterThan(12); // a 70 kg rider at 12 psi on 2.4" would strike rims
     expect(floorKpa(85, "front", { ...trailWheel29, tubeless: false })).toBeGreaterThan(tubeless);
     expect(floorKpa(85, "front", { ...trailWheel29, insert: true })).toBeLessThan(tubeless);
-    expect(floorKpa(3, "front", trailWheel29)).toBe(ABSOLUTE_FLOOR_KPA);
+    expect(floorKpa(3, "front", trailWheel29)).toBe(WHEEL_FLOOR_KPA[622]);
+  });
+
+  it("the floor by wheel size rises for small wheels (trade judgement), and a printed minimum lifts it", () => {
+    const small = { ...trailWheel29, bsdMm: 406 as const };
+    expect(floorKpa(3, "front", small)).toBeGreaterThan(floorKpa(3, "front", trailWheel29));
+    expect(floorKpa(3, "front", { ...trailWheel29, minKpa: 150 })).toBe(150);
   });
 
   it("limitTarget reports which limit binds, and the max always wins", () => {
@@ -32,15 +38,13 @@ describe("limits", () => {
   });
 
   it("band edges stay ordered and inside the limits", () => {
-    const edges = bandEdges(198, { floorKpa: 100, maxKpa: 200 }, "baseline");
+    const edges = bandEdges(198, { floorKpa: 100, maxKpa: 200 }, 5);
     expect(edges.highKpa).toBe(200);
     expect(edges.highAtMax).toBe(true);
-    const low = bandEdges(101, { floorKpa: 100, maxKpa: 200 }, "estimate");
+    const low = bandEdges(101, { floorKpa: 100, maxKpa: 200 }, 8);
     expect(low.lowKpa).toBe(100);
     expect(low.lowAtFloor).toBe(true);
-    expect(bandEdges(150, { floorKpa: 100, maxKpa: 200 }, "estimate").highKpa - 150).toBeGreaterThan(
-      bandEdges(150, { floorKpa: 100, maxKpa: 200 }, "baseline").highKpa - 150,
-    );
+    expect(bandEdges(150, { floorKpa: 100, maxKpa: 200 }, 8)).toMatchObject({ lowKpa: 142, highKpa: 158 });
   });
 });
 
@@ -54,7 +58,7 @@ describe("limits in the engine, with cautions", () => {
   });
 
   it("a baseline below the floor is lifted to it, with a reason and a caution", () => {
-    const r = computePressureBand(withBaseline({ baseline: { frontKpa: psiToKpa(10), rearKpa: psiToKpa(23), surfaces: ["dry"] } }));
+    const r = computePressureBand(withBaseline({ baseline: { frontKpa: psiToKpa(8), rearKpa: psiToKpa(23), surfaces: ["dry"] } }));
     const floor = floorKpa(85, "front", trailWheel29);
     expect(r.front.targetKpa).toBeCloseTo(floor, 1);
     expect(r.front.lowKpa).toBeCloseTo(floor, 1);

@@ -1,11 +1,12 @@
 // The rule catalogue behind /pressure/how-it-works: every reason the engine can give has an
 // entry (id, plain words, numbers, source), and its numbers come from settings.ts.
+import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computePressureBand } from "@/lib/pressure/pure";
 import { RULE_SECTIONS, ruleIds } from "@/lib/pressure/pure/catalogue";
 import { FEEDBACK_RULES } from "@/lib/pressure/pure/feedback";
-import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import { TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
 import { CASINGS, FEATURES, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
 
 const wheel = fc.record({
@@ -65,10 +66,16 @@ describe("rule catalogue", () => {
     for (const id of ["grip-wet", "support-jump-drop", "protection-rocks", "pump-temperature", "pump-elevation"]) expect(seen.has(id), id).toBe(true);
   });
 
+  it("every rule id is named in docs/pressure-rules.md", () => {
+    const doc = readFileSync("docs/pressure-rules.md", "utf8");
+    expect(ruleIds().filter((id) => !doc.includes(`\`${id}\``))).toEqual([]);
+  });
+
   it("takes its numbers from the engine's settings", () => {
     const rules = RULE_SECTIONS.flatMap((s) => s.rules);
     const wet = rules.find((r) => r.id === "grip-wet");
-    expect(wet?.numbers).toContain(`front \u2212${-SURFACE_GRIP_KPA.wet[0]} kPa, rear \u2212${-SURFACE_GRIP_KPA.wet[1]} kPa`);
+    expect(wet?.numbers).toContain("front \u22125.5\u00a0%, rear \u22123.2\u00a0%");
+    expect(rules.some((r) => /from memory/i.test(r.source.text))).toBe(false);
     expect(rules.find((r) => r.id === "tweak-bound")?.numbers).toContain(`${TWEAK_BOUND_KPA} kPa`);
     expect(rules.filter((r) => r.id.startsWith("feedback-")).length).toBe(FEEDBACK_RULES.length);
   });

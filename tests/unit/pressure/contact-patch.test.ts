@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { contactPatchAreaM2, patchAreaAtDropM2, pressureForPatchKpa, weightN } from "@/lib/pressure/pure/physics/contact-patch";
+import { contactPatchAreaM2, dropAtPressure, PATCH_SPREAD, patchAreaAtDropM2, pressureForPatchKpa, weightN } from "@/lib/pressure/pure/physics/contact-patch";
 
-describe("contact patch A ≈ F/p (Wilson & Papadopoulos, Bicycling Science 3rd ed. — from memory; Renart & Roura-Grabulosa, Am. J. Phys. 87, 2019)", () => {
+describe("contact patch A ≈ F/p, first order (Renart & Roura-Grabulosa, Am. J. Phys. 87:102–109, 2019)", () => {
   it("computed: 400 N at 150 kPa → 26.7 cm²", () => {
     expect(contactPatchAreaM2(400, 150) * 1e4).toBeCloseTo(26.7, 1);
   });
@@ -13,11 +13,18 @@ describe("contact patch A ≈ F/p (Wilson & Papadopoulos, Bicycling Science 3rd 
   });
 });
 
-describe("target patch geometry (our own model, see docs/pressure-rules.md)", () => {
-  it("A = π·√(D·W)·δ with D = BSD + 2W and δ = drop × W", () => {
-    // 61-622 tyre at 15 % drop: D = 0.744 m, W = 0.061 m, δ = 9.15 mm.
-    const expected = Math.PI * Math.sqrt(0.744 * 0.061) * 0.15 * 0.061;
+describe("footprint F ∝ p·d^(3/2) (power law of Renart & Roura-Grabulosa 2019; spread factor our calibration)", () => {
+  it("A = (4/3)·PATCH_SPREAD·√D·d^(3/2) with D = BSD + 2W and d = drop × W", () => {
+    // 61-622 tyre at 15 % drop: D = 0.744 m, d = 9.15 mm.
+    const expected = (4 / 3) * PATCH_SPREAD * Math.sqrt(0.744) * (0.15 * 0.061) ** 1.5;
     expect(patchAreaAtDropM2(622, 61, 0.15)).toBeCloseTo(expected, 12);
+  });
+  it("doubling the deflection multiplies the load carried at one pressure by 2^(3/2)", () => {
+    expect(patchAreaAtDropM2(622, 61, 0.2) / patchAreaAtDropM2(622, 61, 0.1)).toBeCloseTo(2 ** 1.5, 12);
+  });
+  it("dropAtPressure inverts it: the load at that drop and pressure balances", () => {
+    const area = patchAreaAtDropM2(584, 58, 0.12);
+    expect(dropAtPressure(584, 58, area * 150 * 1000, 150)).toBeCloseTo(0.12, 12);
   });
   it("grows with width, diameter and drop", () => {
     expect(patchAreaAtDropM2(622, 66, 0.15)).toBeGreaterThan(patchAreaAtDropM2(622, 61, 0.15));

@@ -91,7 +91,7 @@ describe("computePressureBand", () => {
   });
 
   it("a tyre that gains more on the way up than its target is set at the trailhead (pump reading held at 0)", () => {
-    const kid = { bsdMm: 406 as const, widthMm: 56, casing: "light" as const, insert: false, tubeless: false, maxKpa: 240 };
+    const kid = { bsdMm: 622 as const, widthMm: 56, casing: "light" as const, insert: false, tubeless: false, maxKpa: 240 };
     const r = computePressureBand({
       riderMassKg: 20, bikeMassKg: 9, pace: "easy", front: kid, rear: kid,
       baseline: { frontKpa: 40, rearKpa: 60, surfaces: ["dry"] },

@@ -37,7 +37,7 @@ describe("pressure form", () => {
       trails: "Choose at least one trail.",
       airTemperature: "Air temperature must be a number.",
       rideElevation: "Ride elevation must be at most 5000 m.",
-      riderMass: "Rider mass (with kit) must be a number.",
+      riderMass: "Rider mass (with kit) is required.", // blank says "required"; "seventy" says "must be a number"
     });
   });
 });

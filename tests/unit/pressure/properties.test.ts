@@ -169,6 +169,77 @@ describe("pressure engine properties", () => {
     );
   });
 
+  it("a heavier casing never raises the target (common practice: heavier casings allow less)", () => {
+    const order = CASINGS;
+    fc.assert(
+      fc.property(inputArb, fc.nat({ max: 2 }), (input, i) => {
+        const set = (casing: (typeof CASINGS)[number]) => ({ ...input, front: { ...input.front, casing }, rear: { ...input.rear, casing } });
+        fc.pre(!input.today?.trails?.length && !input.today?.surfaces?.length && !input.today?.features?.length);
+        notHigher(computePressureBand(set(order[i])), computePressureBand(set(order[i + 1])));
+      }),
+      RUNS,
+    );
+  });
+
+  it("an insert never raises the target, on a day without rocks (common practice)", () => {
+    fc.assert(
+      fc.property(inputArb, (input) => {
+        fc.pre(!input.baseline);
+        const day = { ...input, today: undefined };
+        const set = (insert: boolean) => ({ ...day, front: { ...day.front, insert }, rear: { ...day.rear, insert } });
+        notHigher(computePressureBand(set(false)), computePressureBand(set(true)));
+      }),
+      RUNS,
+    );
+  });
+
+  it("a harder pace never lowers the estimate (common practice)", () => {
+    fc.assert(
+      fc.property(inputArb, fc.nat({ max: 1 }), (input, i) => {
+        const set = (pace: (typeof PACES)[number]) => ({ ...input, baseline: undefined, rides: undefined, pace });
+        notHigher(computePressureBand(set(PACES[i + 1])), computePressureBand(set(PACES[i])));
+      }),
+      RUNS,
+    );
+  });
+
+  it("adding a berm, jump or drop to a planned trail never lowers the target (common practice)", () => {
+    fc.assert(
+      fc.property(inputArb, fc.constantFrom("berm", "jump", "drop" as const), fc.nat(), (input, feature, pick) => {
+        const trails = input.today?.trails ?? [];
+        fc.pre(trails.length > 0);
+        const index = pick % trails.length;
+        const more = trails.map((t, i) => (i === index ? { ...t, features: [...new Set([...t.features, feature])] } : t));
+        notHigher(computePressureBand({ ...input, today: { ...input.today, trails: more } }), computePressureBand(input));
+      }),
+      RUNS,
+    );
+  });
+
+  it("a higher printed maximum never lowers the target; the floor never passes the maximum", () => {
+    fc.assert(
+      fc.property(inputArb, fc.double({ min: 0, max: 300, noNaN: true }), (input, extra) => {
+        const raise = (w: WheelSetup) => ({ ...w, maxKpa: Math.min(1100, w.maxKpa + extra), rimMaxKpa: undefined });
+        const lower = { ...input, front: { ...input.front, rimMaxKpa: undefined }, rear: { ...input.rear, rimMaxKpa: undefined } };
+        notHigher(computePressureBand({ ...input, front: raise(input.front), rear: raise(input.rear) }), computePressureBand(lower));
+      }),
+      RUNS,
+    );
+  });
+
+  it("a warmer pump than trail never lowers the pump reading (Gay-Lussac)", () => {
+    fc.assert(
+      fc.property(inputArb, fc.double({ min: 0, max: 30, noNaN: true }), (input, warmer) => {
+        const t = input.today?.airTemperatureC ?? 10;
+        fc.pre(t + warmer <= 50);
+        const cold = computePressureBand({ ...input, today: { ...input.today, airTemperatureC: t, pumpTemperatureC: t } });
+        const warm = computePressureBand({ ...input, today: { ...input.today, airTemperatureC: t, pumpTemperatureC: t + warmer } });
+        WHEELS.forEach((w) => expect(warm[w].pumpToKpa).toBeGreaterThanOrEqual(cold[w].pumpToKpa - 1e-9));
+      }),
+      RUNS,
+    );
+  });
+
   it("only AppError is ever thrown for arbitrary or broken input", () => {
     const broken = fc.oneof(
       fc.anything(),

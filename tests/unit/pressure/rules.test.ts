@@ -5,7 +5,8 @@ import { planDay } from "@/lib/pressure/pure/conditions";
 import { todaysTweak, type TweakInput } from "@/lib/pressure/pure/rules";
 import { leastGrippy } from "@/lib/pressure/pure/rules-grip";
 import { vulnerability } from "@/lib/pressure/pure/rules-load";
-import { SURFACE_GRIP_KPA, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import { STEP_MAX_KPA, STEP_MIN_KPA, SURFACE_GRIP, TWEAK_BOUND_KPA } from "@/lib/pressure/pure/settings";
+import { relativeStepKpa } from "@/lib/pressure/pure/steps";
 import type { DayConditions } from "@/lib/pressure/pure/schemas";
 import { sum, trailWheel29 } from "./fixtures";
 
@@ -13,8 +14,10 @@ const trail = (name: string, surfaces: DayConditions["surfaces"] = [], features:
   name, surfaces: surfaces ?? [], features: features ?? [], lastReportAgeHours: 2,
 });
 
+/** An adult's basis, kPa (about 18.9 / 22.5 psi). */
+const BASIS = { frontKpa: 130, rearKpa: 155 };
 const tweak = (today: DayConditions, overrides: Partial<TweakInput> = {}) =>
-  todaysTweak({ day: planDay(today), referenceSurfaces: ["dry"], front: trailWheel29, rear: trailWheel29, pace: "steady", unit: "psi", ...overrides });
+  todaysTweak({ day: planDay(today), referenceSurfaces: ["dry"], front: trailWheel29, rear: trailWheel29, basis: BASIS, unit: "psi", ...overrides });
 
 describe("grip rules", () => {
   it("wet roots on 3 of 4 trails lower both wheels, front most, and say the share", () => {
@@ -26,7 +29,7 @@ describe("grip rules", () => {
     const roots = t.reasons.find((r) => r.id === "grip-slick-roots");
     expect(roots?.text).toMatch(/^Wet roots on 3 of 4 trails \(A, B, C\), .*: −0\.\d psi front/);
     const wet = t.reasons.find((r) => r.id === "grip-wet");
-    expect(wet?.frontKpa).toBeCloseTo(SURFACE_GRIP_KPA.wet[0] * 0.75, 9);
+    expect(wet?.frontKpa).toBeCloseTo(SURFACE_GRIP.wet[0] * BASIS.frontKpa * 0.75, 9);
   });
 
   it("names at most three trails in a reason, then says how many more", () => {
@@ -54,42 +57,74 @@ describe("grip rules", () => {
   });
 });
 
-describe("support rules", () => {
-  it("jumps and berms ask for more, rear most; a trail counts once by its biggest feature", () => {
-    const t = tweak({ trails: [trail("Jump line", ["dry"], ["jump", "berm"]), trail("Flow", ["dry"], ["berm"])] });
+describe("support rules: the most demanding planned trail sets it", () => {
+  it("jumps outrank berms, rear most, and the reason names the trail", () => {
+    const t = tweak({ trails: [trail("Flow", ["dry"], ["berm"]), trail("Jump line", ["dry"], ["jump", "berm"])] });
     expect(t.rearKpa).toBeGreaterThan(t.frontKpa);
     expect(t.frontKpa).toBeGreaterThan(0);
-    expect(t.reasons.map((r) => r.id)).toEqual(["support-jump-drop", "support-berm"]);
-    expect(t.reasons[0].text).toMatch(/on 1 of 2 trails \(Jump line\)/);
+    expect(t.reasons.map((r) => r.id)).toEqual(["support-jump-drop"]);
+    expect(t.reasons[0].text).toMatch(/^Jumps on Jump line, more support/);
   });
 
-  it("a hard pace scales support up and says so", () => {
-    const steady = tweak({ features: ["berm"] });
-    const hard = tweak({ features: ["berm"] }, { pace: "hard" });
-    expect(hard.rearKpa).toBeCloseTo(steady.rearKpa * 1.5, 9);
-    expect(hard.reasons[0].text).toContain("hard pace");
+  it("adding flow trails to a plan with one jump line does not dilute its support", () => {
+    const one = tweak({ trails: [trail("Jump line", ["dry"], ["jump"])] });
+    const many = tweak({ trails: [trail("Jump line", ["dry"], ["jump"]), ...["A", "B", "C", "D", "E"].map((n) => trail(n, ["dry"]))] });
+    expect(many.rearKpa).toBeCloseTo(one.rearKpa, 12);
+  });
+
+  it("berms on many trails count once and say how many", () => {
+    const t = tweak({ trails: ["A", "B", "C"].map((n) => trail(n, ["dry"], ["berm"])) });
+    expect(t.reasons[0].text).toMatch(/^Berms on A \(and 2 more planned trails like it\)/);
   });
 });
 
-describe("protection rules", () => {
-  it("rocks push tubes and light casings up; inserts soften it; downhill tubeless casing needs none", () => {
+describe("steps are relative to the basis (our choice of limits)", () => {
+  it("a child and a heavy rider get proportionate changes", () => {
+    const child = tweak({ surfaces: ["wet"] }, { basis: { frontKpa: 70, rearKpa: 75 } });
+    const heavy = tweak({ surfaces: ["wet"] }, { basis: { frontKpa: 160, rearKpa: 180 } });
+    expect(heavy.frontKpa / child.frontKpa).toBeCloseTo(160 / 70, 9);
+  });
+  it(`each step is held between ${STEP_MIN_KPA} and ${STEP_MAX_KPA} kPa; zero stays zero`, () => {
+    expect(relativeStepKpa(0.001, 100)).toBe(STEP_MIN_KPA);
+    expect(relativeStepKpa(-0.5, 400)).toBe(-STEP_MAX_KPA);
+    expect(relativeStepKpa(0, 100)).toBe(0);
+    expect(relativeStepKpa(0.05, 100)).toBeCloseTo(5, 12);
+  });
+});
+
+describe("protection and rocky ground", () => {
+  it("the rockiest planned trail sets protection, named: one rock garden among flow trails keeps it", () => {
+    const alone = tweak({ trails: [trail("Basalt Chute", ["dry"], ["rock-garden"])] });
+    const diluted = tweak({ trails: [trail("Basalt Chute", ["dry"], ["rock-garden"]), ...["A", "B", "C", "D", "E"].map((n) => trail(n, ["dry"]))] });
+    const protection = (t: typeof alone) => t.reasons.find((r) => r.id === "protection-rocks");
+    expect(protection(diluted)?.rearKpa).toBeCloseTo(protection(alone)?.rearKpa ?? NaN, 12);
+    expect(protection(diluted)?.text).toMatch(/^Rock garden on Basalt Chute/);
+  });
+
+  it("rocks push tubes and light casings up; an insert softens it", () => {
     const rocky = { surfaces: ["rocky" as const] };
     const tubeless = tweak(rocky).rearKpa;
-    const tubes = tweak(rocky, { rear: { ...trailWheel29, tubeless: false } }).rearKpa;
-    const light = tweak(rocky, { rear: { ...trailWheel29, casing: "light" } }).rearKpa;
-    const insert = tweak(rocky, { rear: { ...trailWheel29, insert: true } }).rearKpa;
-    expect(tubes).toBeGreaterThan(tubeless);
-    expect(light).toBeGreaterThan(tubeless);
-    expect(insert).toBeLessThan(tubeless);
+    expect(tweak(rocky, { rear: { ...trailWheel29, tubeless: false } }).rearKpa).toBeGreaterThan(tubeless);
+    expect(tweak(rocky, { rear: { ...trailWheel29, casing: "light" } }).rearKpa).toBeGreaterThan(tubeless);
     expect(vulnerability({ ...trailWheel29, casing: "downhill" })).toBe(0);
-    expect(tweak({ features: ["rock-garden"] }, { front: { ...trailWheel29, casing: "downhill" }, rear: { ...trailWheel29, casing: "downhill" } }).reasons).toEqual([]);
+  });
+
+  it("where the casing or an insert protects the rim, rocks give a small grip cut instead, with its reason", () => {
+    const dh = { ...trailWheel29, casing: "downhill" as const };
+    const t = tweak({ features: ["rock-garden"] }, { front: dh, rear: { ...trailWheel29, insert: true } });
+    expect(t.reasons.map((r) => r.id)).toEqual(["grip-rocky-protected"]);
+    expect(t.frontKpa).toBeLessThan(0);
+    expect(t.rearKpa).toBeLessThan(0);
+    const exposed = tweak({ features: ["rock-garden"] });
+    expect(exposed.reasons.map((r) => r.id)).toEqual(["protection-rocks"]);
+    expect(exposed.rearKpa).toBeGreaterThan(0);
   });
 });
 
 describe("the bound on today's tweak", () => {
   it(`is ±${TWEAK_BOUND_KPA} kPa per wheel, with a reason for the part removed`, () => {
     const t = tweak({ surfaces: ["snow", "muddy"], features: ["roots", "wooden-feature"] }, { referenceSurfaces: ["dry"] });
-    const raw = tweak({ surfaces: ["dry"], features: ["jump", "rock-garden"] }, { pace: "hard", referenceSurfaces: ["snow"], rear: { ...trailWheel29, casing: "light", tubeless: false } });
+    const raw = tweak({ surfaces: ["dry"], features: ["jump", "rock-garden"] }, { referenceSurfaces: ["snow"], rear: { ...trailWheel29, casing: "light", tubeless: false } });
     expect(raw.rearKpa).toBe(TWEAK_BOUND_KPA);
     const bound = raw.reasons.find((r) => r.id === "tweak-bound");
     expect(bound?.rearKpa).toBeLessThan(0);
