@@ -1,0 +1,5 @@
+// POST /api/account/password-reset/confirm: {"token","password"}; sets the new password and ends every session.
+import { confirmPasswordReset } from "@/lib/accounts/password-reset";
+import { handler, readJson } from "@/lib/server/api/handler";
+
+export const POST = handler(async ({ request }) => Response.json(await confirmPasswordReset(await readJson(request, 10_000))));
