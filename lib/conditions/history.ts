@@ -22,6 +22,10 @@ export function resolveRange(query: { from?: string | null; to?: string | null }
   return { from, to };
 }
 
+/** A report outlives its author's account: a deleted account reads as this. */
+export const FORMER_STAFF = "former staff member";
+const reporterLabel = (reporter: User | null | undefined) => reporter?.name ?? FORMER_STAFF;
+
 export type HistoryRow = ReportView & { reporterName: string | null };
 
 /** A trail's reports between two dates, newest first: current revisions, or every revision for staff. */
@@ -34,7 +38,7 @@ export async function trailReportHistory(trailId: string, range: { from: string;
       ["revision", "DESC"],
     ],
   });
-  return rows.map((r) => ({ ...reportView(r), reporterName: (r as TrailReport & { reporter?: User }).reporter?.name ?? null }));
+  return rows.map((r) => ({ ...reportView(r), reporterName: reporterLabel((r as TrailReport & { reporter?: User }).reporter) }));
 }
 
 export type ExportRow = HistoryRow & { trailName: string; difficulty: string };
@@ -54,6 +58,6 @@ export async function parkReportsForExport(parkId: string, range: { from: string
   });
   return rows.map((r) => {
     const withJoins = r as TrailReport & { reporter?: User; trail: Trail };
-    return { ...reportView(r), reporterName: withJoins.reporter?.name ?? null, trailName: withJoins.trail.name, difficulty: withJoins.trail.difficulty };
+    return { ...reportView(r), reporterName: reporterLabel(withJoins.reporter), trailName: withJoins.trail.name, difficulty: withJoins.trail.difficulty };
   });
 }
