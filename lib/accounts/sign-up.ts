@@ -51,7 +51,7 @@ export async function signUpRider(input: unknown, from = "unknown") {
 export async function resendProof(input: unknown, from = "unknown") {
   const { email } = emailOnlyFields.parse(input);
   await takeRequestSlot([
-    { limit: LIMITS.signUpPerAddress, key: from },
+    { limit: LIMITS.resendPerAddress, key: from },
     { limit: LIMITS.resendPerEmail, key: email },
   ]);
   const user = await User.findOne({ where: { email }, useMaster: true });

@@ -10,10 +10,12 @@ import { MailSend, RequestCount } from "@/models";
  */
 export type Limit = { bucket: string; max: number; windowMinutes: number };
 
+/** Per address generous enough for a base lodge's shared Wi-Fi on a Saturday morning; per e-mail tight. */
 export const LIMITS = {
-  signUpPerAddress: { bucket: "sign-up:address", max: 10, windowMinutes: 60 },
+  signUpPerAddress: { bucket: "sign-up:address", max: 30, windowMinutes: 60 },
+  resendPerAddress: { bucket: "resend:address", max: 30, windowMinutes: 60 },
   signUpPerEmail: { bucket: "sign-up:email", max: 3, windowMinutes: 60 },
-  resetPerAddress: { bucket: "reset:address", max: 10, windowMinutes: 60 },
+  resetPerAddress: { bucket: "reset:address", max: 30, windowMinutes: 60 },
   resetPerEmail: { bucket: "reset:email", max: 3, windowMinutes: 60 },
   resendPerEmail: { bucket: "resend:email", max: 3, windowMinutes: 60 },
 } satisfies Record<string, Limit>;
