@@ -1,15 +1,4 @@
-/**
- * Runs once when a server process starts. Reads the environment at once, so a production server
- * with the development NEXTAUTH_SECRET (or none) refuses to start instead of serving forgeable
- * sessions (lib/server/env.ts says why).
- */
+/** Runs once when a server process starts (Next.js instrumentation hook); Node-only checks live apart. */
 export async function register() {
-  if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { env } = await import("@/lib/server/env");
-  try {
-    env();
-  } catch (error) {
-    console.error(`✗ Loamcast cannot start: ${(error as Error).message}`);
-    process.exit(1);
-  }
+  if (process.env.NEXT_RUNTIME === "nodejs") await import("@/lib/server/startup-check");
 }
