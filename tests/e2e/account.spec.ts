@@ -32,6 +32,7 @@ test("forgot password → link → new password; the old session's cookie is ref
   const other = await browser.newPage();
   await other.goto("/sign-in");
   await other.getByRole("link", { name: "Forgot your password?" }).click();
+  await expect(other.getByRole("heading", { name: "Forgot your password?" })).toBeVisible();
   await other.getByLabel("E-mail").fill(email);
   await other.getByRole("button", { name: "E-mail me a link" }).click();
   await expect(other.getByRole("status")).toContainText("If an account uses that address");
@@ -135,9 +136,9 @@ test.describe("no open redirect after sign-in (issue #12 finding 2, ASVS v5.0.0 
 });
 
 test("next-auth's own sign-in page answers a hostile callbackUrl with no 5xx (issue #12 finding 7)", async ({ request }) => {
-  for (const value of ["javascript:alert(1)", "%ZZ", "https://evil.example/"]) {
+  for (const value of ["javascript:alert(1)", "%ZZ", "https://evil.example/", "%2F%5Cevil.example"]) {
     const response = await request.get(`/api/auth/signin?callbackUrl=${value}`, { maxRedirects: 0 });
-    expect(response.status(), value).toBeLessThan(500);
+    expect(response.status(), value).toBe(400);
     expect(response.headers()["location"] ?? "", value).not.toMatch(/evil\.example|javascript:/);
   }
 });

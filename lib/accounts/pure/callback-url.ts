@@ -2,20 +2,23 @@
  * Where to go after signing in: only a path on our own origin (ASVS v5.0.0 3.7.2, no open
  * redirect). The value is resolved the way a browser would (`new URL(value, appUrl)`), so a
  * backslash, a tab, an encoded slash or `//host` that a browser reads as another host is caught
- * by comparing origins, not by looking at the first characters. Anything else becomes "/".
+ * by comparing origins, not by looking at the first characters.
  */
-export function safeCallbackUrl(value: unknown, appUrl: string): string {
+export function sameOriginPath(value: unknown, appUrl: string): string | null {
   const raw = Array.isArray(value) ? value[0] : value;
-  if (typeof raw !== "string" || raw.length === 0 || raw.length > 2000) return "/";
+  if (typeof raw !== "string" || raw.length === 0 || raw.length > 2000) return null;
   const base = new URL(appUrl);
   let resolved: URL;
   try {
     resolved = new URL(raw, base);
   } catch {
-    return "/";
+    return null;
   }
-  if (resolved.origin !== base.origin) return "/";
+  if (resolved.origin !== base.origin) return null;
   // Our own absolute URL is fine; hand back only its path so a later check sees a plain path.
   const path = `${resolved.pathname}${resolved.search}${resolved.hash}`;
-  return path.startsWith("/") && !path.startsWith("//") ? path : "/";
+  return path.startsWith("/") && !path.startsWith("//") ? path : null;
 }
+
+/** The same-origin path, or "/" for anything else. */
+export const safeCallbackUrl = (value: unknown, appUrl: string): string => sameOriginPath(value, appUrl) ?? "/";
