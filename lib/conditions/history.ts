@@ -28,8 +28,11 @@ const reporterLabel = (reporter: User | null | undefined) => reporter?.name ?? F
 
 export type HistoryRow = ReportView & { reporterName: string | null };
 
-/** A trail's reports between two dates, newest first: current revisions, or every revision for staff. */
-export async function trailReportHistory(trailId: string, range: { from: string; to: string }, allRevisions = false): Promise<HistoryRow[]> {
+/**
+ * A trail's reports between two dates, newest first: current revisions, or every revision for staff.
+ * Who wrote each report (name and user id) is for the park's staff only (`staffView`).
+ */
+export async function trailReportHistory(trailId: string, range: { from: string; to: string }, allRevisions = false, staffView = false): Promise<HistoryRow[]> {
   const rows = await TrailReport.findAll({
     where: { trailId, reportDate: { [Op.between]: [range.from, range.to] }, ...(allRevisions ? {} : { isCurrent: true }) },
     include: [{ model: User, as: "reporter", attributes: ["name"] }],
@@ -38,7 +41,9 @@ export async function trailReportHistory(trailId: string, range: { from: string;
       ["revision", "DESC"],
     ],
   });
-  return rows.map((r) => ({ ...reportView(r), reporterName: reporterLabel((r as TrailReport & { reporter?: User }).reporter) }));
+  return rows.map((r) =>
+    staffView ? { ...reportView(r), reporterName: reporterLabel((r as TrailReport & { reporter?: User }).reporter) } : { ...reportView(r), reporterId: null, reporterName: null },
+  );
 }
 
 export type ExportRow = HistoryRow & { trailName: string; difficulty: string };
