@@ -35,12 +35,12 @@ test("forgot password → link → new password; the old session's cookie is ref
   await expect(other.getByRole("heading", { name: "Forgot your password?" })).toBeVisible();
   await other.getByLabel("E-mail").fill(email);
   await other.getByRole("button", { name: "E-mail me a link" }).click();
-  await expect(other.getByRole("status")).toContainText("If an account uses that address");
+  await expect(other.getByTestId("forgot").getByRole("status")).toContainText("If an account uses that address");
   await shot(other, "account-forgot");
   await other.goto(await newestLinkTo(email, "/account/reset"));
   await other.getByLabel("New password").fill("password123");
   await other.getByRole("button", { name: "Save the new password" }).click();
-  await expect(other.getByRole("alert")).toContainText("too common");
+  await expect(other.getByTestId("reset").getByRole("alert")).toContainText("too common");
   await other.getByLabel("New password").fill(NEW_PASSWORD);
   await other.getByRole("button", { name: "Save the new password" }).click();
   await expect(other).toHaveURL(/\/sign-in\?reset=1/);
@@ -53,7 +53,7 @@ test("forgot password → link → new password; the old session's cookie is ref
   await other.goto(await newestLinkTo(email, "/account/reset"));
   await other.getByLabel("New password").fill("yet-another-line-7");
   await other.getByRole("button", { name: "Save the new password" }).click();
-  await expect(other.getByRole("alert")).toContainText("not valid any more");
+  await expect(other.getByTestId("reset").getByRole("alert")).toContainText("not valid any more");
 });
 
 test("sign-out ends the session on the server: a cookie copied before is refused (issue #12 finding 4, ASVS 7.4.1)", async ({ page, baseURL }) => {

@@ -7,6 +7,8 @@
 export function sameOriginPath(value: unknown, appUrl: string): string | null {
   const raw = Array.isArray(value) ? value[0] : value;
   if (typeof raw !== "string" || raw.length === 0 || raw.length > 2000) return null;
+  // A path of ours, or an absolute http(s) URL (checked below); "%ZZ" or "trails" is neither.
+  if (!raw.startsWith("/") && !/^https?:\/\//i.test(raw)) return null;
   const base = new URL(appUrl);
   let resolved: URL;
   try {

@@ -2,13 +2,14 @@ import bcrypt from "bcryptjs";
 import { afterAll, describe, expect, it, vi } from "vitest";
 import type { CredentialsConfig } from "next-auth/providers/credentials";
 import { proveAddress, resendProof, signUpRider, SIGN_UP_ANSWER } from "@/lib/accounts/sign-up";
+import { signInMessage } from "@/lib/accounts/pure/sign-in-refusals";
 import { loadActor } from "@/lib/server/auth/actor";
 import { authOptions } from "@/lib/server/auth/options";
 import { MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS } from "@/lib/server/auth/rate-limit";
 import { endAllSessions } from "@/lib/server/auth/sessions";
 import { LIMITS } from "@/lib/server/auth/throttle";
 import { AppError } from "@/lib/shared/errors";
-import { AuditEvent, User, sequelize } from "@/models";
+import { AuditEvent, SignInAttempt, User, sequelize } from "@/models";
 import { capturedMessages, createUser, tokenMailedTo, uniqueEmail } from "../helpers";
 
 const credentials = authOptions.providers[0] as unknown as { options: CredentialsConfig };
@@ -125,6 +126,18 @@ describe("sign-in", () => {
     await user.update({ disabledAt: new Date() });
     expect(await signIn(user.email, "berm-builder-2026")).toBeNull();
     expect(await loadActor(user.id, 0)).toBeNull();
+  });
+
+  it("with PostgreSQL away the form gets our own 'briefly unavailable', never the driver's message (issue #12 finding 7, ASVS 16.5.1)", async () => {
+    const down = Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:55433"), { name: "SequelizeConnectionRefusedError" });
+    const count = vi.spyOn(SignInAttempt, "count").mockRejectedValueOnce(down);
+    const error = (await signIn(uniqueEmail("db-down"), "whatever-password").catch((e) => e)) as Error;
+    count.mockRestore();
+    expect(error.message).toBe("unavailable");
+    expect(signInMessage(error.message).text).toBe("Sign-in is briefly unavailable. Try again in a moment.");
+    // next-auth's own code for a wrong password, and anything unknown, never show server text.
+    expect(signInMessage("CredentialsSignin").code).toBe("mismatch");
+    expect(signInMessage("connect ECONNREFUSED 127.0.0.1:55433").code).toBe("unavailable");
   });
 
   it("records successes and failures in the audit log without the password (ASVS 16.3.1, 16.2.5)", async () => {

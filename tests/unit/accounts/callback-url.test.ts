@@ -19,6 +19,8 @@ describe("safeCallbackUrl", () => {
     ["http://localhost:3999/", "same host, another port"],
     ["\\\\evil.example", "two backslashes"],
     ["", "empty"],
+    ["%ZZ", "not a path (next-auth answered it with a 500)"],
+    ["staff", "a relative path without its slash"],
   ])("refuses %j (%s)", (value) => {
     expect(safeCallbackUrl(value, APP)).toBe("/");
   });
