@@ -131,7 +131,7 @@ describe("sign-in", () => {
   it("with PostgreSQL away the form gets our own 'briefly unavailable', never the driver's message (issue #12 finding 7, ASVS 16.5.1)", async () => {
     const down = Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:55433"), { name: "SequelizeConnectionRefusedError" });
     const count = vi.spyOn(SignInAttempt, "count").mockRejectedValueOnce(down);
-    const error = (await signIn(uniqueEmail("db-down"), "whatever-password").catch((e) => e)) as Error;
+    const error = (await (async () => signIn(uniqueEmail("db-down"), "whatever-password"))().catch((e: unknown) => e)) as Error;
     count.mockRestore();
     expect(error.message).toBe("unavailable");
     expect(signInMessage(error.message).text).toBe("Sign-in is briefly unavailable. Try again in a moment.");
