@@ -1,5 +1,10 @@
 import type { Instrumentation } from "next";
 
+/** Runs once when a server process starts (Next.js instrumentation hook); Node-only checks live apart. */
+export async function register() {
+  if (process.env.NEXT_RUNTIME === "nodejs") await import("@/lib/server/startup-check");
+}
+
 /**
  * Next calls onRequestError for every error it could not answer itself (a page, layout, route
  * handler or server action that threw). One log line each, with the request id the proxy set and

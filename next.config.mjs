@@ -26,8 +26,11 @@ const nextConfig = {
   experimental: {
     serverActions: { bodySizeLimit: "25mb" },
     // proxy.ts runs before API routes and buffers their bodies up to this size, cutting the rest
-    // off silently: keep it above a trail upload (20 MB file + form margin, lib/trails/pure/limits.ts).
-    proxyClientMaxBodySize: "21mb",
+    // off silently: keep it above a trail upload (20 MB file + form margin, lib/trails/pure/limits.ts)
+    // A hazard with its 4 photos of 8 MB (lib/photos/pure/limits.ts, MAX_HAZARD_BODY_BYTES) is the largest body.
+    proxyClientMaxBodySize: "33mb",
+    // forbidden() answers 403 with app/forbidden.tsx, so refused staff and admin pages are not a 200.
+    authInterrupts: true,
   },
 };
 

@@ -30,7 +30,8 @@ export default defineConfig({
   ],
   webServer: [
     {
-      command: `node_modules/.bin/next start -p ${port}`,
+      // scripts/serve.mjs is `next start` plus the socket address in X-Forwarded-For (see the file).
+      command: `node scripts/serve.mjs ${port}`,
       url: `http://localhost:${port}/api/health`,
       reuseExistingServer: false,
       timeout: 120_000,
@@ -39,7 +40,7 @@ export default defineConfig({
     },
     {
       // Same build, same environment (DATABASE_URL, NEXTAUTH_SECRET, NEXT_SERVER_ACTIONS_ENCRYPTION_KEY…).
-      command: `node_modules/.bin/next start -p ${secondPort}`,
+      command: `node scripts/serve.mjs ${secondPort}`,
       url: `http://localhost:${secondPort}/api/health`,
       reuseExistingServer: false,
       timeout: 120_000,

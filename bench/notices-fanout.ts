@@ -36,11 +36,11 @@ const messageIdOf = (raw: string) => /^Message-ID:\s*(<[^>\r\n]+>)/im.exec(raw)?
 
 async function setUp() {
   const park = await Park.create({ slug: TAG, name: "Bench Hollow (benchmark)", timeZone: "Europe/Zurich", centerLon: 8.5, centerLat: 46.8, baseElevationM: 900, summitElevationM: 1800 });
-  const ranger = await User.create({ email: `${TAG}-ranger@bench.loamcast.test`, name: "Bench Ranger", passwordHash: "x".repeat(60), disabledAt: null });
+  const ranger = await User.create({ email: `${TAG}-ranger@bench.loamcast.test`, name: "Bench Ranger", passwordHash: "x".repeat(60), disabledAt: null, emailVerifiedAt: new Date() });
   await ParkMembership.create({ parkId: park.id, userId: ranger.id, role: "ranger" });
   for (let start = 0; start < SUBSCRIBERS; start += 2000) {
     const users = await User.bulkCreate(
-      Array.from({ length: Math.min(2000, SUBSCRIBERS - start) }, (_, i) => ({ email: `${TAG}-${start + i}@bench.loamcast.test`, name: `Rider ${start + i}`, passwordHash: "x".repeat(60), disabledAt: null })),
+      Array.from({ length: Math.min(2000, SUBSCRIBERS - start) }, (_, i) => ({ email: `${TAG}-${start + i}@bench.loamcast.test`, name: `Rider ${start + i}`, passwordHash: "x".repeat(60), disabledAt: null, emailVerifiedAt: new Date() })),
       { returning: true },
     );
     await Subscription.bulkCreate(users.map((u) => ({ userId: u.id, parkId: park.id, email: u.email, trailIds: null, confirmedAt: new Date(), unsubscribedAt: null })));

@@ -1,13 +1,16 @@
 /** All models and their associations, defined in one place. Import models from here. */
+import { AccountLink } from "./account-link";
 import { AuditEvent } from "./audit-event";
 import { Hazard } from "./hazard";
 import { Invitation } from "./invitation";
+import { MailSend } from "./mail-send";
 import { Notice } from "./notice";
 import { NoticeDelivery } from "./notice-delivery";
 import { Park } from "./park";
 import { ParkMembership } from "./park-membership";
 import { ParkState } from "./park-state";
 import { Photo } from "./photo";
+import { RequestCount } from "./request-count";
 import { RideLog } from "./ride-log";
 import { Setup } from "./setup";
 import { SignInAttempt } from "./sign-in-attempt";
@@ -23,6 +26,7 @@ ParkMembership.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 User.hasMany(ParkMembership, { foreignKey: "userId", as: "memberships" });
 ParkMembership.belongsTo(User, { foreignKey: "userId", as: "user" });
 Invitation.belongsTo(Park, { foreignKey: "parkId", as: "park" });
+User.hasMany(AccountLink, { foreignKey: "userId", as: "accountLinks" });
 
 Park.hasMany(Trail, { foreignKey: "parkId", as: "trails" });
 Trail.belongsTo(Park, { foreignKey: "parkId", as: "park" });
@@ -51,15 +55,18 @@ NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
 
 export { sequelize } from "@/models/db";
 export {
+  AccountLink,
   AuditEvent,
   Hazard,
   Invitation,
+  MailSend,
   Notice,
   NoticeDelivery,
   Park,
   ParkMembership,
   ParkState,
   Photo,
+  RequestCount,
   RideLog,
   Setup,
   SignInAttempt,

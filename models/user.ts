@@ -12,6 +12,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare siteRole: CreationOptional<SiteRole>;
   declare units: CreationOptional<UnitPrefs>;
   declare disabledAt: Date | null;
+  /** When the owner opened the link mailed to this address; null until then (no sign-in). */
+  declare emailVerifiedAt: CreationOptional<Date | null>;
+  /** Sessions carry the version they were issued under; bumping it ends every earlier session. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -25,6 +29,8 @@ User.init(
     siteRole: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "rider" },
     units: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
     disabledAt: { type: DataTypes.DATE, allowNull: true },
+    emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+    sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -24,6 +24,6 @@ start_fake_smtp
 build_if_needed
 if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 say "› Loamcast on http://localhost:$PORT  (demo accounts in README.md; Ctrl-C stops everything)"
-node_modules/.bin/next start -p "$PORT" &
+node scripts/serve.mjs "$PORT" &
 CHILD_PIDS+=($!)
 wait "${CHILD_PIDS[-1]}"

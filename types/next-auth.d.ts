@@ -2,6 +2,6 @@ import "next-auth";
 
 declare module "next-auth" {
   interface Session {
-    user?: { id: string; name?: string | null; email?: string | null; image?: string | null };
+    user?: { id: string; sessionVersion?: number; name?: string | null; email?: string | null; image?: string | null };
   }
 }

@@ -1,4 +1,4 @@
-import { redirect } from "next/navigation";
+import { forbidden, redirect } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { primaryRole } from "@/lib/server/auth/permissions";
 
@@ -6,13 +6,6 @@ import { primaryRole } from "@/lib/server/auth/permissions";
 export default async function StaffLayout({ children }: { children: React.ReactNode }) {
   const actor = await getActor();
   if (!actor) redirect("/sign-in?callbackUrl=/staff");
-  if (primaryRole(actor) === "rider") {
-    return (
-      <section className="card space-y-2" data-testid="refused">
-        <h1 className="text-2xl font-bold">Staff only</h1>
-        <p>This part of Loamcast is for park managers and rangers. Ask your park manager for an invitation.</p>
-      </section>
-    );
-  }
+  if (primaryRole(actor) === "rider") forbidden(); // 403, not a 200 with a message
   return <>{children}</>;
 }

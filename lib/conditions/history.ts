@@ -22,10 +22,17 @@ export function resolveRange(query: { from?: string | null; to?: string | null }
   return { from, to };
 }
 
+/** A report outlives its author's account: a deleted account reads as this. */
+export const FORMER_STAFF = "former staff member";
+const reporterLabel = (reporter: User | null | undefined) => reporter?.name ?? FORMER_STAFF;
+
 export type HistoryRow = ReportView & { reporterName: string | null };
 
-/** A trail's reports between two dates, newest first: current revisions, or every revision for staff. */
-export async function trailReportHistory(trailId: string, range: { from: string; to: string }, allRevisions = false): Promise<HistoryRow[]> {
+/**
+ * A trail's reports between two dates, newest first: current revisions, or every revision for staff.
+ * Who wrote each report (name and user id) is for the park's staff only (`staffView`).
+ */
+export async function trailReportHistory(trailId: string, range: { from: string; to: string }, allRevisions = false, staffView = false): Promise<HistoryRow[]> {
   const rows = await TrailReport.findAll({
     where: { trailId, reportDate: { [Op.between]: [range.from, range.to] }, ...(allRevisions ? {} : { isCurrent: true }) },
     include: [{ model: User, as: "reporter", attributes: ["name"] }],
@@ -34,7 +41,9 @@ export async function trailReportHistory(trailId: string, range: { from: string;
       ["revision", "DESC"],
     ],
   });
-  return rows.map((r) => ({ ...reportView(r), reporterName: (r as TrailReport & { reporter?: User }).reporter?.name ?? null }));
+  return rows.map((r) =>
+    staffView ? { ...reportView(r), reporterName: reporterLabel((r as TrailReport & { reporter?: User }).reporter) } : { ...reportView(r), reporterId: null, reporterName: null },
+  );
 }
 
 export type ExportRow = HistoryRow & { trailName: string; difficulty: string };
@@ -54,6 +63,6 @@ export async function parkReportsForExport(parkId: string, range: { from: string
   });
   return rows.map((r) => {
     const withJoins = r as TrailReport & { reporter?: User; trail: Trail };
-    return { ...reportView(r), reporterName: withJoins.reporter?.name ?? null, trailName: withJoins.trail.name, difficulty: withJoins.trail.difficulty };
+    return { ...reportView(r), reporterName: reporterLabel(withJoins.reporter), trailName: withJoins.trail.name, difficulty: withJoins.trail.difficulty };
   });
 }

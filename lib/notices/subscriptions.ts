@@ -4,6 +4,7 @@ import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { env } from "@/lib/server/env";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
+import { claimMailToRecipient } from "@/lib/server/auth/throttle";
 import { headerSafe, sendMail } from "@/lib/server/mail/transport";
 import { linkToken, subscriptionFields } from "@/lib/notices/pure/schemas";
 import { Park, Subscription, Trail } from "@/models";
@@ -69,10 +70,14 @@ export async function saveSubscription(actor: Actor | null, input: unknown) {
   return { subscription: subscriptionView(sub, park), created: !existing, confirmationSent };
 }
 
-/** Mails the confirmation link unless one went out recently; false when not sent. */
+/**
+ * Mails the confirmation link unless one went out recently for this row, or the address has had
+ * its hourly share already (counted per recipient, so deleting and subscribing again resets
+ * nothing; ASVS v5.0.0 2.4.1); false when not sent.
+ */
 async function mailConfirmationLink(sub: Subscription, park: Park): Promise<boolean> {
   const recent = sub.confirmationSentAt && Date.now() - sub.confirmationSentAt.getTime() < CONFIRMATION_RESEND_MINUTES * 60_000;
-  if (recent) return false;
+  if (recent || !(await claimMailToRecipient(sub.email, "subscription-confirm"))) return false;
   const link = subscriptionLinks().confirm(confirmToken(sub.id, sub.email));
   try {
     await sendMail({

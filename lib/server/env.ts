@@ -6,12 +6,15 @@ import { DEFAULT_DATABASE_URL } from "@/models/database-url";
  * The environment, read and validated once. Defaults let `npm start` and `npm test`
  * run with no .env at all; scripts/start.sh exports the values it generates.
  */
+/** The development fallback: refused in production (below), where a real secret must be set. */
+const DEV_SECRET = "dev-only-secret-change-me-0123456789";
+
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z.string().url().default(DEFAULT_DATABASE_URL),
   DATABASE_REPLICA_URLS: z.string().optional(),
   APP_URL: z.string().url().default("http://localhost:3000"),
-  NEXTAUTH_SECRET: z.string().min(16).default("dev-only-secret-change-me-0123456789"),
+  NEXTAUTH_SECRET: z.string().min(16).default(DEV_SECRET),
   TOKEN_SECRET: z.string().min(16).optional(),
   SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
   FAKE_SMTP_CONTROL_URL: z.string().url().optional(),
@@ -20,15 +23,26 @@ const envSchema = z.object({
   MAP_STYLE_URL: z.string().url().optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SECURE_COOKIES: z.enum(["true", "false"]).optional(),
+  /** Reverse proxies in front of the app that append to X-Forwarded-For (0: the socket peer is the client). */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type Env = z.infer<typeof envSchema>;
+
+/** Production must not run with the development secret or none (anyone could forge a session). */
+const productionSafe = envSchema.superRefine((value, ctx) => {
+  if (value.NODE_ENV === "production" && value.NEXTAUTH_SECRET === DEV_SECRET) {
+    ctx.addIssue({ code: "custom", path: ["NEXTAUTH_SECRET"], message: "set a secret of your own in production (see .env.example)" });
+  }
+});
 
 let cached: Env | undefined;
 
 export function env(): Env {
   if (!cached) {
-    const parsed = envSchema.safeParse(process.env);
+    // An empty value counts as unset, so `NEXTAUTH_SECRET=` falls to the default and is refused in production.
+    const present = Object.fromEntries(Object.entries(process.env).filter(([, v]) => v !== ""));
+    const parsed = productionSafe.safeParse(present);
     if (!parsed.success) {
       const problems = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
       throw new Error(`Invalid environment: ${problems}`);

@@ -14,12 +14,16 @@ export function neutraliseFormula(value: string): string {
 export function csvCell(value: string | number | null | undefined): string {
   if (value === null || value === undefined) return "";
   const text = typeof value === "number" ? String(value) : neutraliseFormula(value);
-  return /[",\r\n]/.test(text) ? `"${text.replaceAll('"', '""')}"` : text;
+  // A semicolon or a tab is quoted too: spreadsheets in many locales split on them when opening a file.
+  return /[",;\t\r\n]/.test(text) ? `"${text.replaceAll('"', '""')}"` : text;
 }
 
 export function csvRecord(values: (string | number | null | undefined)[]): string {
   return values.map(csvCell).join(",");
 }
+
+/** Leads a downloaded file so spreadsheets read it as UTF-8 and show accents (RFC 4180 leaves the charset to the MIME type; Excel reads the BOM). */
+export const UTF8_BOM = "\uFEFF";
 
 /** A whole file: header, then one record per row, each ended by CRLF. */
 export function toCsv(header: string[], rows: (string | number | null | undefined)[][]): string {

@@ -1,14 +1,14 @@
 import "server-only";
 import { Op } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
-import { hashPassword, passwordSchema } from "@/lib/server/auth/password";
+import { hashPassword, passwordSchema, verifyPassword } from "@/lib/server/auth/password";
 import { hashToken, newToken } from "@/lib/server/auth/tokens";
 import { env } from "@/lib/server/env";
 import { AppError } from "@/lib/shared/errors";
 import { sendMail } from "@/lib/server/mail/transport";
 import { acceptInvitationFields, invitationFields } from "@/lib/accounts/pure/schemas";
-import { recordAudit } from "@/lib/audit/record";
 import { Invitation, Park, ParkMembership, User, sequelize } from "@/models";
+import { recordAudit } from "@/lib/audit/record";
 
 const INVITATION_DAYS = 7;
 
@@ -45,17 +45,35 @@ export async function findOpenInvitation(token: string) {
   return invitation as (Invitation & { park?: Park }) | null;
 }
 
+/** What the invitation page must ask for: nothing more than a name for a new address. */
+export type InviteeAccount = "none" | "unproven" | "proven";
+
+export async function inviteeAccount(email: string): Promise<InviteeAccount> {
+  const user = await User.findOne({ where: { email }, attributes: ["emailVerifiedAt"], useMaster: true });
+  return !user ? "none" : user.emailVerifiedAt ? "proven" : "unproven";
+}
+
 /**
- * Accepting creates the account (or uses the existing one with that address) and the
- * membership, in one transaction; a used, expired or tampered token changes nothing.
+ * Accepting creates the account (or uses the existing one with that address) and the membership,
+ * in one transaction; a used, expired or tampered token changes nothing. The link proves the
+ * address (it was mailed there), but it never speaks for an account someone already proved: that
+ * account's owner must be signed in or give its password (ASVS v5.0.0 6.4.x, 8.2.2). An account
+ * that was never proven is claimed by the link's holder: new name and password, and every earlier
+ * session ends.
  */
-export async function acceptInvitation(input: unknown) {
+export async function acceptInvitation(input: unknown, actor: Actor | null = null) {
   const fields = acceptInvitationFields.parse(input);
   const invitation = await findOpenInvitation(fields.token);
   if (!invitation) throw new AppError(400, "This invitation link is not valid any more. Ask your manager for a new one.", "token");
   const existing = await User.findOne({ where: { email: invitation.email }, useMaster: true });
   let passwordHash: string | null = null;
-  if (!existing) {
+  if (existing?.emailVerifiedAt) {
+    const signedInAsOwner = actor?.id === existing.id;
+    if (!signedInAsOwner && !(fields.password && (await verifyPassword(fields.password, existing.passwordHash)))) {
+      await recordAudit({ parkId: invitation.parkId, actorId: actor?.id ?? null, action: "staff.join.refused", subjectType: "invitation", subjectId: invitation.id });
+      throw new AppError(400, "This address already has an account: sign in as that account, or enter its password, to join.", "password");
+    }
+  } else {
     const password = passwordSchema.safeParse(fields.password);
     if (!password.success) throw new AppError(400, password.error.issues[0].message, "password");
     passwordHash = await hashPassword(password.data);
@@ -66,13 +84,20 @@ export async function acceptInvitation(input: unknown) {
       { where: { id: invitation.id, acceptedAt: null }, transaction },
     );
     if (claimed !== 1) throw new AppError(409, "This invitation was already used.");
-    const user =
-      existing ??
-      (await User.create({ email: invitation.email, name: fields.name, passwordHash: passwordHash!, siteRole: "rider", disabledAt: null }, { transaction }));
+    let user: User;
+    if (existing?.emailVerifiedAt) user = existing;
+    else if (existing) {
+      user = await existing.update({ name: fields.name, passwordHash: passwordHash!, emailVerifiedAt: new Date(), sessionVersion: existing.sessionVersion + 1 }, { transaction });
+    } else {
+      user = await User.create(
+        { email: invitation.email, name: fields.name, passwordHash: passwordHash!, siteRole: "rider", disabledAt: null, emailVerifiedAt: new Date() },
+        { transaction },
+      );
+    }
     const membership = await ParkMembership.findOne({ where: { parkId: invitation.parkId, userId: user.id }, transaction });
     if (membership) await membership.update({ role: invitation.role }, { transaction });
     else await ParkMembership.create({ parkId: invitation.parkId, userId: user.id, role: invitation.role }, { transaction });
-    await recordAudit({ parkId: invitation.parkId, actorId: user.id, action: "staff.join", subjectType: "invitation", subjectId: invitation.id, data: { role: invitation.role } }, transaction);
-    return { userId: user.id, email: user.email, role: invitation.role, parkSlug: invitation.park?.slug, existingAccount: Boolean(existing) };
+    await recordAudit({ parkId: invitation.parkId, actorId: user.id, action: "staff.join", subjectType: "invitation", subjectId: invitation.id, data: { role: invitation.role, claimedUnproven: Boolean(existing && !existing.emailVerifiedAt) } }, transaction);
+    return { userId: user.id, email: user.email, role: invitation.role, parkSlug: invitation.park?.slug, existingAccount: Boolean(existing?.emailVerifiedAt) };
   });
 }

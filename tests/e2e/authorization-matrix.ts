@@ -66,7 +66,20 @@ export const MATRIX: MatrixRow[] = [
   { method: "POST", route: "/api/pressure", variant: "rider@'s saved setup", expect: ownerOnly(200), call: (fx) => ({ path: "/api/pressure", data: { setupId: fx.setupId } }) },
 
   // Accounts and next-auth's own endpoints.
-  { method: "POST", route: "/api/account", expect: everyone(201), call: (_fx, c) => ({ path: "/api/account", data: { name: "Matrix Newcomer", email: `${unique(`matrix-${c}`)}@tests.loamcast.test`, password: "switchback-dawn-patrol-8" } }) },
+  { method: "POST", route: "/api/account", expect: everyone(202), call: (_fx, c) => ({ path: "/api/account", data: { name: "Matrix Newcomer", email: `${unique(`matrix-${c}`)}@tests.loamcast.test`, password: "switchback-dawn-patrol-8" } }) },
+  // Links from account mails: a forged token changes nothing, whoever sends it.
+  { method: "POST", route: "/api/account/prove-address", variant: "forged token", expect: everyone(400), call: () => ({ path: "/api/account/prove-address", data: { token: FORGED_TOKEN } }) },
+  { method: "POST", route: "/api/account/prove-address/resend", expect: everyone(202), call: (_fx, c) => ({ path: "/api/account/prove-address/resend", data: { email: `${unique(`resend-${c}`)}@tests.loamcast.test` } }) },
+  { method: "POST", route: "/api/account/password-reset", expect: everyone(202), call: (_fx, c) => ({ path: "/api/account/password-reset", data: { email: `${unique(`reset-${c}`)}@tests.loamcast.test` } }) },
+  { method: "POST", route: "/api/account/password-reset/confirm", variant: "forged token", expect: everyone(400), call: () => ({ path: "/api/account/password-reset/confirm", data: { token: FORGED_TOKEN, password: "switchback-dawn-patrol-8" } }) },
+  { method: "POST", route: "/api/account/email/confirm", variant: "forged token", expect: everyone(400), call: () => ({ path: "/api/account/email/confirm", data: { token: FORGED_TOKEN } }) },
+  // The caller's own account. The demo callers must survive the walk, so each change is sent with a
+  // wrong password (400 after the sign-in check); the successes are in tests/e2e/account.spec.ts.
+  { method: "GET", route: "/api/me/export", expect: signedIn(200), call: () => ({ path: "/api/me/export" }) },
+  { method: "POST", route: "/api/me/password", variant: "wrong current password", expect: signedIn(400), call: () => ({ path: "/api/me/password", data: { currentPassword: "not-the-password", newPassword: "switchback-dawn-patrol-8" } }) },
+  { method: "POST", route: "/api/me/email", variant: "wrong password", expect: signedIn(400), call: (_fx, c) => ({ path: "/api/me/email", data: { newEmail: `${unique(`moved-${c}`)}@tests.loamcast.test`, password: "not-the-password" } }) },
+  { method: "POST", route: "/api/me/sign-out-everywhere", variant: "wrong password", expect: signedIn(400), call: () => ({ path: "/api/me/sign-out-everywhere", data: { password: "not-the-password" } }) },
+  { method: "DELETE", route: "/api/me", variant: "wrong password", expect: signedIn(400), call: () => ({ path: "/api/me", data: { password: "not-the-password" } }) },
   { method: "GET", route: "/api/auth/[...nextauth]", expect: everyone(200), call: () => ({ path: "/api/auth/session" }) },
   {
     method: "POST",

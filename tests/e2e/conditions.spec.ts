@@ -181,7 +181,9 @@ test("the API: board public, writes need staff of the park, CSV for staff", asyn
   const csv = await page.request.get("/api/parks/harrow-ridge/reports.csv");
   expect(csv.status()).toBe(200);
   expect(csv.headers()["content-type"]).toContain("text/csv");
-  expect((await csv.text()).split("\r\n")[0]).toBe("date,trail,difficulty,status,reason,surfaces,berms,jumps,wood,note,reporter,inspected_at,revision");
+  // A UTF-8 byte-order mark first, so spreadsheets show accents (issue #12 finding 7).
+  expect([...(await csv.body()).subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+  expect((await csv.text()).replace(/^\uFEFF/, "").split("\r\n")[0]).toBe("date,trail,difficulty,status,reason,surfaces,berms,jumps,wood,note,reporter,inspected_at,revision");
   const bad = await page.request.post(`/api/trails/${trailId}/reports`, { data: { status: "closed", baseRevision: 0 } });
   expect(bad.status()).toBe(400);
   expect((await bad.json()).error).toEqual({ message: "Give a reason when a trail is closed.", field: "reason" });

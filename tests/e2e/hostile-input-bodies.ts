@@ -101,4 +101,14 @@ export const BODY_CASES: HostileCase[] = [
   { name: "10,000 trail ids for today's pressure", as: "anonymous", method: "POST", path: () => "/api/pressure", json: () => ({ ...valid, name: undefined, today: { parkSlug: "harrow-ridge", trailIds: FAKE_UUIDS(10_000) } }), expect: 413 },
   { name: "2,000 trails in one sweep (500 at most)", as: "parkRanger", method: "POST", path: () => "/api/parks/harrow-ridge/sweep", json: () => ({ entries: FAKE_UUIDS(2_000).map((trailId) => ({ trailId, unchanged: true })) }), expect: 400 },
   { name: "101 trails in one notice (100 at most)", as: "manager", method: "POST", path: () => "/api/parks/harrow-ridge/notices", json: () => ({ ...notice, trailIds: FAKE_UUIDS(101) }), expect: 400, field: "trailIds" },
+
+  // Account routes: every field named, nothing taken that the route does not know.
+  { name: "sign-up: siteRole smuggled in", as: "anonymous", method: "POST", path: () => "/api/account", json: () => ({ name: "Hostile", email: "hostile-signup@tests.loamcast.test", password: "switchback-dawn-patrol-8", siteRole: "admin" }), expect: 400 },
+  { name: "sign-up: a password over bcrypt's 72 bytes", as: "anonymous", method: "POST", path: () => "/api/account", json: () => ({ name: "Hostile", email: "hostile-long@tests.loamcast.test", password: "é".repeat(40) }), expect: 400, field: "password" },
+  { name: "reset request: not an e-mail", as: "anonymous", method: "POST", path: () => "/api/account/password-reset", json: () => ({ email: "not an address" }), expect: 400, field: "email" },
+  { name: "reset request: CR/LF and a Bcc header", as: "anonymous", method: "POST", path: () => "/api/account/password-reset", json: () => ({ email: "a@tests.loamcast.test\r\nBcc: all@evil.example" }), expect: 400, field: "email" },
+  { name: "reset confirm: a 5,000-character token", as: "anonymous", method: "POST", path: () => "/api/account/password-reset/confirm", json: () => ({ token: "x".repeat(5000), password: "switchback-dawn-patrol-8" }), expect: 400, field: "token" },
+  { name: "reset confirm: a userId smuggled in", as: "anonymous", method: "POST", path: () => "/api/account/password-reset/confirm", json: () => ({ token: "x".repeat(43), password: "switchback-dawn-patrol-8", userId: "00000000-0000-4000-8000-000000000005" }), expect: 400 },
+  { name: "change password: a number for the new password", as: "rider", method: "POST", path: () => "/api/me/password", json: () => ({ currentPassword: "x", newPassword: 12345678 }), expect: 400, field: "newPassword" },
+  { name: "delete account: no password", as: "rider", method: "DELETE", path: () => "/api/me", json: () => ({}), expect: 400, field: "password" },
 ];

@@ -1,3 +1,4 @@
+import { expect, type Page } from "@playwright/test";
 /** Reading what the app sent, from the fake SMTP server's control API (FAKE_SMTP_CONTROL_URL, set by npm test). */
 export type Captured = { to: string[]; raw: string };
 
@@ -33,4 +34,26 @@ function decodeQuotedPrintable(text: string): string {
 export function htmlPartOf(raw: string): string | null {
   const part = /Content-Type: text\/html[^\r\n]*\r?\nContent-Transfer-Encoding: quoted-printable\r?\n\r?\n([\s\S]*?)\r?\n--/.exec(raw);
   return part ? decodeQuotedPrintable(part[1]) : null;
+}
+
+/** The newest link to `path` (…?token=) mailed to `address`; polls briefly, as mail can lag the answer. */
+export async function newestLinkTo(address: string, path: string): Promise<string> {
+  for (let i = 0; i < 20; i++) {
+    const link = (await mailTo(address)).map((m) => linkIn(m.raw, path)).filter(Boolean).at(-1);
+    if (link) return link;
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`no ${path} link was mailed to ${address}`);
+}
+
+/**
+ * A new rider's account, made as a person would: sign up through the API the form posts to, open
+ * the link from the captured mail, press the button. Leaves `page` on the sign-in page.
+ */
+export async function signUpAndProve(page: Page, rider: { name: string; email: string; password: string }) {
+  const response = await page.request.post("/api/account", { data: rider });
+  expect(response.status()).toBe(202);
+  await page.goto(await newestLinkTo(rider.email, "/account/prove"));
+  await page.getByRole("button", { name: "This is my address" }).click();
+  await expect(page).toHaveURL(/\/sign-in\?proven=1/);
 }

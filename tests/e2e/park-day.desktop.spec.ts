@@ -4,7 +4,7 @@ import { promisify } from "node:util";
 import { expect, test, type Browser, type Locator, type Page } from "@playwright/test";
 import sharp from "sharp";
 import { demo, shot, signInAs } from "./helpers";
-import { htmlPartOf, linkIn, mailTo, readable } from "./mail-helpers";
+import { htmlPartOf, linkIn, mailTo, readable, signUpAndProve } from "./mail-helpers";
 
 /**
  * The park day, end to end, on a phone and on a desktop (the file name makes both projects run it):
@@ -124,9 +124,8 @@ test("the park day: upload, invite, sweep with a closure and a hazard, board and
   await expect(ranger.getByTestId("hazard-result")).toHaveText("Hazard pinned. It is on the public board now.");
 
   // 3. A rider (new account) checks the board and the map before driving up.
-  const signup = await manager.request.post("/api/account", { data: { name: "Remy Lowgear", email: riderEmail, password: riderPassword } });
-  expect(signup.status()).toBe(201);
   const rider = await newPage(browser);
+  await signUpAndProve(rider, { name: "Remy Lowgear", email: riderEmail, password: riderPassword });
   await signInAs(rider, riderEmail, riderPassword, `/parks/${PARK}`);
   await rider.goto(`/parks/${PARK}`);
   const closedCard = boardCard(rider, trailName);

@@ -2,6 +2,7 @@
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { signInMessage } from "@/lib/accounts/pure/sign-in-refusals";
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   const router = useRouter();
@@ -13,10 +14,10 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     const form = new FormData(event.currentTarget);
     setBusy(true);
     setError(null);
-    const result = await signIn("credentials", { email: form.get("email"), password: form.get("password"), redirect: false });
+    const result = await signIn("credentials", { email: form.get("email"), password: form.get("password"), redirect: false }).catch(() => null);
     setBusy(false);
-    if (!result || result.error) {
-      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : "That e-mail and password do not match an account.");
+    if (!result || result.error || !result.ok) {
+      setError(signInMessage(result ? result.error : "unavailable").text);
       return;
     }
     router.push(callbackUrl);

@@ -11,6 +11,7 @@ const MY_LINKS = [
   { href: "/me/rides", label: "My rides", text: "Log how it felt; get one change for next time." },
   { href: "/me/subscriptions", label: "My notices", text: "E-mails when trails close or reopen." },
   { href: "/pressure", label: "Today's pressure", text: "The band per wheel for today's trails." },
+  { href: "/me/account", label: "Account and sign-in", text: "Password, e-mail, sign out everywhere, your data." },
 ];
 
 export default async function MyAccountPage() {

@@ -3,18 +3,18 @@
  * screen and the seeder all send. Strict objects: an unknown or misspelt key is refused.
  */
 import { z } from "zod";
+import { noteCheck } from "@/lib/shared/text";
 import { FEATURE_STATES, PARK_STATES, STATUSES, SURFACES } from "@/lib/conditions/pure/vocabulary";
 
 export { FEATURE_STATES, PARK_STATES, STATUSES, SURFACES };
 
-// Control characters other than line breaks and tabs have no place in a note.
-const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
+// Control characters other than line breaks and tabs, and text-direction overrides, have no place in a note (lib/shared/text.ts).
 const text = (label: string, max: number) =>
   z
     .string({ error: `${label} must be text.` })
     .trim()
     .max(max, { error: `${label}: use at most ${max} characters.` })
-    .refine((s) => !CONTROL.test(s), { error: `${label} contains characters that are not allowed.` });
+    .superRefine(noteCheck(label));
 
 export const statusSchema = z.enum(STATUSES, { error: "Status must be open, caution or closed." });
 export const surfaceSchema = z.enum(SURFACES, { error: `Surface must be one of: ${SURFACES.join(", ")}.` });

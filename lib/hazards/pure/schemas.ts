@@ -3,10 +3,10 @@
  * pass through the same schema with z.coerce for the numbers.
  */
 import { z } from "zod";
+import { noteCheck } from "@/lib/shared/text";
 
 export const HAZARD_KINDS = ["fallen-tree", "washout", "damaged-feature", "wet-wooden-feature", "machinery", "other"] as const;
 
-const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 const emptyToUndefined = (v: unknown) => (v === "" || v === null ? undefined : v);
 
 const coordinate = (label: string, min: number, max: number) =>
@@ -25,7 +25,7 @@ export const hazardNoteSchema = z
   .string()
   .trim()
   .max(1000, { error: "Note: use at most 1000 characters." })
-  .refine((s) => !CONTROL.test(s), { error: "The note contains characters that are not allowed." });
+  .superRefine(noteCheck("The note")); // controls and text-direction overrides (lib/shared/text.ts)
 
 /**
  * Where and what. A point is given either as lon/lat, or as a trail plus a distance along

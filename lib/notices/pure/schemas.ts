@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { noteCheck } from "@/lib/shared/text";
 
 /** Notices and subscriptions: the shapes forms, actions and route handlers all accept. */
 export const NOTICE_KINDS = ["closure", "reopening", "advisory"] as const;
@@ -8,7 +9,6 @@ export const MESSAGE_MAX = 2000;
 export const MAX_TRAILS_PER_NOTICE = 100;
 
 // Control characters other than tab, LF and CR have no place in a message riders read.
-const STRAY_CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
 const kind = z.enum(NOTICE_KINDS, { message: "Choose closure, reopening or advisory." });
 
@@ -29,7 +29,7 @@ export const noticeFields = z
       .trim()
       .min(1, "Write the message riders will read.")
       .max(MESSAGE_MAX, `Keep the message under ${MESSAGE_MAX} characters.`)
-      .refine((text) => !STRAY_CONTROL.test(text), "The message contains control characters."),
+      .superRefine(noteCheck("The message")),
     closedUntil: z.iso
       .datetime({ offset: true, message: "Give 'closed until' as a date and time." })
       .transform((text) => new Date(text))

@@ -31,6 +31,7 @@ export const ACTIONS = {
   "own:ride-logs": "owner",
   "own:subscriptions": "owner",
   "own:units": "owner",
+  "own:account": "owner",
   "dev:mail": "site",
 } as const;
 export type Action = keyof typeof ACTIONS;

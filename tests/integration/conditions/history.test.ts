@@ -22,9 +22,12 @@ describe("report history, export and activity", () => {
     await postTrailReport(ranger, b.id, { status: "caution", reason: "Soft, rutted landings", surfaces: ["damp"] }, { now: at("2026-12-01", "06:45") });
 
     const range = { from: "2026-12-01", to: "2026-12-01" };
-    const current = await trailReportHistory(a.id, range);
+    const current = await trailReportHistory(a.id, range, false, true);
     expect(current.map((r) => [r.date, r.revision, r.status])).toEqual([["2026-12-01", 2, "closed"]]);
     expect(current[0].reporterName).toBe("Test Person");
+    // The public history names nobody (issue #12 finding 7): no reporter name, no user id.
+    const published = await trailReportHistory(a.id, range);
+    expect(published.map((r) => [r.reporterName, r.reporterId])).toEqual([[null, null]]);
     const every = await trailReportHistory(a.id, range, true);
     expect(every.map((r) => [r.revision, r.isCurrent])).toEqual([
       [2, true],

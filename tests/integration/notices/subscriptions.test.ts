@@ -56,6 +56,20 @@ describe("subscribing (double opt-in)", () => {
     expect((await sendNotice(ranger, park.id, { kind: "advisory", message: "Not asked for." })).recipientCount).toBe(0);
   });
 
+  it("subscribing, deleting and subscribing again mails one address at most 3 confirmations an hour (issue #12 finding 6, ASVS v5.0.0 2.4.1)", async () => {
+    const { park } = await parkWithStaff();
+    const rider = await newRider();
+    const sent: boolean[] = [];
+    for (let i = 0; i < 6; i++) {
+      const saved = await saveSubscription(rider, { parkSlug: park.slug, kinds: ["closure"] });
+      sent.push(saved.confirmationSent);
+      await removeSubscription(rider, saved.subscription.id);
+    }
+    // Before, every delete reset the row's 10-minute limit and all six were mailed.
+    expect(sent).toEqual([true, true, true, false, false, false]);
+    expect((await capturedMessages()).filter((m) => m.to.includes(rider.email))).toHaveLength(3);
+  });
+
   it("asking again while pending does not mail another link within ten minutes", async () => {
     const { park } = await parkWithStaff();
     const rider = await newRider();

@@ -21,6 +21,8 @@ vi.mock("@/lib/server/auth/actor", async (importOriginal) => {
   return { ...actual, getActor: async () => (session.userId ? actual.loadActor(session.userId) : null) };
 });
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
+// The request's headers (the sign-up throttle reads the caller's address): a new documentation-range address per call.
+vi.mock("next/headers", () => ({ headers: async () => new Headers({ "x-forwarded-for": `192.0.2.${Math.floor(Math.random() * 254) + 1}` }) }));
 // Next's redirect() ends an action by throwing; so does this stand-in, with the target.
 class Redirected extends Error {}
 vi.mock("next/navigation", () => ({ redirect: (url: string) => { throw new Redirected(url); } }));

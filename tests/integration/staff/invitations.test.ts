@@ -1,5 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
+import { signUpRider } from "@/lib/accounts/sign-up";
 import { loadActor } from "@/lib/server/auth/actor";
+import { verifyPassword } from "@/lib/server/auth/password";
 import { AppError } from "@/lib/shared/errors";
 import { acceptInvitation, inviteStaff } from "@/lib/staff/invitations";
 import { ParkMembership, User, sequelize } from "@/models";
@@ -75,5 +77,46 @@ describe("staff invitations", () => {
     const actor = await loadActor(user.id);
     const error = await inviteStaff(actor, park.id, { email: uniqueEmail(), role: "ranger" }).catch((e) => e);
     expect((error as AppError).status).toBe(403);
+  });
+});
+
+describe("an invitation never hands a role to someone else's account (issue #12 finding 1)", () => {
+  // ASVS v5.0.0 6.4.x / 8.2.2: the link proves the address, not the right to an existing account.
+  it("an attacker's unproven sign-up for the invitee's address is taken over: new password, earlier sessions end", async () => {
+    const { park, actor } = await managerOfNewPark();
+    const email = uniqueEmail("squatted");
+    await signUpRider({ name: "Mallory", email, password: "attacker-owns-this-9" }, "198.51.100.66");
+    const squatter = (await User.findOne({ where: { email } }))!;
+    expect(squatter.emailVerifiedAt).toBeNull();
+    const token = (await inviteStaff(actor, park.id, { email, role: "ranger" })).link.split("/invitations/")[1];
+    // Before the fix the real invitee joined with no password and the role landed on Mallory's account.
+    await expect(acceptInvitation({ token, name: "Real Invitee", password: "" })).rejects.toThrow(/at least 8/);
+    await acceptInvitation({ token, name: "Real Invitee", password: "the-real-invitee-7" });
+    const claimed = (await User.findByPk(squatter.id))!;
+    expect(claimed.name).toBe("Real Invitee");
+    expect(claimed.emailVerifiedAt).not.toBeNull();
+    expect(claimed.sessionVersion).toBe(squatter.sessionVersion + 1);
+    expect(await verifyPassword("attacker-owns-this-9", claimed.passwordHash)).toBe(false);
+    expect(await verifyPassword("the-real-invitee-7", claimed.passwordHash)).toBe(true);
+  });
+
+  it("a proven account joins only when signed in as it or with its password; the link alone is refused", async () => {
+    const { park, actor } = await managerOfNewPark();
+    const owner = await createUser({ password: "owner-knows-this-5" });
+    const token = (await inviteStaff(actor, park.id, { email: owner.email, role: "manager" })).link.split("/invitations/")[1];
+    const refused = await acceptInvitation({ token, name: "Whoever", password: "" }).catch((e) => e);
+    expect((refused as AppError).status).toBe(400);
+    await expect(acceptInvitation({ token, name: "Whoever", password: "not-the-password-1" }, await loadActor((await createUser()).id))).rejects.toThrow(/already has an account/);
+    expect(await ParkMembership.count({ where: { parkId: park.id, userId: owner.id } })).toBe(0);
+    // Signed in as the owner: no password needed.
+    await expect(acceptInvitation({ token, name: "Owner", password: "" }, await loadActor(owner.id))).resolves.toMatchObject({ role: "manager", existingAccount: true });
+  });
+
+  it("an account made by an invitation link is proven by it", async () => {
+    const { park, actor } = await managerOfNewPark();
+    const email = uniqueEmail("invited-new");
+    const token = (await inviteStaff(actor, park.id, { email, role: "ranger" })).link.split("/invitations/")[1];
+    await acceptInvitation({ token, name: "New Ranger", password: "new-ranger-pass-3" });
+    expect((await User.findOne({ where: { email } }))!.emailVerifiedAt).not.toBeNull();
   });
 });

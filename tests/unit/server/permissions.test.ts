@@ -31,6 +31,7 @@ const expected: Record<Action, Record<string, boolean>> = {
   "own:ride-logs": { anonymous: false, rider: true, ranger: true, manager: true, otherRanger: true, admin: true },
   "own:subscriptions": { anonymous: false, rider: true, ranger: true, manager: true, otherRanger: true, admin: true },
   "own:units": { anonymous: false, rider: true, ranger: true, manager: true, otherRanger: true, admin: true },
+  "own:account": { anonymous: false, rider: true, ranger: true, manager: true, otherRanger: true, admin: true },
   "dev:mail": { anonymous: false, rider: false, ranger: false, manager: false, otherRanger: false, admin: true },
 };
 

@@ -14,6 +14,10 @@ describe("CSV quoting (RFC 4180 §2)", () => {
     expect(csvCell("a,b")).toBe('"a,b"');
     expect(csvCell("line\nbreak")).toBe('"line\nbreak"');
   });
+  it("quotes a semicolon or a tab as well, which locales that split on them need (issue #12 finding 7; common practice, no published source)", () => {
+    expect(csvCell("berm; drop")).toBe('"berm; drop"');
+    expect(csvCell("a\tb")).toBe('"a\tb"');
+  });
   it("ends every record, the last included, with CRLF", () => {
     expect(toCsv(["field_name", "field_name"], [["aaa", "bbb"]])).toBe("field_name,field_name\r\naaa,bbb\r\n");
   });
@@ -59,7 +63,7 @@ describe("the reports export", () => {
     const [header, record, end] = csv.split("\r\n");
     expect(header).toBe("date,trail,difficulty,status,reason,surfaces,berms,jumps,wood,note,reporter,inspected_at,revision");
     // 14:42 UTC is 06:42 PST (UTC−8, IANA tzdata).
-    expect(record).toBe(`2026-12-01,Gnarlroot,difficult,closed,'=cmd|' /C calc'!A0,wet; muddy,soft,,,"Said ""no"", twice",Rowan Tallis,06:42,2`);
+    expect(record).toBe(`2026-12-01,Gnarlroot,difficult,closed,'=cmd|' /C calc'!A0,"wet; muddy",soft,,,"Said ""no"", twice",Rowan Tallis,06:42,2`);
     expect(end).toBe("");
   });
 });

@@ -1,5 +1,5 @@
-import { findOpenInvitation } from "@/lib/staff/invitations";
-import { accountExists } from "@/lib/accounts/sign-up";
+import { getActor } from "@/lib/server/auth/actor";
+import { findOpenInvitation, inviteeAccount } from "@/lib/staff/invitations";
 import { AcceptInvitationForm } from "./accept-form";
 
 export const metadata = { title: "Join a park team" };
@@ -16,15 +16,18 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       </section>
     );
   }
-  const existing = await accountExists(invitation.email);
+  const [account, actor] = await Promise.all([inviteeAccount(invitation.email), getActor()]);
+  const signedInAsInvitee = account === "proven" && actor?.email === invitation.email;
+  const ask = account === "proven" ? (signedInAsInvitee ? "nothing" : "current-password") : "new-password";
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">Join {invitation.park?.name}</h1>
       <p>
         You were invited as <strong>{invitation.role}</strong> with the address <strong className="[overflow-wrap:anywhere]">{invitation.email}</strong>.
-        {existing && " You already have an account: after joining, sign in with your usual password."}
+        {ask === "current-password" && " That address already has an account: enter its password (or sign in as it first) to join."}
+        {ask === "nothing" && " You are signed in as that account."}
       </p>
-      <AcceptInvitationForm token={token} needsPassword={!existing} />
+      <AcceptInvitationForm token={token} ask={ask} />
     </section>
   );
 }

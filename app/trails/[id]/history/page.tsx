@@ -44,7 +44,7 @@ export default async function TrailHistoryPage({ params, searchParams }: Props) 
     rangeError = error instanceof AppError ? error.message : "Check the dates.";
     range = resolveRange({}, park);
   }
-  const [monthRows, rows] = await Promise.all([trailReportHistory(trail.id, { from: `${month}-01`, to: monthEnd }), trailReportHistory(trail.id, range, allRevisions)]);
+  const [monthRows, rows] = await Promise.all([trailReportHistory(trail.id, { from: `${month}-01`, to: monthEnd }), trailReportHistory(trail.id, range, allRevisions, isStaff)]);
   const statusByDate = new Map(monthRows.map((r) => [r.date, r.status]));
   const base = `/trails/${trail.id}/history`;
   const keep = (extra: Record<string, string>) => `${base}?${new URLSearchParams({ ...(query.from ? { from: query.from } : {}), ...(query.to ? { to: query.to } : {}), month, ...extra })}`;

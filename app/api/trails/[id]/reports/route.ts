@@ -1,8 +1,8 @@
-// GET /api/trails/{id}/reports?from=&to=[&revisions=all]: a trail's report history (public; every revision for staff).
+// GET /api/trails/{id}/reports?from=&to=[&revisions=all]: a trail's report history (public; reporters and every revision for staff).
 // POST /api/trails/{id}/reports: staff of the trail's park post a report (a new revision).
 import { readJson } from "@/lib/server/api/body";
 import { handler } from "@/lib/server/api/handler";
-import { authorize } from "@/lib/server/auth/permissions";
+import { authorize, can } from "@/lib/server/auth/permissions";
 import { postTrailReport, loadTrailWithPark } from "@/lib/conditions/write-report";
 import { resolveRange, trailReportHistory } from "@/lib/conditions/history";
 
@@ -13,8 +13,9 @@ export const GET = handler<{ id: string }>(async ({ request, params, actor }) =>
   const query = new URL(request.url).searchParams;
   const allRevisions = query.get("revisions") === "all";
   if (allRevisions) authorize(actor, "audit:read", { parkId: park.id });
+  const staffView = can(actor, "audit:read", { parkId: park.id });
   const range = resolveRange({ from: query.get("from"), to: query.get("to") }, park);
-  const reports = await trailReportHistory(trail.id, range, allRevisions);
+  const reports = await trailReportHistory(trail.id, range, allRevisions, staffView);
   return Response.json({ trail: { id: trail.id, name: trail.name, park: park.slug }, ...range, reports });
 });
 

@@ -1,4 +1,5 @@
-export default function Loading() {
+/** The skeleton every loading.tsx shows while a page reads its data. */
+export function LoadingSkeleton() {
   return (
     <div aria-busy="true" aria-live="polite" className="space-y-3">
       <span className="sr-only">Loading…</span>
