@@ -5,6 +5,7 @@ import { Invitation } from "./invitation";
 import { Notice } from "./notice";
 import { NoticeDelivery } from "./notice-delivery";
 import { Park } from "./park";
+import { ParkLayerVersion } from "./park-layer-version";
 import { ParkMembership } from "./park-membership";
 import { ParkState } from "./park-state";
 import { Photo } from "./photo";
@@ -23,6 +24,8 @@ ParkMembership.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 User.hasMany(ParkMembership, { foreignKey: "userId", as: "memberships" });
 ParkMembership.belongsTo(User, { foreignKey: "userId", as: "user" });
 Invitation.belongsTo(Park, { foreignKey: "parkId", as: "park" });
+Invitation.belongsTo(User, { foreignKey: "invitedBy", as: "inviter" });
+Park.hasMany(ParkLayerVersion, { foreignKey: "parkId", as: "layerVersions" });
 
 Park.hasMany(Trail, { foreignKey: "parkId", as: "trails" });
 Trail.belongsTo(Park, { foreignKey: "parkId", as: "park" });
@@ -57,6 +60,7 @@ export {
   Notice,
   NoticeDelivery,
   Park,
+  ParkLayerVersion,
   ParkMembership,
   ParkState,
   Photo,
