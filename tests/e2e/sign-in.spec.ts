@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { demo, signInAs, shot } from "./helpers";
 
 const navFor: Record<string, string[]> = {
-  admin: ["Parks", "Tyre pressure", "My bike", "Staff desk", "Sent mail"],
+  admin: ["Parks", "Tyre pressure", "My bike", "Staff desk", "All parks", "Sent mail"],
   manager: ["Parks", "Tyre pressure", "My bike", "Staff desk"],
   ranger: ["Parks", "Tyre pressure", "My bike", "Staff desk"],
   rider: ["Parks", "Tyre pressure", "My bike"],

@@ -12,8 +12,11 @@ export const SLUG_PATTERN = /^[a-z0-9-]{3,60}$/;
 export const TIME_ZONES: readonly string[] = [...Intl.supportedValuesOf("timeZone"), "UTC"];
 const isIanaZone = (zone: string) => TIME_ZONES.includes(zone);
 
+/** A number sent as JSON or typed in a form; blank is missing, never zero. */
+const numberOf = (number: z.ZodNumber) => z.preprocess((v) => (typeof v === "string" ? (v.trim() === "" ? undefined : Number(v)) : v), number);
+
 const elevation = (label: string) =>
-  z.coerce.number({ message: `Enter the ${label} in metres.` }).int(`Round the ${label} to whole metres.`).min(-450, `The ${label} is below any land.`).max(9000, `The ${label} is above any summit.`);
+  numberOf(z.number({ message: `Enter the ${label} in metres.` }).int(`Round the ${label} to whole metres.`).min(-450, `The ${label} is below any land.`).max(9000, `The ${label} is above any summit.`));
 
 const optionalText = <T extends z.ZodType<string>>(schema: T) =>
   z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? null : v), schema.nullable().optional());
@@ -24,8 +27,8 @@ export const parkFieldShape = {
   timeZone: z.string().trim().refine(isIanaZone, "Choose an IANA time zone, such as Europe/Zurich or America/Denver."),
   location: z
     .object({
-      lon: z.coerce.number({ message: "Enter the longitude." }).min(-180, "Longitude runs from -180 to 180.").max(180, "Longitude runs from -180 to 180."),
-      lat: z.coerce.number({ message: "Enter the latitude." }).min(-90, "Latitude runs from -90 to 90.").max(90, "Latitude runs from -90 to 90."),
+      lon: numberOf(z.number({ message: "Enter the longitude in degrees." }).min(-180, "Longitude runs from -180 to 180.").max(180, "Longitude runs from -180 to 180.")),
+      lat: numberOf(z.number({ message: "Enter the latitude in degrees." }).min(-90, "Latitude runs from -90 to 90.").max(90, "Latitude runs from -90 to 90.")),
     })
     .strict(),
   baseElevationM: elevation("base elevation"),
@@ -71,3 +74,32 @@ export function parseParkFields<T>(schema: z.ZodType<T>, input: unknown): { ok: 
   const issue = result.error.issues[0];
   return { ok: false, field: issue.path.map(String).join(".") || undefined, message: issue.message };
 }
+
+/** What the park forms hold: text as typed, so a refused form keeps every character. */
+export type ParkFormValues = {
+  name: string;
+  slug: string;
+  timeZone: string;
+  lon: string;
+  lat: string;
+  baseElevationM: string;
+  summitElevationM: string;
+  contactEmail: string;
+  websiteUrl: string;
+};
+
+/** The API body for the typed values: numbers stay text here, zod coerces and checks them. */
+export const parkBodyOf = (v: ParkFormValues) => ({
+  name: v.name,
+  slug: v.slug,
+  timeZone: v.timeZone,
+  location: { lon: v.lon.trim(), lat: v.lat.trim() },
+  baseElevationM: v.baseElevationM.trim(),
+  summitElevationM: v.summitElevationM.trim(),
+  contactEmail: v.contactEmail,
+  websiteUrl: v.websiteUrl,
+});
+
+/** A slug suggested from the park's name: "Pine & Ash Ridge" → "pine-ash-ridge". */
+export const slugFromName = (name: string) =>
+  name.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60);
