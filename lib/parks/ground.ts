@@ -55,6 +55,9 @@ export async function clearGroundLayer(actor: Actor | null, park: Park, layerNam
   return writeLayer(actor, park, layer, null);
 }
 
+/** How many shapes each layer holds now (0 = not uploaded). */
+export const groundLayerCounts = (park: Park) => Object.fromEntries(GROUND_LAYERS.map((layer) => [layer, park.mapLayers?.[layer]?.features.length ?? 0])) as Record<GroundLayer, number>;
+
 /** The park's staff see what each layer held before, newest first (the geometry stays in the database). */
 export async function groundLayerHistory(parkId: string, limit = 20) {
   const rows = await ParkLayerVersion.findAll({ where: { parkId }, attributes: ["id", "layer", "replacedAt", "replacedBy", [sequelize.literal("coalesce(jsonb_array_length(geojson->'features'), 0)"), "features"]], order: [["replacedAt", "DESC"]], limit });

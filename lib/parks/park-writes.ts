@@ -2,9 +2,9 @@ import "server-only";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { createInvitation, mailInvitation } from "@/lib/staff/invitations";
-import { AuditEvent, Park, Trail, sequelize } from "@/models";
+import { AuditEvent, Park, sequelize } from "@/models";
 import { parkCreateSchema, parkPatchSchema, parseParkFields, type ParkPatchInput } from "./pure/schemas";
-import { parkSettings } from "./queries";
+import { parkHasTrails, parkSettings } from "./queries";
 
 /** Validation refusals of park settings answer 422 and name the field, for the form and the API alike. */
 function parse<T>(schema: Parameters<typeof parseParkFields<T>>[0], input: unknown): T {
@@ -63,7 +63,7 @@ export async function updatePark(actor: Actor | null, slug: string, input: unkno
     const summit = patch.summitElevationM ?? park.summitElevationM;
     if (summit <= base) throw new AppError(422, "The summit must be higher than the base.", "summitElevationM");
     if (patch.slug && patch.slug !== park.slug) {
-      if (await Trail.count({ where: { parkId: park.id }, transaction })) {
+      if (await parkHasTrails(park.id)) {
         throw new AppError(409, "The address (slug) cannot change once the park has trails: links in e-mails and QR codes depend on it.", "slug");
       }
       if (await Park.count({ where: { slug: patch.slug }, transaction })) throw slugTaken();

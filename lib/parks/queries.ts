@@ -47,6 +47,11 @@ export async function listParkStaff(parkId: string) {
   });
 }
 
+/** Once a park has trails (archived ones too), its slug is fixed: links in e-mails and QR codes depend on it. */
+export async function parkHasTrails(parkId: string): Promise<boolean> {
+  return (await Trail.count({ where: { parkId } })) > 0;
+}
+
 /**
  * The page guard for a park's pages: the park, when it exists and the caller may take `action`
  * there; Next's notFound() otherwise, so a page never tells an outsider which parks have staff areas.
