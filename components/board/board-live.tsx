@@ -27,7 +27,11 @@ export function BoardLive({ initial, filters }: { initial: Board; filters: Board
         {" · "}updated {parkLocalTime(new Date(board.generatedAt), timeZone)}
         {error && <span className="font-semibold text-brick-600"> · offline, showing the last board</span>}
       </p>
-      {trails.length === 0 ? (
+      {board.trails.length === 0 ? (
+        <p className="card" data-testid="no-trails-yet">
+          {board.park.name} has not published its trails yet. Check back soon, or ask for closure e-mails to hear when it opens.
+        </p>
+      ) : trails.length === 0 ? (
         <p className="card">No trail matches these filters.</p>
       ) : (
         <ul className="space-y-3" aria-label="Trails">

@@ -4,7 +4,7 @@ import { col, fn, Op } from "sequelize";
 import { getActor } from "@/lib/server/auth/actor";
 import { can, type Action } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
-import { Park, ParkMembership, Subscription, Trail, TrailReport, User } from "@/models";
+import { Park, ParkMembership, Subscription, Trail, TrailReport } from "@/models";
 
 /** Public view of a park, as the API returns it. */
 export function parkSummary(park: Park) {
@@ -35,17 +35,6 @@ export async function getParkBySlug(slug: string): Promise<Park> {
   return park;
 }
 
-export async function listParkStaff(parkId: string) {
-  const rows = await ParkMembership.findAll({
-    where: { parkId },
-    include: [{ model: User, as: "user", attributes: ["name", "email", "disabledAt"] }],
-    order: [["role", "ASC"]],
-  });
-  return rows.map((m) => {
-    const user = (m as ParkMembership & { user: User }).user;
-    return { userId: m.userId, role: m.role, name: user.name, email: user.email, disabled: Boolean(user.disabledAt) };
-  });
-}
 
 /** Once a park has trails (archived ones too), its slug is fixed: links in e-mails and QR codes depend on it. */
 export async function parkHasTrails(parkId: string): Promise<boolean> {

@@ -1,3 +1,5 @@
+import { bbox } from "@turf/turf";
+import type { FeatureCollection } from "geojson";
 export type Bounds = [[west: number, south: number], [east: number, north: number]];
 type Box = { minLon: number; minLat: number; maxLon: number; maxLat: number };
 
@@ -19,5 +21,15 @@ export function boundsAround(lon: number, lat: number, halfSpanDeg = 0.01): Boun
   return [
     [lon - halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat - halfSpanDeg],
     [lon + halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat + halfSpanDeg],
+  ];
+}
+
+/** The box around a park's ground (boundary, lifts, landmarks…), or null when it has none: a new park's map opens on it. */
+export function collectionBounds(collection: FeatureCollection): Bounds | null {
+  if (collection.features.length === 0) return null;
+  const [west, south, east, north] = bbox(collection);
+  return [
+    [west, south],
+    [east, north],
   ];
 }

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
-import { statusChanges } from "@/lib/audit/activity";
+import { setupEvents, statusChanges } from "@/lib/audit/activity";
 import { parkToday } from "@/lib/conditions/park-today";
 import { parkLocalTime, shiftDate } from "@/lib/shared/time";
 import { Park } from "@/models";
@@ -19,7 +19,7 @@ export default async function ActivityPage({ params, searchParams }: Props) {
   const park = await Park.findOne({ where: { slug: parkSlug } });
   if (!park || !can(actor, "audit:read", { parkId: park.id })) notFound();
   const before = Number(query.before);
-  const { changes, olderBefore } = await statusChanges(park.id, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined });
+  const [{ changes, olderBefore }, teamEvents] = await Promise.all([statusChanges(park.id, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined }), setupEvents(park.id)]);
   const today = parkToday(park);
   const day = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone: park.timeZone, day: "numeric", month: "short" }).format(new Date(iso));
   return (
@@ -81,6 +81,21 @@ export default async function ActivityPage({ params, searchParams }: Props) {
           </Link>
         )}
       </div>
+      <section className="card space-y-2" aria-labelledby="team-activity">
+        <h2 id="team-activity" className="text-lg font-bold">Team, settings and ground</h2>
+        {teamEvents.length === 0 ? (
+          <p>No changes yet.</p>
+        ) : (
+          <ul className="divide-y divide-loam-100 text-sm" data-testid="setup-activity">
+            {teamEvents.map((e) => (
+              <li key={e.id} className="py-2">
+                <span className="block text-loam-600">{day(e.at)} {parkLocalTime(new Date(e.at), park.timeZone)} · {e.actorName ?? "(removed account)"}</span>
+                {e.text}
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
     </section>
   );
 }
