@@ -59,7 +59,7 @@ test.describe.serial("a park of our own", () => {
   });
 
   test("1. the admin creates the park with its time zone and elevations and invites its manager", async ({ page }) => {
-    slug = `own-park-${tag()}`;
+    slug = `a-park-of-our-own-${tag()}`;
     parkName = `A park of our own ${tag()}`;
     await signInAs(page, demo("admin"), undefined, "/admin/parks");
     await page.goto("/admin/parks");
