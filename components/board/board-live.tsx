@@ -21,10 +21,15 @@ export function BoardLive({ initial, filters }: { initial: Board; filters: Board
     <div className="space-y-4">
       {board.parkState && <ParkStateBanner state={board.parkState} timeZone={timeZone} />}
       <p className="text-sm text-loam-700" aria-live="polite">
-        <span data-testid="inspected-count">
-          {board.inspectedCount} of {board.trails.length} trails inspected today
-        </span>
-        {" · "}updated {parkLocalTime(new Date(board.generatedAt), timeZone)}
+        {board.trails.length > 0 && (
+          <>
+            <span data-testid="inspected-count">
+              {board.inspectedCount} of {board.trails.length} trails inspected today
+            </span>
+            {" · "}
+          </>
+        )}
+        updated {parkLocalTime(new Date(board.generatedAt), timeZone)}
         {error && <span className="font-semibold text-brick-600"> · offline, showing the last board</span>}
       </p>
       {board.trails.length === 0 ? (

@@ -21,7 +21,7 @@ async function writeLayer(actor: Actor, park: Park, layer: GroundLayer, next: Fe
     const locked = await Park.findByPk(park.id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!locked) throw new AppError(404, "Park not found.");
     const { [layer]: previous, ...others } = locked.mapLayers ?? {};
-    await ParkLayerVersion.create({ parkId: park.id, layer, geojson: previous ?? null, replacedBy: actor.id }, { transaction });
+    if (previous?.features.length) await ParkLayerVersion.create({ parkId: park.id, layer, geojson: previous, replacedBy: actor.id }, { transaction });
     await locked.update({ mapLayers: next ? { ...others, [layer]: next } : others }, { transaction });
     await AuditEvent.create(
       { parkId: park.id, actorId: actor.id, action: next ? "ground.replace" : "ground.clear", subjectType: "park", subjectId: park.id, data: { layer, features: next?.features.length ?? 0 } },

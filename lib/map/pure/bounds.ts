@@ -33,3 +33,13 @@ export function collectionBounds(collection: FeatureCollection): Bounds | null {
     [east, north],
   ];
 }
+
+/** The smallest box holding every box given (nulls skipped), or null when none is. */
+export function unionBounds(...boxes: (Bounds | null)[]): Bounds | null {
+  const present = boxes.filter((b): b is Bounds => b !== null);
+  if (present.length === 0) return null;
+  return [
+    [Math.min(...present.map((b) => b[0][0])), Math.min(...present.map((b) => b[0][1]))],
+    [Math.max(...present.map((b) => b[1][0])), Math.max(...present.map((b) => b[1][1]))],
+  ];
+}

@@ -15,7 +15,7 @@ export default async function AdminParksPage() {
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">Parks on Loamcast</h1>
       <div className="card overflow-x-auto">
-        <table className="w-full min-w-[520px] text-left text-sm" data-testid="admin-parks">
+        <table className="w-full text-left text-sm" data-testid="admin-parks">
           <thead>
             <tr className="border-b-2 border-loam-300">
               <th scope="col" className="px-2 py-1">Park</th>

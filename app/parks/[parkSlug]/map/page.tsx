@@ -7,7 +7,7 @@ import { TrailTextList } from "@/components/map/trail-text-list";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { parkBaseLayersGeoJson, parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
-import { boundsAround, collectionBounds, trailBounds } from "@/lib/map/pure/bounds";
+import { boundsAround, collectionBounds, trailBounds, unionBounds } from "@/lib/map/pure/bounds";
 import { GROUND_LAYER_INFO, missingGroundLayers } from "@/lib/parks/pure/ground-layers";
 import { parkDataUrls } from "@/lib/map/pure/sources";
 import { Park } from "@/models";
@@ -28,8 +28,9 @@ export default async function ParkMapPage({ params }: Props) {
   const [{ trails, collection }, hazards, actor] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id), getActor()]);
   const staff = can(actor, "trail:write", { parkId: park.id }) || can(actor, "hazard:write", { parkId: park.id });
   const properties = collection.features.map((f) => f.properties);
-  // No trails yet: open on the park's ground, else around its location.
-  const bounds = trailBounds(trails) ?? collectionBounds(parkBaseLayersGeoJson(park)) ?? boundsAround(park.centerLon, park.centerLat);
+  // The trails and the park's boundary; a park with neither opens on its other ground, else around its location.
+  const boundary = park.mapLayers?.boundary ? collectionBounds(park.mapLayers.boundary) : null;
+  const bounds = unionBounds(trailBounds(trails), boundary) ?? collectionBounds(parkBaseLayersGeoJson(park)) ?? boundsAround(park.centerLon, park.centerLat);
   const missing = can(actor, "park:update", { parkId: park.id }) ? missingGroundLayers(park.mapLayers ?? {}) : [];
 
   return (
