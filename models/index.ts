@@ -7,6 +7,7 @@ import { MailSend } from "./mail-send";
 import { Notice } from "./notice";
 import { NoticeDelivery } from "./notice-delivery";
 import { Park } from "./park";
+import { ParkLayerVersion } from "./park-layer-version";
 import { ParkMembership } from "./park-membership";
 import { ParkState } from "./park-state";
 import { Photo } from "./photo";
@@ -27,6 +28,8 @@ User.hasMany(ParkMembership, { foreignKey: "userId", as: "memberships" });
 ParkMembership.belongsTo(User, { foreignKey: "userId", as: "user" });
 Invitation.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 User.hasMany(AccountLink, { foreignKey: "userId", as: "accountLinks" });
+Invitation.belongsTo(User, { foreignKey: "invitedBy", as: "inviter" });
+Park.hasMany(ParkLayerVersion, { foreignKey: "parkId", as: "layerVersions" });
 
 Park.hasMany(Trail, { foreignKey: "parkId", as: "trails" });
 Trail.belongsTo(Park, { foreignKey: "parkId", as: "park" });
@@ -63,6 +66,7 @@ export {
   Notice,
   NoticeDelivery,
   Park,
+  ParkLayerVersion,
   ParkMembership,
   ParkState,
   Photo,

@@ -12,6 +12,8 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
   declare invitedBy: string | null;
   declare expiresAt: Date;
   declare acceptedAt: Date | null;
+  /** Set when a manager withdraws the invitation (or resends it with a new link). */
+  declare revokedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -26,6 +28,7 @@ Invitation.init(
     invitedBy: { type: DataTypes.UUID, allowNull: true },
     expiresAt: { type: DataTypes.DATE, allowNull: false },
     acceptedAt: { type: DataTypes.DATE, allowNull: true },
+    revokedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

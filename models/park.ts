@@ -16,6 +16,10 @@ export class Park extends Model<InferAttributes<Park>, InferCreationAttributes<P
   declare summitElevationM: number;
   declare fictional: CreationOptional<boolean>;
   declare mapLayers: CreationOptional<ParkMapLayers>;
+  declare contactEmail: CreationOptional<string | null>;
+  declare websiteUrl: CreationOptional<string | null>;
+  /** Optimistic lock for the settings form: bumped on every settings change. */
+  declare lockVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -32,6 +36,9 @@ Park.init(
     summitElevationM: { type: DataTypes.INTEGER, allowNull: false },
     fictional: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     mapLayers: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+    contactEmail: { type: DataTypes.STRING(254), allowNull: true },
+    websiteUrl: { type: DataTypes.STRING(300), allowNull: true },
+    lockVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

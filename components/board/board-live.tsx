@@ -21,13 +21,22 @@ export function BoardLive({ initial, filters }: { initial: Board; filters: Board
     <div className="space-y-4">
       {board.parkState && <ParkStateBanner state={board.parkState} timeZone={timeZone} />}
       <p className="text-sm text-loam-700" aria-live="polite">
-        <span data-testid="inspected-count">
-          {board.inspectedCount} of {board.trails.length} trails inspected today
-        </span>
-        {" · "}updated {parkLocalTime(new Date(board.generatedAt), timeZone)}
+        {board.trails.length > 0 && (
+          <>
+            <span data-testid="inspected-count">
+              {board.inspectedCount} of {board.trails.length} trails inspected today
+            </span>
+            {" · "}
+          </>
+        )}
+        updated {parkLocalTime(new Date(board.generatedAt), timeZone)}
         {error && <span className="font-semibold text-brick-600"> · offline, showing the last board</span>}
       </p>
-      {trails.length === 0 ? (
+      {board.trails.length === 0 ? (
+        <p className="card" data-testid="no-trails-yet">
+          {board.park.name} has not published its trails yet. Check back soon, or ask for closure e-mails to hear when it opens.
+        </p>
+      ) : trails.length === 0 ? (
         <p className="card">No trail matches these filters.</p>
       ) : (
         <ul className="space-y-3" aria-label="Trails">

@@ -1,6 +1,7 @@
 import "server-only";
 import { Op } from "sequelize";
 import { AuditEvent, User } from "@/models";
+import { describeSetupEvent, SETUP_ACTIONS } from "./pure/describe-setup";
 
 export type StatusChange = {
   id: number;
@@ -41,4 +42,17 @@ export async function statusChanges(parkId: string, options: { before?: number }
     };
   });
   return { changes, olderBefore: rows.length > ACTIVITY_PAGE_SIZE ? changes[changes.length - 1].id : null };
+}
+
+/** Team, settings and ground changes for one park, newest first: who did what, in words. */
+export async function setupEvents(parkId: string, limit = 50) {
+  const rows = await AuditEvent.findAll({ where: { parkId, action: [...SETUP_ACTIONS] }, order: [["id", "DESC"]], limit });
+  const userIds = [...new Set(rows.flatMap((r) => [r.actorId, r.subjectType === "user" ? r.subjectId : null]).filter((id): id is string => Boolean(id)))];
+  const names = new Map((await User.findAll({ where: { id: userIds }, attributes: ["id", "name"] })).map((u) => [u.id, u.name]));
+  return rows.map((r) => ({
+    id: Number(r.id),
+    at: new Date(r.createdAt).toISOString(),
+    actorName: r.actorId ? (names.get(r.actorId) ?? null) : null,
+    text: describeSetupEvent(r.action, r.data as Record<string, unknown>, r.subjectType === "user" && r.subjectId ? (names.get(r.subjectId) ?? null) : null),
+  }));
 }

@@ -34,10 +34,10 @@ export async function sendJson<T>(method: "POST" | "PATCH" | "DELETE", url: stri
  * Multipart upload with progress (fetch cannot report upload progress; XMLHttpRequest can).
  * `onProgress` receives the share sent, 0…1; never throws.
  */
-export function uploadForm<T>(url: string, form: FormData, onProgress: (share: number) => void): Promise<ApiResult<T>> {
+export function uploadForm<T>(url: string, form: FormData, onProgress: (share: number) => void, method: "POST" | "PUT" = "POST"): Promise<ApiResult<T>> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
-    xhr.open("POST", url);
+    xhr.open(method, url);
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable && event.total > 0) onProgress(event.loaded / event.total);
     };

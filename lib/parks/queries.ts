@@ -1,10 +1,11 @@
 import "server-only";
 import { notFound } from "next/navigation";
+import { col, fn, Op } from "sequelize";
 import { cache } from "react";
 import { getActor } from "@/lib/server/auth/actor";
 import { can, roleInPark, type Action, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
-import { Park, ParkMembership, User } from "@/models";
+import { Park, ParkMembership, Subscription, Trail, TrailReport } from "@/models";
 
 export type { Park };
 
@@ -19,6 +20,11 @@ export function parkSummary(park: Park) {
     summitElevationM: park.summitElevationM,
     fictional: park.fictional,
   };
+}
+
+/** What the settings form and `PATCH /api/parks/{slug}` work with: the public view, contact details and the lock. */
+export function parkSettings(park: Park) {
+  return { ...parkSummary(park), contactEmail: park.contactEmail ?? null, websiteUrl: park.websiteUrl ?? null, lockVersion: park.lockVersion };
 }
 
 export async function listParks() {
@@ -69,14 +75,30 @@ export async function getParkBySlug(slug: string): Promise<Park> {
   return park;
 }
 
-export async function listParkStaff(parkId: string) {
-  const rows = await ParkMembership.findAll({
-    where: { parkId },
-    include: [{ model: User, as: "user", attributes: ["name", "email", "disabledAt"] }],
-    order: [["role", "ASC"]],
-  });
-  return rows.map((m) => {
-    const user = (m as ParkMembership & { user: User }).user;
-    return { userId: m.userId, role: m.role, name: user.name, email: user.email, disabled: Boolean(user.disabledAt) };
-  });
+/** Once a park has trails (archived ones too), its slug is fixed: links in e-mails and QR codes depend on it. */
+export async function parkHasTrails(parkId: string): Promise<boolean> {
+  return (await Trail.count({ where: { parkId } })) > 0;
+}
+
+/** Every park for the site admin: trails, staff, subscribers and the last report, in four grouped reads. */
+export async function listParksForAdmin() {
+  const count = async (model: typeof Trail | typeof ParkMembership | typeof Subscription, where: Record<string, unknown> = {}) => {
+    const rows = (await (model as typeof Trail).findAll({ attributes: ["parkId", [fn("count", col("id")), "n"]], where, group: ["parkId"], raw: true })) as unknown as { parkId: string; n: string }[];
+    return new Map(rows.map((r) => [r.parkId, Number(r.n)]));
+  };
+  const [parks, trails, staff, subscribers, reports] = await Promise.all([
+    Park.findAll({ order: [["name", "ASC"]] }),
+    count(Trail, { archivedAt: null }),
+    count(ParkMembership),
+    count(Subscription, { confirmedAt: { [Op.ne]: null }, unsubscribedAt: null }),
+    TrailReport.findAll({ attributes: ["parkId", [fn("max", col("reported_at")), "last"]], group: ["parkId"], raw: true }) as unknown as Promise<{ parkId: string; last: string | Date }[]>,
+  ]);
+  const lastReport = new Map(reports.map((r) => [r.parkId, new Date(r.last)]));
+  return parks.map((park) => ({
+    ...parkSummary(park),
+    trails: trails.get(park.id) ?? 0,
+    staff: staff.get(park.id) ?? 0,
+    subscribers: subscribers.get(park.id) ?? 0,
+    lastReportAt: lastReport.get(park.id)?.toISOString() ?? null,
+  }));
 }

@@ -13,6 +13,6 @@ export function navigationFor(actor: Actor | null): NavLink[] {
   if (role === "anonymous") return [...links, { href: "/sign-in", label: "Sign in" }];
   links.push({ href: "/me", label: "My bike" });
   if (role === "manager" || role === "ranger" || role === "admin") links.push({ href: "/staff", label: "Staff desk" });
-  if (role === "admin") links.push({ href: "/admin/mail", label: "Sent mail" });
+  if (role === "admin") links.push({ href: "/admin/parks", label: "All parks" }, { href: "/admin/mail", label: "Sent mail" });
   return links;
 }

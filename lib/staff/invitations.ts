@@ -1,6 +1,6 @@
 import "server-only";
-import { Op } from "sequelize";
-import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { Op, type Transaction } from "sequelize";
+import { authorize, type Actor, type ParkRole } from "@/lib/server/auth/permissions";
 import { hashPassword, passwordSchema, verifyPassword } from "@/lib/server/auth/password";
 import { hashToken, newToken } from "@/lib/server/auth/tokens";
 import { env } from "@/lib/server/env";
@@ -18,27 +18,49 @@ export async function inviteStaff(actor: Actor | null, parkId: string, input: un
   const { email, role } = invitationFields.parse(input);
   const park = await Park.findByPk(parkId);
   if (!park) throw new AppError(404, "Park not found.");
+  const { invitation, token } = await sequelize.transaction((transaction) => createInvitation({ parkId, email, role, invitedBy: actor }, transaction));
+  const link = await mailInvitation(park, invitation, token, actor.name);
+  return { id: invitation.id, email, role, expiresAt: invitation.expiresAt, link };
+}
+
+/**
+ * Writes an invitation and its audit event inside the caller's transaction (creating a park
+ * writes its first manager's invitation in the same one). The token is returned, never stored.
+ */
+export async function createInvitation(
+  { parkId, email, role, invitedBy }: { parkId: string; email: string; role: ParkRole; invitedBy: Actor },
+  transaction: Transaction,
+) {
   const token = newToken();
-  const invitation = await sequelize.transaction(async (transaction) => {
-    const created = await Invitation.create(
-      { parkId, email, role, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000), acceptedAt: null },
-      { transaction },
-    );
-    await recordAudit({ parkId, actorId: actor.id, action: "staff.invite", subjectType: "invitation", subjectId: created.id, data: { email, role } }, transaction);
-    return created;
-  });
+  const invitation = await Invitation.create(
+    { parkId, email, role, tokenHash: hashToken(token), invitedBy: invitedBy.id, expiresAt: invitationExpiry(), acceptedAt: null },
+    { transaction },
+  );
+  await recordAudit({ parkId, actorId: invitedBy.id, action: "staff.invite", subjectType: "invitation", subjectId: invitation.id, data: { email, role } }, transaction);
+  return { invitation, token };
+}
+
+export const invitationExpiry = (from = Date.now()) => new Date(from + INVITATION_DAYS * 86_400_000);
+
+/** Sends the invitation e-mail (after the transaction committed) and returns the link. */
+export async function mailInvitation(park: Park, invitation: Invitation, token: string, inviterName: string) {
   const link = `${env().APP_URL}/invitations/${token}`;
   await sendMail({
-    to: email,
+    to: invitation.email,
     subject: `You're invited to join ${park.name} on Loamcast`,
-    text: `${actor.name} invited you to join ${park.name} on Loamcast as ${role}.\n\nAccept within ${INVITATION_DAYS} days: ${link}\n\nIf you were not expecting this, ignore this e-mail.`,
+    text: `${inviterName} invited you to join ${park.name} on Loamcast as ${invitation.role}.\n\nAccept within ${INVITATION_DAYS} days: ${link}\n\nIf you were not expecting this, ignore this e-mail.`,
   });
-  return { id: invitation.id, email, role, expiresAt: invitation.expiresAt, link };
+  return link;
+}
+
+/** True when the link belongs to an invitation a manager withdrew: its page says so. */
+export async function isWithdrawnInvitation(token: string): Promise<boolean> {
+  return (await Invitation.count({ where: { tokenHash: hashToken(token), revokedAt: { [Op.ne]: null } }, useMaster: true })) > 0;
 }
 
 export async function findOpenInvitation(token: string) {
   const invitation = await Invitation.findOne({
-    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    where: { tokenHash: hashToken(token), acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
     include: [{ model: Park, as: "park", attributes: ["name", "slug"] }],
     useMaster: true, // the link is often opened seconds after it was sent
   });
@@ -81,7 +103,7 @@ export async function acceptInvitation(input: unknown, actor: Actor | null = nul
   return sequelize.transaction(async (transaction) => {
     const [claimed] = await Invitation.update(
       { acceptedAt: new Date() },
-      { where: { id: invitation.id, acceptedAt: null }, transaction },
+      { where: { id: invitation.id, acceptedAt: null, revokedAt: null }, transaction },
     );
     if (claimed !== 1) throw new AppError(409, "This invitation was already used.");
     let user: User;

@@ -34,6 +34,10 @@ const PAGES: Visit[] = [
   { path: "/staff/harrow-ridge/notices/new", as: "ranger" },
   { path: "/staff", as: "manager" },
   { path: "/staff/harrow-ridge", as: "manager" },
+  { path: "/staff/harrow-ridge/settings", as: "manager" },
+  { path: "/staff/harrow-ridge/team", as: "manager" },
+  { path: "/parks/cinder-hollow" },
+  { path: "/admin/parks", as: "admin" },
   { path: "/admin/mail", as: "admin" },
 ];
 

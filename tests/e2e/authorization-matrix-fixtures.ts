@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import type { APIRequestContext, APIResponse } from "@playwright/test";
-import type { Caller } from "./api-callers";
+import { CALLER_EMAIL, type Caller } from "./api-callers";
 
 /**
  * The objects the authorization matrix acts on, all in the demo park and made through the API as
@@ -126,6 +126,29 @@ export class MatrixFixtures {
 
   async trailLockVersion(trailId = this.trailId): Promise<number> {
     return (await okJson(await this.as.manager.get(`/api/trails/${trailId}`), "trail")).trail.lockVersion;
+  }
+
+  /** The park's settings lockVersion, as its manager reads it. */
+  async parkLockVersion(): Promise<number> {
+    return (await okJson(await this.as.manager.get(`/api/parks/${PARK}`), "park settings")).park.lockVersion;
+  }
+
+  /** The park's landmarks as they are, as a layer file: uploading it changes nothing a rider sees. */
+  async landmarksFile() {
+    const layers = await okJson(await this.as.anonymous.get(`/api/parks/${PARK}/park-layers.geojson`), "park layers");
+    const features = layers.features.filter((f: Json) => f.properties.layer === "landmark");
+    return { name: "landmarks.geojson", mimeType: "application/geo+json", buffer: Buffer.from(JSON.stringify({ type: "FeatureCollection", features })) };
+  }
+
+  async memberId(caller: Caller): Promise<string> {
+    const { members } = await okJson(await this.as.manager.get(`/api/parks/${PARK}/staff`), "team");
+    return members.find((m: Json) => m.email === CALLER_EMAIL[caller as Exclude<Caller, "anonymous">]).userId;
+  }
+
+  /** An open invitation to the park, made by its manager, for a call that withdraws or resends it. */
+  async freshInvitation(): Promise<string> {
+    const body = { email: `${unique("matrix-invitee")}@tests.loamcast.test`, role: "ranger" };
+    return (await okJson(await this.as.manager.post(`/api/parks/${PARK}/invitations`, { data: body }), "invitation")).invitation.id;
   }
 
   track(kind: "hazard" | "feature" | "trail", id: string) {

@@ -20,6 +20,7 @@ function formOf(fields: Record<string, string>): FormData {
   for (const key of Object.keys(fields)) form.append(key, fields[key]);
   return form;
 }
+const newPark = () => ({ name: "Hostile park", slug: `hostile-${Date.now().toString(36)}`, timeZone: "Europe/Zurich", location: { lon: 8.5, lat: 46.8 }, baseElevationM: 900, summitElevationM: 1800, managerEmail: "hostile-manager@tests.loamcast.test" });
 const rideLog = (t: Targets, extra: Record<string, unknown>) => ({ setupId: t.setupId, riddenOn: "2026-11-01", frontKpa: 140, rearKpa: 160, symptoms: { front: ["fine"], rear: ["fine"] }, ...extra });
 
 export const BODY_CASES: HostileCase[] = [
@@ -111,4 +112,15 @@ export const BODY_CASES: HostileCase[] = [
   { name: "reset confirm: a userId smuggled in", as: "anonymous", method: "POST", path: () => "/api/account/password-reset/confirm", json: () => ({ token: "x".repeat(43), password: "switchback-dawn-patrol-8", userId: "00000000-0000-4000-8000-000000000005" }), expect: 400 },
   { name: "change password: a number for the new password", as: "rider", method: "POST", path: () => "/api/me/password", json: () => ({ currentPassword: "x", newPassword: 12345678 }), expect: 400, field: "newPassword" },
   { name: "delete account: no password", as: "rider", method: "DELETE", path: () => "/api/me", json: () => ({}), expect: 400, field: "password" },
+  // Parks: creating one (admin) and changing its settings (its manager).
+  { name: "a park in a time zone that does not exist", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), timeZone: "Mars/Olympus" }), expect: 422, field: "timeZone" },
+  { name: "a park with an offset instead of a zone name", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), timeZone: "+02:00" }), expect: 422, field: "timeZone" },
+  { name: "a park whose summit is below its base", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), summitElevationM: 100 }), expect: 422, field: "summitElevationM" },
+  { name: "a park off the Earth", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), location: { lon: 8.5, lat: 91 } }), expect: 422, field: "location.lat" },
+  { name: "a park slug with a path in it", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), slug: "../admin" }), expect: 422, field: "slug" },
+  { name: "a park slug already taken", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), slug: "harrow-ridge" }), expect: 409, field: "slug" },
+  { name: "mass assignment: fictional on a new park", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), fictional: true }), expect: 422 },
+  { name: "park settings without a lockVersion", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ name: "Renamed" }), expect: 422, field: "lockVersion" },
+  { name: "a new slug for a park that has trails", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ slug: "harrow-ridge-2", lockVersion: 0 }), expect: 409 },
+  { name: "a role that does not exist", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge/staff/00000000-0000-4000-8000-000000000000", json: () => ({ role: "owner" }), expect: 400, field: "role" },
 ];

@@ -14,6 +14,9 @@ const GEOJSON = "application/geo+json";
 const upload = (name: string, buffer: Buffer, mimeType = GPX, fields: Record<string, string> = {}) => () => ({ ...fields, file: { name, mimeType, buffer } });
 const TRAILS = () => "/api/parks/harrow-ridge/trails";
 const HAZARDS = () => "/api/parks/harrow-ridge/hazards";
+const LAYER = (layer: string) => () => `/api/parks/harrow-ridge/layers/${layer}`;
+const lineFeature = { type: "Feature", properties: {}, geometry: { type: "LineString", coordinates: [[-121.94, 47.3], [-121.93, 47.31]] } };
+const collection = (...features: unknown[]) => Buffer.from(JSON.stringify({ type: "FeatureCollection", features }));
 
 /** A PNG whose header claims 50,000 × 50,000 pixels (2.5 gigapixels), with one row of data: refused before decoding. */
 function pngClaimingHugeCanvas(): Buffer {
@@ -82,5 +85,14 @@ export async function fileCases(): Promise<HostileCase[]> {
     { name: "a PNG claiming 2.5 gigapixels", as: "parkRanger", method: "POST", path: HAZARDS, multipart: photo("bomb.png", pngClaimingHugeCanvas(), "image/png"), expect: 413, field: "photos" },
     { name: "five photos (four at most)", as: "parkRanger", method: "POST", path: HAZARDS, multipart: photos(5, jpeg), expect: 422, field: "photos" },
     { name: "a photo in a field other than photos", as: "parkRanger", method: "POST", path: HAZARDS, multipart: photo("tree.jpg", jpeg, "image/jpeg", "file"), expect: 400, field: "file" },
+
+    // Ground layers (the park's manager, PUT /api/parks/harrow-ridge/layers/…): a refusal leaves the layer as it was.
+    { name: "a ground layer over 5 MB", as: "manager", method: "PUT", path: LAYER("boundary"), multipart: upload("huge.geojson", Buffer.alloc(5 * 1024 * 1024 + 64 * 1024 + 1, 0x20), GEOJSON), expect: 413 },
+    { name: "a GPX as a ground layer", as: "manager", method: "PUT", path: LAYER("lifts"), multipart: upload("line.gpx", corpus("good-track.gpx")), expect: 415, field: "file" },
+    { name: "a line in the boundary layer", as: "manager", method: "PUT", path: LAYER("boundary"), multipart: upload("line.geojson", collection(lineFeature)), expect: 422, field: "file" },
+    { name: "a landmark 146 km away", as: "manager", method: "PUT", path: LAYER("landmarks"), multipart: upload("far.geojson", collection({ type: "Feature", properties: { name: "Far away" }, geometry: { type: "Point", coordinates: [-120, 47.3] } })), expect: 422, field: "file" },
+    { name: "a ground layer with a crs member", as: "manager", method: "PUT", path: LAYER("roads"), multipart: upload("crs.geojson", Buffer.from(JSON.stringify({ type: "FeatureCollection", crs: { type: "name", properties: { name: "EPSG:3857" } }, features: [lineFeature] })), GEOJSON), expect: 422, field: "file" },
+    { name: "a landmark named with a right-to-left override", as: "manager", method: "PUT", path: LAYER("landmarks"), multipart: upload("rtl.geojson", collection({ type: "Feature", properties: { name: "Lodge \u202Eexe.gpj" }, geometry: { type: "Point", coordinates: [-121.94, 47.3] } })), expect: 422, field: "file" },
+    { name: "an extra form field beside the layer file", as: "manager", method: "PUT", path: LAYER("roads"), multipart: upload("roads.geojson", collection(lineFeature), GEOJSON, { parkId: "00000000-0000-4000-8000-000000000000" }), expect: 400, field: "parkId" },
   ];
 }

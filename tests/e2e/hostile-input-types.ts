@@ -14,7 +14,7 @@ export type Multipart = Record<string, string | FilePart> | FormData;
 export type HostileCase = {
   name: string;
   as: Caller;
-  method: "GET" | "POST" | "PATCH" | "DELETE";
+  method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
   path: (t: Targets) => string;
   /** Sent as application/json. */
   json?: (t: Targets) => unknown;

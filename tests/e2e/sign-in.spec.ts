@@ -3,7 +3,7 @@ import { demo, signInAs, shot } from "./helpers";
 import { newestLinkTo } from "./mail-helpers";
 
 const navFor: Record<string, string[]> = {
-  admin: ["Parks", "Tyre pressure", "My bike", "Staff desk", "Sent mail"],
+  admin: ["Parks", "Tyre pressure", "My bike", "Staff desk", "All parks", "Sent mail"],
   manager: ["Parks", "Tyre pressure", "My bike", "Staff desk"],
   ranger: ["Parks", "Tyre pressure", "My bike", "Staff desk"],
   rider: ["Parks", "Tyre pressure", "My bike"],

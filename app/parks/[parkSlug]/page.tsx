@@ -48,7 +48,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
           </Link>
         </p>
       </header>
-      <BoardFilterLinks path={path} filters={filters} />
+      {board.trails.length > 0 && <BoardFilterLinks path={path} filters={filters} />}
       <BoardLive initial={board} filters={filters} />
     </section>
   );

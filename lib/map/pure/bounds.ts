@@ -1,3 +1,5 @@
+import { bbox } from "@turf/turf";
+import type { FeatureCollection } from "geojson";
 export type Bounds = [[west: number, south: number], [east: number, north: number]];
 type Box = { minLon: number; minLat: number; maxLon: number; maxLat: number };
 
@@ -19,5 +21,25 @@ export function boundsAround(lon: number, lat: number, halfSpanDeg = 0.01): Boun
   return [
     [lon - halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat - halfSpanDeg],
     [lon + halfSpanDeg / Math.cos((lat * Math.PI) / 180), lat + halfSpanDeg],
+  ];
+}
+
+/** The box around a park's ground (boundary, lifts, landmarks…), or null when it has none: a new park's map opens on it. */
+export function collectionBounds(collection: FeatureCollection): Bounds | null {
+  if (collection.features.length === 0) return null;
+  const [west, south, east, north] = bbox(collection);
+  return [
+    [west, south],
+    [east, north],
+  ];
+}
+
+/** The smallest box holding every box given (nulls skipped), or null when none is. */
+export function unionBounds(...boxes: (Bounds | null)[]): Bounds | null {
+  const present = boxes.filter((b): b is Bounds => b !== null);
+  if (present.length === 0) return null;
+  return [
+    [Math.min(...present.map((b) => b[0][0])), Math.min(...present.map((b) => b[0][1]))],
+    [Math.max(...present.map((b) => b[1][0])), Math.max(...present.map((b) => b[1][1]))],
   ];
 }

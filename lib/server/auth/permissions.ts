@@ -20,6 +20,8 @@ export const ACTIONS = {
   "park:create": "site",
   "park:update": "park",
   "staff:invite": "park",
+  "team:read": "park",
+  "team:manage": "park",
   "trail:write": "park",
   "report:write": "park",
   "hazard:write": "park",
@@ -40,6 +42,8 @@ export type Action = keyof typeof ACTIONS;
 const PARK_ROLES: Partial<Record<Action, ParkRole[]>> = {
   "park:update": ["manager"],
   "staff:invite": ["manager"],
+  "team:read": ["manager", "ranger"],
+  "team:manage": ["manager"],
   "trail:write": ["manager", "ranger"],
   "report:write": ["manager", "ranger"],
   "hazard:write": ["manager", "ranger"],

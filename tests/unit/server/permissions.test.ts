@@ -20,6 +20,8 @@ const expected: Record<Action, Record<string, boolean>> = {
   "park:create": { anonymous: false, rider: false, ranger: false, manager: false, otherRanger: false, admin: true },
   "park:update": { anonymous: false, rider: false, ranger: false, manager: true, otherRanger: false, admin: true },
   "staff:invite": { anonymous: false, rider: false, ranger: false, manager: true, otherRanger: false, admin: true },
+  "team:read": { anonymous: false, rider: false, ranger: true, manager: true, otherRanger: false, admin: true },
+  "team:manage": { anonymous: false, rider: false, ranger: false, manager: true, otherRanger: false, admin: true },
   "trail:write": { anonymous: false, rider: false, ranger: true, manager: true, otherRanger: false, admin: true },
   "report:write": { anonymous: false, rider: false, ranger: true, manager: true, otherRanger: false, admin: true },
   "hazard:write": { anonymous: false, rider: false, ranger: true, manager: true, otherRanger: false, admin: true },

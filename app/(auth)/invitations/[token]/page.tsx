@@ -1,5 +1,5 @@
 import { getActor } from "@/lib/server/auth/actor";
-import { findOpenInvitation, inviteeAccount } from "@/lib/staff/invitations";
+import { findOpenInvitation, inviteeAccount, isWithdrawnInvitation } from "@/lib/staff/invitations";
 import { AcceptInvitationForm } from "./accept-form";
 
 export const metadata = { title: "Join a park team" };
@@ -8,6 +8,14 @@ export const dynamic = "force-dynamic";
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const invitation = token.length <= 200 ? await findOpenInvitation(token) : null;
+  if (!invitation && token.length <= 200 && (await isWithdrawnInvitation(token))) {
+    return (
+      <section className="card space-y-2" data-testid="invitation-withdrawn">
+        <h1 className="text-2xl font-bold">This invitation was withdrawn</h1>
+        <p>The park&apos;s manager took it back. If you still expect to join the team, ask them for a new one.</p>
+      </section>
+    );
+  }
   if (!invitation) {
     return (
       <section className="card space-y-2">

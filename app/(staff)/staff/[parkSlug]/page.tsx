@@ -2,34 +2,27 @@ import Link from "next/link";
 import { StaffConditionsLinks } from "@/components/board/staff-conditions-links";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
-import { listParkStaff, requireParkAccess } from "@/lib/parks/queries";
+import { requireParkAccess } from "@/lib/parks/queries";
+import { parkSetupChecklist } from "@/lib/parks/setup-facts";
 import { InviteStaffForm } from "./invite-form";
+import { SetupChecklist } from "./setup-checklist";
 
 export const dynamic = "force-dynamic";
 
 export default async function StaffParkPage({ params }: { params: Promise<{ parkSlug: string }> }) {
-  const { parkSlug } = await params;
-  const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "member")]);
-  const staff = await listParkStaff(park.id);
+  const park = await requireParkAccess((await params).parkSlug, "team:read");
+  const [actor, checklist] = await Promise.all([getActor(), parkSetupChecklist(park)]);
   return (
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">{park.name}: staff desk</h1>
+      {checklist.some((item) => !item.done) && <SetupChecklist items={checklist} />}
       <StaffConditionsLinks parkSlug={park.slug} />
       <Link href={`/staff/${park.slug}/notices`} className="btn-quiet">Notices to riders</Link>
-      <div className="card">
-        <h2 className="mb-2 text-lg font-bold">Team</h2>
-        <ul className="divide-y divide-loam-100">
-          {staff.map((member) => (
-            <li key={member.userId} className="flex items-start justify-between gap-3 py-2">
-              {/* Name over address: a long address wraps on its own line instead of splitting at a hyphen beside the name. */}
-              <span className="min-w-0">
-                <span className="block">{member.name}</span>
-                <span className="block text-sm text-loam-600 [overflow-wrap:anywhere]">{member.email}</span>
-              </span>
-              <span className="shrink-0 font-semibold">{member.role}</span>
-            </li>
-          ))}
-        </ul>
+      <div className="card flex flex-wrap items-center gap-2">
+        <h2 className="mr-auto text-lg font-bold">Park</h2>
+        <Link href={`/staff/${park.slug}/team`} className="btn-quiet">Team</Link>
+        <Link href={`/staff/${park.slug}/activity`} className="btn-quiet">Activity</Link>
+        {can(actor, "park:update", { parkId: park.id }) && <Link href={`/staff/${park.slug}/settings`} className="btn-quiet">Settings and ground</Link>}
       </div>
       <div className="card flex flex-wrap items-center gap-2">
         <h2 className="mr-auto text-lg font-bold">Trails</h2>

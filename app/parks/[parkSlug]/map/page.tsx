@@ -5,8 +5,9 @@ import { ParkMapLoader } from "@/components/map/park-map-loader";
 import { TrailTextList } from "@/components/map/trail-text-list";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
-import { parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
-import { boundsAround, trailBounds } from "@/lib/map/pure/bounds";
+import { parkBaseLayersGeoJson, parkHazardsGeoJson, parkTrailsGeoJson } from "@/lib/map/map-queries";
+import { boundsAround, collectionBounds, trailBounds, unionBounds } from "@/lib/map/pure/bounds";
+import { GROUND_LAYER_INFO, missingGroundLayers } from "@/lib/parks/pure/ground-layers";
 import { parkDataUrls } from "@/lib/map/pure/sources";
 import { requireParkAccess, findParkBySlug } from "@/lib/parks/queries";
 
@@ -25,7 +26,10 @@ export default async function ParkMapPage({ params }: Props) {
   const [{ trails, collection }, hazards, actor] = await Promise.all([parkTrailsGeoJson(park), parkHazardsGeoJson(park.id), getActor()]);
   const staff = can(actor, "trail:write", { parkId: park.id }) || can(actor, "hazard:write", { parkId: park.id });
   const properties = collection.features.map((f) => f.properties);
-  const bounds = trailBounds(trails) ?? boundsAround(park.centerLon, park.centerLat);
+  // The trails and the park's boundary; a park with neither opens on its other ground, else around its location.
+  const boundary = park.mapLayers?.boundary ? collectionBounds(park.mapLayers.boundary) : null;
+  const bounds = unionBounds(trailBounds(trails), boundary) ?? collectionBounds(parkBaseLayersGeoJson(park)) ?? boundsAround(park.centerLon, park.centerLat);
+  const missing = can(actor, "park:update", { parkId: park.id }) ? missingGroundLayers(park.mapLayers ?? {}) : [];
 
   return (
     <section className="space-y-4">
@@ -40,6 +44,12 @@ export default async function ParkMapPage({ params }: Props) {
           {staff && <Link href={`/staff/${park.slug}/map`} className="btn-quiet">Move pins</Link>}
         </nav>
       </header>
+      {missing.length > 0 && (
+        <p className="rounded-lg bg-flare-100 p-3 text-sm" data-testid="missing-ground">
+          For staff: the map has no {missing.map((layer) => GROUND_LAYER_INFO[layer].label.toLowerCase()).join(", ")} yet.{" "}
+          <Link href={`/staff/${park.slug}/settings#ground-heading`} className="font-semibold underline">Upload them in the park settings</Link>.
+        </p>
+      )}
       <a href="#trail-list" className="sr-only focus:not-sr-only">Skip the map: go to the list of trails and hazards</a>
       <ParkMapLoader styleUrl={parkDataUrls(park.slug).style} bounds={bounds} timeZone={park.timeZone} trails={properties} hazards={hazards.features.map((f) => f.properties)} />
       <MapLegend />

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
-import { statusChanges } from "@/lib/audit/activity";
+import { setupEvents, statusChanges } from "@/lib/audit/activity";
 import { parkToday } from "@/lib/conditions/park-today";
 import { parkLocalTime, shiftDate } from "@/lib/shared/park-clock";
 import { requireParkAccess } from "@/lib/parks/queries";
@@ -17,7 +17,7 @@ export default async function ActivityPage({ params, searchParams }: Props) {
   const [{ parkSlug }, query, actor] = await Promise.all([params, searchParams, getActor()]);
   const park = await requireParkAccess(parkSlug, "audit:read");
   const before = Number(query.before);
-  const { changes, olderBefore } = await statusChanges(park.id, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined });
+  const [{ changes, olderBefore }, teamEvents] = await Promise.all([statusChanges(park.id, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined }), setupEvents(park.id)]);
   const today = parkToday(park);
   const day = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone: park.timeZone, day: "numeric", month: "short" }).format(new Date(iso));
   return (
@@ -79,6 +79,21 @@ export default async function ActivityPage({ params, searchParams }: Props) {
           </Link>
         )}
       </div>
+      <section className="card space-y-2" aria-labelledby="team-activity">
+        <h2 id="team-activity" className="text-lg font-bold">Team, settings and ground</h2>
+        {teamEvents.length === 0 ? (
+          <p>No changes yet.</p>
+        ) : (
+          <ul className="divide-y divide-loam-100 text-sm" data-testid="setup-activity">
+            {teamEvents.map((e) => (
+              <li key={e.id} className="py-2">
+                <span className="block text-loam-600">{day(e.at)} {parkLocalTime(new Date(e.at), park.timeZone)} · {e.actorName ?? "(removed account)"}</span>
+                {e.text}
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
     </section>
   );
 }
