@@ -56,8 +56,10 @@ function nearestDistanceM(segments: Position[][], center: LonLat, swap: boolean)
 /** Refuses a line far from the park, saying how far, and recognises latitude and longitude swapped. */
 function checkNearPark(segments: Position[][], center: LonLat): void {
   const limit = TRAIL_LIMITS.maxDistanceFromParkM;
+  // One point near enough settles it; the nearest distance is measured only to explain a refusal.
+  const target = [center.lon, center.lat];
+  if (segments.some((segment) => segment.some((p) => distanceM(p, target) <= limit))) return;
   const distance = nearestDistanceM(segments, center, false);
-  if (distance <= limit) return;
   const swappedFits = segments.every((s) => s.every((p) => inRange(p[1], p[0])));
   if (swappedFits && nearestDistanceM(segments, center, true) <= limit) {
     throw fail("Latitude and longitude look swapped: with them exchanged, the line lies in the park. Export the file again with longitude first (GeoJSON) or with lat and lon in their own attributes (GPX).");

@@ -13,20 +13,21 @@ function notANumber(tag: PointTag, index: number, what: string, value: string): 
   return new AppError(422, `${LABEL[tag]} ${index + 1} has ${what} "${shown}", which is not a number.`, "file");
 }
 
+function coordinate(value: string | undefined, attr: "lat" | "lon", tag: PointTag, index: number): number {
+  const what = attr === "lat" ? "latitude" : "longitude";
+  if (value === undefined) throw new AppError(422, `${LABEL[tag]} ${index + 1} has no ${what} (the "${attr}" attribute is required).`, "file");
+  if (!DECIMAL.test(value)) throw notANumber(tag, index, what, value);
+  return Number.parseFloat(value);
+}
+
 /**
  * [lon, lat] of a point element from its attributes, refused when either is missing or not a
- * decimal. Lenient readers skip such points silently; we refuse them so nothing is lost unsaid.
+ * decimal (latitude checked first). Lenient readers skip such points silently; we refuse them so
+ * nothing is lost unsaid.
  */
-export function pointPosition(attribute: (name: string) => string | undefined, tag: PointTag, index: number): Position {
-  const read = (attr: "lat" | "lon") => {
-    const what = attr === "lat" ? "latitude" : "longitude";
-    const value = attribute(attr);
-    if (value === undefined) throw new AppError(422, `${LABEL[tag]} ${index + 1} has no ${what} (the "${attr}" attribute is required).`, "file");
-    if (!DECIMAL.test(value)) throw notANumber(tag, index, what, value);
-    return Number.parseFloat(value);
-  };
-  const lat = read("lat");
-  return [read("lon"), lat];
+export function pointPosition(lat: string | undefined, lon: string | undefined, tag: PointTag, index: number): Position {
+  const latitude = coordinate(lat, "lat", tag, index);
+  return [coordinate(lon, "lon", tag, index), latitude];
 }
 
 /** The elevation of a point from its <ele> text, refused when it is not a decimal. */

@@ -59,6 +59,9 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
   const captures: Capture[] = [];
   const read: GpxRead = { linePoints: 0, trackLines: [], segmentCounts: [], routes: [], waypoints: [] };
   let point: OpenPoint | null = null;
+  // A point's <ele> text, gathered without a closure: a large file has one per point.
+  let eleDepth = -1;
+  let eleText = "";
   let metadataDepth = -1;
   let metadataNamed = false;
   const naming = new Set<Track | Route>();
@@ -75,7 +78,8 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
 
   function openPoint(tag: PointTag, element: SaxesTagNS, depth: number) {
     const index = seen[tag]++;
-    const position = pointPosition((attr) => (element.attributes[attr] as SaxesAttributeNS | undefined)?.value, tag, index);
+    const attributes = element.attributes as Record<string, SaxesAttributeNS | undefined>;
+    const position = pointPosition(attributes.lat?.value, attributes.lon?.value, tag, index);
     if (seen.trkpt + seen.rtept + seen.wpt > TRAIL_LIMITS.maxPoints) throw tooManyPoints();
     let line: Position[] | null = null;
     if (tag === "trkpt") {
@@ -109,9 +113,8 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
     if (depth !== open.depth + 1) return;
     if (name === "ele" && !open.eleSeen) {
       open.eleSeen = true;
-      capture(depth, (value) => {
-        open.position[2] = pointElevation(value, open.tag, open.index);
-      });
+      eleDepth = depth;
+      eleText = "";
     } else if (open.waypoint && (name === "type" || name === "sym") && open.waypoint[name] === undefined) {
       open.waypoint[name] = "";
       capture(depth, (value) => {
@@ -129,12 +132,12 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
     if (at >= 0 && /^<!(DOCTYPE|ENTITY)/i.test(text.slice(at, at + 9))) throw doctypeRefusal();
     throw notWellFormed(error.message);
   });
-  parser.on("text", (value) => {
+  const onText = (value: string) => {
+    if (eleDepth >= 0) eleText += value;
     for (const c of captures) c.parts.push(value);
-  });
-  parser.on("cdata", (value) => {
-    for (const c of captures) c.parts.push(value);
-  });
+  };
+  parser.on("text", onText);
+  parser.on("cdata", onText);
 
   parser.on("opentag", (element) => {
     const depth = names.length;
@@ -181,12 +184,15 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
   parser.on("closetag", (element) => {
     names.pop();
     const depth = names.length;
-    while (captures.length > 0 && captures.at(-1)!.depth === depth) {
+    while (captures.length > 0 && captures[captures.length - 1].depth === depth) {
       const done = captures.pop()!;
       done.deliver(done.parts.join(""));
     }
     if (point) {
-      if (point.depth === depth) {
+      if (eleDepth === depth) {
+        point.position[2] = pointElevation(eleText, point.tag, point.index);
+        eleDepth = -1;
+      } else if (point.depth === depth) {
         closePoint(point);
         point = null;
       }
