@@ -1,6 +1,6 @@
 import "server-only";
 import { QueryTypes } from "sequelize";
-import { sequelize } from "@/models";
+import { primaryRows, sequelize } from "@/models";
 
 /**
  * Answers computed per park (the board, the map's GeoJSON) kept in this process until the park
@@ -39,11 +39,7 @@ export type ParkStamp = { parkId: string; version: string; today: string };
 
 /** The park's current version and park-local date, read from the primary; null when there is no such park. */
 export async function parkStamp(slug: string, now: Date): Promise<ParkStamp | null> {
-  const [row] = await sequelize.query<{ id: string; version: string; today: string }>(VERSION_SQL, {
-    bind: [slug, now.toISOString()],
-    type: QueryTypes.SELECT,
-    useMaster: true,
-  });
+  const [row] = await primaryRows<{ id: string; version: string; today: string }>(VERSION_SQL, [slug, now.toISOString()]);
   return row ? { parkId: row.id, version: row.version, today: row.today } : null;
 }
 
