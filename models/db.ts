@@ -60,3 +60,22 @@ function createSequelize(): Sequelize {
 
 export const sequelize: Sequelize = globalForDb.loamcastSequelize ?? createSequelize();
 if (process.env.NODE_ENV !== "production") globalForDb.loamcastSequelize = sequelize;
+
+type RawConnection = { query(sql: string, params: unknown[]): Promise<{ rows: unknown[] }> };
+type PoolAccess = { getConnection(options: { type: "write"; useMaster: true }): Promise<RawConnection>; releaseConnection(connection: RawConnection): void };
+
+/**
+ * Rows of one read on the primary, through Sequelize's own pool but past its query machinery
+ * (options, hooks, result building): for the per-park version check every cached request makes
+ * (lib/parks/park-cache.ts), where that machinery cost more CPU than the query itself. Errors are
+ * node-postgres's own; lib/shared/db-errors.ts recognises the ones that mean "database away".
+ */
+export async function primaryRows<T>(sql: string, params: unknown[]): Promise<T[]> {
+  const pool = sequelize.connectionManager as unknown as PoolAccess;
+  const connection = await pool.getConnection({ type: "write", useMaster: true });
+  try {
+    return (await connection.query(sql, params)).rows as T[];
+  } finally {
+    pool.releaseConnection(connection);
+  }
+}

@@ -56,7 +56,7 @@ Notice.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Notice.hasMany(NoticeDelivery, { foreignKey: "noticeId", as: "deliveries" });
 NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
 
-export { sequelize } from "@/models/db";
+export { primaryRows, sequelize } from "@/models/db";
 export {
   AccountLink,
   AuditEvent,

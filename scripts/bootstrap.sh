@@ -42,16 +42,16 @@ load_env() {
   local purpose="$1"
   if [ -f .env ]; then set -a; . ./.env; set +a; fi
   ensure_secrets
-  local pg_port smtp_port control_port db app_port
+  local pg_port smtp_port control_port db app_port s3_port
   # LOAMCAST_PORT_OFFSET moves every port at once, so several clones can test side by side.
   local off=${LOAMCAST_PORT_OFFSET:-0}
   if [ "$purpose" = "test" ]; then
-    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}
+    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}; s3_port=$((4567 + off))
   elif [ "$purpose" = "bench" ]; then
     # Its own cluster and database, so `npm run bench` never meets a test run's data (or its pg_stop).
-    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off))
+    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off)); s3_port=$((4568 + off))
   else
-    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}
+    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}; s3_port=$((4566 + off))
   fi
   export LOAMCAST_PURPOSE="$purpose" PG_PORT="$pg_port" PORT="$app_port"
   export PG_PASSWORD="${PG_PASSWORD:-$GENERATED_PG_PASSWORD}"
@@ -65,6 +65,18 @@ load_env() {
     export SMTP_URL="smtp://127.0.0.1:${smtp_port}" FAKE_SMTP_CONTROL_URL="http://127.0.0.1:${control_port}"
   fi
   export PHOTO_STORAGE_DIR="${PHOTO_STORAGE_DIR:-.local/photos-${purpose}}"
+  # PHOTO_STORAGE=s3 without an S3_ENDPOINT of your own: the local fake S3 server (s3rver) is started and used.
+  S3_FAKE_PORT="$s3_port"
+  [ "${PHOTO_STORAGE:-local}" = s3 ] && use_fake_s3
+  return 0
+}
+
+# Points the S3 photo driver at the local fake (unless S3_ENDPOINT names a real store).
+use_fake_s3() {
+  [ -z "${S3_ENDPOINT:-}" ] || [ -n "${FAKE_S3_DIR:-}" ] || return 0
+  export PHOTO_STORAGE=s3 S3_ENDPOINT="http://127.0.0.1:${S3_FAKE_PORT}" S3_BUCKET="${S3_BUCKET:-loamcast-photos-${LOAMCAST_PURPOSE}}"
+  export S3_REGION="${S3_REGION:-us-east-1}" S3_FORCE_PATH_STYLE=true S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
+  export FAKE_S3_DIR=".local/s3-${LOAMCAST_PURPOSE}"
 }
 
 port_free_or_die() {
@@ -86,6 +98,19 @@ start_fake_smtp() {
     sleep 0.2
   done
   echo "✗ The fake SMTP server did not start" >&2; exit 1
+}
+
+start_fake_s3() {
+  [ -n "${FAKE_S3_DIR:-}" ] || return 0
+  port_free_or_die "$S3_FAKE_PORT" "fake S3 server"
+  mkdir -p "$FAKE_S3_DIR"
+  node --conditions=react-server --import tsx scripts/fake-s3.ts &
+  CHILD_PIDS+=($!)
+  for _ in $(seq 1 50); do
+    (exec 3<>"/dev/tcp/127.0.0.1/$S3_FAKE_PORT") 2>/dev/null && return 0
+    sleep 0.2
+  done
+  echo "✗ The fake S3 server did not start" >&2; exit 1
 }
 
 stop_children() {

@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# npm start: install what is missing, start PostgreSQL and the fake SMTP server,
+# npm start: install what is missing, start PostgreSQL and the fake SMTP server (and the fake
+# S3 server with PHOTO_STORAGE=s3),
 # migrate, seed the demo park into an empty database, build if needed, serve.
 set -euo pipefail
 . "$(dirname "$0")/bootstrap.sh"
@@ -21,6 +22,7 @@ trap cleanup EXIT INT TERM
 pg_start dev "$PG_PORT" "$PG_PASSWORD"
 node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
 start_fake_smtp
+start_fake_s3
 build_if_needed
 if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 say "› Loamcast on http://localhost:$PORT  (demo accounts in README.md; Ctrl-C stops everything)"

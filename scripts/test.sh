@@ -48,9 +48,20 @@ else
   RESULT[browser]=FAIL
 fi
 
+# Photos in object storage: the storage, photo and two-instance tests once more with PHOTO_STORAGE=s3,
+# against the local fake S3 server. The demo is seeded again so its photos are in the bucket.
+s3_stage() {
+  use_fake_s3 && rm -rf "$FAKE_S3_DIR" && start_fake_s3 || return 1
+  env DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/vitest run --project integration tests/integration/server tests/integration/hazards --reporter=default --reporter=json --outputFile=.local/test-results/integration-s3.json || return 1
+  [ "${RESULT[build]}" = pass ] || return 1
+  node_modules/.bin/tsx --conditions=react-server scripts/db.ts fresh || return 1
+  PLAYWRIGHT_JSON_OUTPUT_NAME=.local/test-results/e2e-s3.json node_modules/.bin/playwright test tests/e2e/two-instances.spec.ts --reporter=list,json
+}
+run_step s3 s3_stage
+
 node scripts/test-summary.mjs
 status=0
-for step in lint typecheck unit integration build browser; do
+for step in lint typecheck unit integration build browser s3; do
   printf '  %-12s %s\n' "$step" "${RESULT[$step]}"
   [ "${RESULT[$step]}" = pass ] || status=1
 done

@@ -3,6 +3,8 @@ import { QueryTypes } from "sequelize";
 import { changesSinceYesterday, type DayChanges } from "@/lib/conditions/pure/changes";
 import { effectiveStatus } from "@/lib/conditions/pure/effective-status";
 import type { FeatureStates, ParkStateKind, ReportStatus } from "@/lib/conditions/pure/schemas";
+import { cachedForPark } from "@/lib/parks/park-cache";
+import { prepareJson, type PreparedJson } from "@/lib/server/api/etag";
 import { sequelize } from "@/models";
 import { BOARD_SQL } from "./board-sql";
 
@@ -95,9 +97,9 @@ function trailFrom(row: Row, parkState: BoardParkState | null): BoardTrail {
   };
 }
 
-/** Today's board for a park, from one indexed query (BOARD_SQL); null when there is no such park. */
-export async function boardForPark(slug: string, now = new Date()): Promise<Board | null> {
-  const rows = await sequelize.query<Row>(BOARD_SQL, { bind: [slug, now.toISOString()], type: QueryTypes.SELECT });
+/** The board at `now`, from one indexed query (BOARD_SQL); null when there is no such park. */
+async function readBoard(slug: string, now: Date, useMaster = false): Promise<Board | null> {
+  const rows = await sequelize.query<Row>(BOARD_SQL, { bind: [slug, now.toISOString()], type: QueryTypes.SELECT, useMaster });
   if (rows.length === 0) return null;
   const first = rows[0];
   const parkState = first.park_state ? { ...first.park_state, startsAt: iso(first.park_state.startsAt)!, endsAt: iso(first.park_state.endsAt) } : null;
@@ -111,4 +113,28 @@ export async function boardForPark(slug: string, now = new Date()): Promise<Boar
     trails,
     parkHazards: hazards(first.park_hazards),
   };
+}
+
+/** The board with its JSON text and ETag, as the API sends it. */
+export type BoardAnswer = PreparedJson & { board: Board };
+
+
+/**
+ * Today's board, its JSON and ETag, from the per-park cache (lib/parks/park-cache.ts): computed
+ * once per change of the park, whichever instance wrote it. Callers share the answer: never
+ * modify it. Null when there is no such park.
+ */
+export async function boardAnswer(slug: string): Promise<BoardAnswer | null> {
+  const answer = await cachedForPark(slug, "board", async () => {
+    const board = await readBoard(slug, new Date(), true);
+    // The ETag ignores generatedAt, so an unchanged board answers 304 to a phone on poor signal.
+    return board && { board, ...prepareJson(board, { ...board, generatedAt: null }) };
+  });
+  return answer ?? null;
+}
+
+/** Today's board for a park (cached), or the board at another instant when `now` is given; null when there is no such park. */
+export async function boardForPark(slug: string, now?: Date): Promise<Board | null> {
+  if (now) return readBoard(slug, now);
+  return (await boardAnswer(slug))?.board ?? null;
 }

@@ -9,8 +9,8 @@ export const parkToday = (park: { timeZone: string }, now = new Date()) => parkL
  * The current revision of each trail's report for one park-local date, keyed by trail id:
  * one indexed query (trail_reports_board) whatever the number of trails.
  */
-export async function currentReportsByTrail(parkId: string, reportDate: string): Promise<Map<string, TrailReport>> {
-  const rows = await TrailReport.findAll({ where: { parkId, reportDate, isCurrent: true } });
+export async function currentReportsByTrail(parkId: string, reportDate: string, read: { useMaster?: boolean } = {}): Promise<Map<string, TrailReport>> {
+  const rows = await TrailReport.findAll({ where: { parkId, reportDate, isCurrent: true }, ...read });
   return new Map(rows.map((r) => [r.trailId, r]));
 }
 

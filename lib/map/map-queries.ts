@@ -3,41 +3,57 @@ import { fn, col, Op } from "sequelize";
 import { parkToday, currentReportsByTrail } from "@/lib/conditions/park-today";
 import { hazardsCollection, trailFeaturesCollection, trailsCollection, type TodayReport } from "@/lib/map/pure/geojson";
 import { parkLayersCollection } from "@/lib/map/pure/park-layers";
+import { cachedForPark } from "@/lib/parks/park-cache";
+import { prepareJson } from "@/lib/server/api/etag";
 import { Hazard, Trail, TrailFeature, TrailReport, type Park } from "@/models";
 
 /** Reads for the park map: one function per question, each scoped to one park. */
 
 const TRAIL_MAP_COLUMNS = ["id", "name", "difficulty", "kind", "direction", "lengthM", "descentM", "maxGradePct", "simplified", "minLon", "minLat", "maxLon", "maxLat"] as const;
 
-export async function mapTrails(parkId: string) {
-  return Trail.findAll({ where: { parkId, archivedAt: null }, attributes: [...TRAIL_MAP_COLUMNS], order: [["name", "ASC"]] });
+/** Where a read goes: `useMaster` sends it to the primary (a cached answer must not come from a lagging replica). */
+export type ReadFrom = { useMaster?: boolean };
+
+export async function mapTrails(parkId: string, read: ReadFrom = {}) {
+  return Trail.findAll({ where: { parkId, archivedAt: null }, attributes: [...TRAIL_MAP_COLUMNS], order: [["name", "ASC"]], ...read });
 }
 
 /** When each trail of the park was last inspected, any day (the newest current report). */
-export async function lastReportTimes(parkId: string): Promise<Map<string, Date>> {
+export async function lastReportTimes(parkId: string, read: ReadFrom = {}): Promise<Map<string, Date>> {
   const rows = (await TrailReport.findAll({
     attributes: ["trailId", [fn("max", col("reported_at")), "lastReportAt"]],
     where: { parkId, isCurrent: true },
     group: ["trailId"],
     raw: true,
+    ...read,
   })) as unknown as { trailId: string; lastReportAt: Date | string }[];
   return new Map(rows.map((r) => [r.trailId, new Date(r.lastReportAt)]));
 }
 
-/** The park's trails as GeoJSON, each with today's status (null when nobody has inspected it yet). */
-export async function parkTrailsGeoJson(park: Park, now = new Date()) {
-  const [trails, today, last] = await Promise.all([mapTrails(park.id), currentReportsByTrail(park.id, parkToday(park, now)), lastReportTimes(park.id)]);
-  const todayByTrail = new Map<string, TodayReport>([...today].map(([id, r]) => [id, { status: r.status, surfaces: r.surfaces ?? [] }]));
+/** The park's trails as GeoJSON, each with the status of `today` (null when nobody has inspected it yet). */
+async function trailsOnDay(parkId: string, today: string, read: ReadFrom = {}) {
+  const [trails, reports, last] = await Promise.all([mapTrails(parkId, read), currentReportsByTrail(parkId, today, read), lastReportTimes(parkId, read)]);
+  const todayByTrail = new Map<string, TodayReport>([...reports].map(([id, r]) => [id, { status: r.status, surfaces: r.surfaces ?? [] }]));
   return { trails, collection: trailsCollection(trails.map((t) => t.get({ plain: true })), todayByTrail, last) };
 }
 
-export async function openHazards(parkId: string) {
-  return Hazard.findAll({ where: { parkId, resolvedAt: null }, order: [["reportedAt", "DESC"]] });
+/** The park's trails as GeoJSON, each with today's status. */
+export const parkTrailsGeoJson = (park: Park, now = new Date()) => trailsOnDay(park.id, parkToday(park, now));
+
+export async function openHazards(parkId: string, read: ReadFrom = {}) {
+  return Hazard.findAll({ where: { parkId, resolvedAt: null }, order: [["reportedAt", "DESC"]], ...read });
 }
 
-export async function parkHazardsGeoJson(parkId: string) {
-  return hazardsCollection((await openHazards(parkId)).map((h) => h.get({ plain: true })));
+export async function parkHazardsGeoJson(parkId: string, read: ReadFrom = {}) {
+  return hazardsCollection((await openHazards(parkId, read)).map((h) => h.get({ plain: true })));
 }
+
+/** trails.geojson, serialised, from the per-park cache (lib/parks/park-cache.ts); null when there is no such park. */
+export const trailsGeoJsonAnswer = (slug: string) =>
+  cachedForPark(slug, "trails.geojson", async ({ parkId, today }) => prepareJson((await trailsOnDay(parkId, today, { useMaster: true })).collection));
+
+/** hazards.geojson, serialised, from the per-park cache; null when there is no such park. */
+export const hazardsGeoJsonAnswer = (slug: string) => cachedForPark(slug, "hazards.geojson", async ({ parkId }) => prepareJson(await parkHazardsGeoJson(parkId, { useMaster: true })));
 
 export async function parkTrailFeatures(parkId: string) {
   const trails = await Trail.findAll({ where: { parkId, archivedAt: null }, attributes: ["id", "name"] });

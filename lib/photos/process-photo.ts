@@ -37,11 +37,14 @@ export async function processPhoto(upload: PhotoUpload, index = 0): Promise<Proc
 
   try {
     const resize = (px: number) => ({ width: px, height: px, fit: "inside" as const, withoutEnlargement: true });
+    // Plain libjpeg-turbo, not mozjpeg: on a 12-megapixel phone photo mozjpeg took 5–10 × as long
+    // (9.7 s against 1.9 s on the shared 2-core machine) for files about a fifth smaller, and a
+    // ranger waits for this before the hazard is saved (docs/benchmarks.md, Hazard photos).
     const { data: full, info } = await input()
       .resize(resize(PHOTO_LIMITS.fullMaxPx))
-      .jpeg({ quality: PHOTO_LIMITS.quality, mozjpeg: true })
+      .jpeg({ quality: PHOTO_LIMITS.quality })
       .toBuffer({ resolveWithObject: true });
-    const thumb = await sharp(full).resize(resize(PHOTO_LIMITS.thumbMaxPx)).jpeg({ quality: 75, mozjpeg: true }).toBuffer();
+    const thumb = await sharp(full).resize(resize(PHOTO_LIMITS.thumbMaxPx)).jpeg({ quality: 75 }).toBuffer();
     return { full, thumb, width: info.width, height: info.height, contentType: "image/jpeg" };
   } catch (error) {
     throw refusal(error, what);

@@ -19,13 +19,20 @@ const envSchema = z.object({
   SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
   FAKE_SMTP_CONTROL_URL: z.string().url().optional(),
   MAIL_FROM: z.string().default("Loamcast <no-reply@loamcast.test>"),
+  PHOTO_STORAGE: z.enum(["local", "s3"]).default("local"),
   PHOTO_STORAGE_DIR: z.string().min(1).default(".local/photos-dev"),
+  S3_BUCKET: z.string().min(3).max(63).optional(),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("false"),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
   MAP_STYLE_URL: z.string().url().optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SECURE_COOKIES: z.enum(["true", "false"]).optional(),
   /** Reverse proxies in front of the app that append to X-Forwarded-For (0: the socket peer is the client). */
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
-});
+}).refine((e) => e.PHOTO_STORAGE !== "s3" || e.S3_BUCKET, { message: "PHOTO_STORAGE=s3 needs S3_BUCKET", path: ["S3_BUCKET"] });
 
 export type Env = z.infer<typeof envSchema>;
 

@@ -1,11 +1,13 @@
 import { expect, request as apiRequest, test } from "@playwright/test";
+import sharp from "sharp";
 import { demo, shot, signInAs } from "./helpers";
 
 /**
  * Scaling out: two `next start` processes on loopback (playwright.config.ts starts both, same
- * build, same environment), one PostgreSQL database. Neither keeps state of its own: a report
- * written through one is on the other's board, and a session cookie issued by one is accepted by
- * the other (a JWT signed with the shared NEXTAUTH_SECRET).
+ * build, same environment), one PostgreSQL database. Each caches boards and map layers, but the
+ * database decides when a cached answer is stale: a report written through one is on the other's
+ * board at once, and a session cookie issued by one is accepted by the other (a JWT signed with
+ * the shared NEXTAUTH_SECRET). npm test runs this file again with PHOTO_STORAGE=s3.
  */
 const B = process.env.SECOND_APP_URL!;
 const PARK = "harrow-ridge";
@@ -21,13 +23,41 @@ test("a report posted through instance A is on instance B's board, and A's sessi
   // Signed in on A; a report through A's API.
   await signInAs(page, demo("ranger"));
   const before = await trailOf(await page.request.get(`/api/parks/${PARK}/board`), "Cedar Skip");
+  // B has the board in its cache, and answers 304 to a phone holding it.
+  const cachedOnB = await anonymousB.get(`/api/parks/${PARK}/board`);
+  const etagOnB = cachedOnB.headers()["etag"];
+  expect(etagOnB).toBeTruthy();
+  expect((await anonymousB.get(`/api/parks/${PARK}/board`, { headers: { "if-none-match": etagOnB } })).status()).toBe(304);
+
   const note = `Posted through instance A (${test.info().project.name}, ${Date.now().toString(36)})`;
   const posted = await page.request.post(`/api/trails/${before.id}/reports`, { data: { status: "open", surfaces: ["tacky"], note, baseRevision: before.revision } });
   expect(posted.status()).toBe(201);
 
-  // B reads the same database: its API and its board page show the report.
-  const onB = await trailOf(await anonymousB.get(`/api/parks/${PARK}/board`), "Cedar Skip");
+  // B reads the same database, and its cached board does not outlive A's write: the very next
+  // request gets the report, with a new ETag, so the phone's copy is replaced.
+  const afterWrite = await anonymousB.get(`/api/parks/${PARK}/board`, { headers: { "if-none-match": etagOnB } });
+  expect(afterWrite.status()).toBe(200);
+  expect(afterWrite.headers()["etag"]).not.toBe(etagOnB);
+  const onB = await trailOf(afterWrite, "Cedar Skip");
   expect(onB).toMatchObject({ note, status: "open", revision: before.revision + 1 });
+
+  // A hazard with a photo, reported through A: on B's map at once, and its photo served by B
+  // (photos live behind the storage interface: one folder, or one bucket with PHOTO_STORAGE=s3).
+  const hazardsOnB = async () => (await (await anonymousB.get(`/api/parks/${PARK}/hazards.geojson`)).json()).features as { properties: { id: string } }[];
+  const pinsBefore = await hazardsOnB();
+  const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#6b8e23" } }).jpeg().toBuffer();
+  const reported = await page.request.post(`/api/parks/${PARK}/hazards`, {
+    multipart: { kind: "other", note: `Two-instance check ${Date.now().toString(36)}`, lon: "-121.94", lat: "47.3", photos: { name: "pin.jpg", mimeType: "image/jpeg", buffer: jpeg } },
+  });
+  expect(reported.status()).toBe(201);
+  const { hazard } = await reported.json();
+  expect((await hazardsOnB()).map((f) => f.properties.id)).toEqual(expect.arrayContaining([...pinsBefore.map((f) => f.properties.id), hazard.id]));
+  const hazardPhoto = await anonymousB.get(`/api/photos/${hazard.photoIds[0]}?size=full`);
+  expect(hazardPhoto.status()).toBe(200);
+  expect([...(await hazardPhoto.body()).subarray(0, 3)]).toEqual([0xff, 0xd8, 0xff]);
+  const resolved = await page.request.patch(`/api/hazards/${hazard.id}`, { data: { lockVersion: hazard.lockVersion, resolved: true } });
+  expect(resolved.status()).toBe(200);
+  expect((await hazardsOnB()).map((f) => f.properties.id)).not.toContain(hazard.id);
   // Photos live behind the storage interface, here one folder both instances share.
   const board = await (await anonymousB.get(`/api/parks/${PARK}/board`)).json();
   const photoId = [...board.trails, { hazards: board.parkHazards }].flatMap((t: { hazards: { photoIds: string[] }[] }) => t.hazards.flatMap((h) => h.photoIds))[0];

@@ -1,21 +1,29 @@
 import "server-only";
 import { createHash } from "node:crypto";
 
+/** A body serialised once with its ETag, so a cached answer is neither re-serialised nor re-hashed. */
+export type PreparedJson = { text: string; etag: string };
+
+/**
+ * `tagOf` names what the tag is computed from, when parts of the body (a generation time) change
+ * on every request without changing its meaning.
+ */
+export function prepareJson(body: unknown, tagOf: unknown = body): PreparedJson {
+  const text = JSON.stringify(body);
+  const tagged = tagOf === body ? text : JSON.stringify(tagOf);
+  return { text, etag: `"${createHash("sha1").update(tagged).digest("base64url")}"` };
+}
+
 /**
  * JSON with an ETag, so a phone on a weak signal that already holds the current body gets a 304
  * with nothing in it instead of the whole body again. Statuses change during the day: caches must
- * check back every time. `tagOf` names what the tag is computed from, when parts of the body (a
- * generation time) change on every request without changing its meaning.
+ * check back every time.
  */
-export function jsonWithEtag(
-  body: unknown,
-  request: Request | undefined,
-  { contentType = "application/json", tagOf = body }: { contentType?: string; tagOf?: unknown } = {},
-): Response {
-  const text = JSON.stringify(body);
-  const etag = `"${createHash("sha1").update(tagOf === body ? text : JSON.stringify(tagOf)).digest("base64url")}"`;
+export function preparedResponse({ text, etag }: PreparedJson, request: Request | undefined, contentType = "application/json"): Response {
   const headers = { "content-type": `${contentType}; charset=utf-8`, "cache-control": "public, max-age=0, must-revalidate", etag };
   const known = request?.headers.get("if-none-match");
   if (known && known.split(",").some((tag) => tag.trim() === etag)) return new Response(null, { status: 304, headers });
   return new Response(text, { status: 200, headers });
 }
+
+export const jsonWithEtag = (body: unknown, request: Request | undefined, contentType?: string) => preparedResponse(prepareJson(body), request, contentType);

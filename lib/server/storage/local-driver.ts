@@ -1,8 +1,8 @@
 import "server-only";
-import { mkdir, readFile, rename, rm, writeFile } from "node:fs/promises";
+import { mkdir, readdir, readFile, rename, rm, writeFile } from "node:fs/promises";
 import { randomUUID } from "node:crypto";
 import path from "node:path";
-import { SAFE_KEY, type BlobStorage, type StoredObject } from "./types";
+import { checkKey, type BlobStorage, type StoredObject } from "./types";
 
 /**
  * Files under one folder (outside public/, so nothing is served without our headers).
@@ -12,8 +12,7 @@ import { SAFE_KEY, type BlobStorage, type StoredObject } from "./types";
 export function localDriver(root: string): BlobStorage {
   const base = path.resolve(root);
   const fileFor = (key: string) => {
-    if (!SAFE_KEY.test(key) || key.length > 200) throw new Error(`Refusing storage key ${JSON.stringify(key)}`);
-    const file = path.join(base, key);
+    const file = path.join(base, checkKey(key));
     if (!file.startsWith(base + path.sep)) throw new Error("Storage key escapes the storage folder");
     return file;
   };
@@ -44,6 +43,19 @@ export function localDriver(root: string): BlobStorage {
     async delete(key) {
       const file = fileFor(key);
       await Promise.all([rm(file, { force: true }), rm(`${file}.type`, { force: true })]);
+    },
+    async list(prefix = "") {
+      try {
+        const entries = await readdir(base, { recursive: true, withFileTypes: true });
+        return entries
+          .filter((e) => e.isFile() && !e.name.endsWith(".type") && !e.name.endsWith(".partial"))
+          .map((e) => path.relative(base, path.join(e.parentPath, e.name)).split(path.sep).join("/"))
+          .filter((key) => key.startsWith(prefix))
+          .sort();
+      } catch (error) {
+        if ((error as NodeJS.ErrnoException).code === "ENOENT") return [];
+        throw error;
+      }
     },
   };
 }

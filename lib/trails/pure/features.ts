@@ -63,26 +63,33 @@ const SHORTLIST_SLACK_DEG = 2 / 111_195;
  */
 function snapOne(w: TrailWaypoint, segments: Position[][], startsM: number[][]): { distanceAlongM: number; offsetM: number } {
   const scale = Math.cos((w.lat * Math.PI) / 180);
-  const distances = segments.map((segment) => {
-    const out = new Float64Array(Math.max(0, segment.length - 1));
-    for (let i = 0; i < out.length; i++) {
-      const [a, b] = [segment[i], segment[i + 1]];
-      out[i] = planarSquared((a[0] - w.lon) * scale, a[1] - w.lat, (b[0] - w.lon) * scale, b[1] - w.lat);
+  // One flat pass: keep every step within the shortlist limit of the nearest found so far, then
+  // drop those the final nearest puts out of reach.
+  let nearestSquared = Infinity;
+  let limit = Infinity;
+  const candidates: Array<{ s: number; i: number; d: number }> = [];
+  for (let s = 0; s < segments.length; s++) {
+    const segment = segments[s];
+    for (let i = 0; i < segment.length - 1; i++) {
+      const a = segment[i];
+      const b = segment[i + 1];
+      const d = planarSquared((a[0] - w.lon) * scale, a[1] - w.lat, (b[0] - w.lon) * scale, b[1] - w.lat);
+      if (d > limit) continue;
+      if (d < nearestSquared) {
+        nearestSquared = d;
+        limit = (Math.sqrt(d) * SHORTLIST_FACTOR + SHORTLIST_SLACK_DEG) ** 2;
+      }
+      candidates.push({ s, i, d });
     }
-    return out;
-  });
-  const nearest = Math.sqrt(distances.reduce((m, d) => d.reduce((n, x) => Math.min(n, x), m), Infinity));
-  const limit = (nearest * SHORTLIST_FACTOR + SHORTLIST_SLACK_DEG) ** 2;
+  }
 
   let best = { distanceAlongM: 0, offsetM: Infinity };
-  distances.forEach((d, s) => {
-    for (let i = 0; i < d.length; i++) {
-      if (d[i] > limit) continue;
-      const step = lineString([segments[s][i], segments[s][i + 1]]);
-      const { pointDistance, totalDistance } = nearestPointOnLine(step, [w.lon, w.lat], { units: "meters" }).properties;
-      if (pointDistance < best.offsetM) best = { distanceAlongM: startsM[s][i] + totalDistance, offsetM: pointDistance };
-    }
-  });
+  for (const { s, i, d } of candidates) {
+    if (d > limit) continue;
+    const step = lineString([segments[s][i], segments[s][i + 1]]);
+    const { pointDistance, totalDistance } = nearestPointOnLine(step, [w.lon, w.lat], { units: "meters" }).properties;
+    if (pointDistance < best.offsetM) best = { distanceAlongM: startsM[s][i] + totalDistance, offsetM: pointDistance };
+  }
   return best;
 }
 

@@ -56,8 +56,10 @@ function nearestDistanceM(segments: Position[][], center: LonLat, swap: boolean)
 /** Refuses a line far from the park, saying how far, and recognises latitude and longitude swapped. */
 function checkNearPark(segments: Position[][], center: LonLat): void {
   const limit = TRAIL_LIMITS.maxDistanceFromParkM;
+  // One point near enough settles it; the nearest distance is measured only to explain a refusal.
+  const target = [center.lon, center.lat];
+  if (segments.some((segment) => segment.some((p) => distanceM(p, target) <= limit))) return;
   const distance = nearestDistanceM(segments, center, false);
-  if (distance <= limit) return;
   const swappedFits = segments.every((s) => s.every((p) => inRange(p[1], p[0])));
   if (swappedFits && nearestDistanceM(segments, center, true) <= limit) {
     throw fail("Latitude and longitude look swapped: with them exchanged, the line lies in the park. Export the file again with longitude first (GeoJSON) or with lat and lon in their own attributes (GPX).");
@@ -65,10 +67,13 @@ function checkNearPark(segments: Position[][], center: LonLat): void {
   throw fail(`The trail is ${formatDistance(distance)} from the park's location (the limit is ${formatDistance(limit)}). Check that this is the right file and that the park's location is set correctly.`);
 }
 
-function checkSteps(segments: Position[][]): void {
+/** Refuses an impossible jump between neighbouring points; returns the line's whole length. */
+function checkSteps(segments: Position[][]): number {
+  let lengthM = 0;
   segments.forEach((segment, s) => {
     for (let i = 1; i < segment.length; i++) {
       const step = distanceM(segment[i - 1], segment[i]);
+      lengthM += step;
       if (step > TRAIL_LIMITS.maxStepM) {
         throw fail(
           `Points ${i} and ${i + 1}${segments.length > 1 ? ` of segment ${s + 1}` : ""} are ${formatDistance(step, Math.ceil)} apart; a recording never jumps that far in one step (limit ${formatDistance(TRAIL_LIMITS.maxStepM)}). Remove the stray point or split the line there.`,
@@ -76,6 +81,22 @@ function checkSteps(segments: Position[][]): void {
       }
     }
   });
+  return lengthM;
+}
+
+function refuseTooShort(lengthM: number): void {
+  if (lengthM >= TRAIL_LIMITS.minTrailLengthM) return;
+  throw fail(
+    `The line is ${formatDistance(lengthM)} long, too short for a trail (the shortest accepted is ${formatDistance(TRAIL_LIMITS.minTrailLengthM)}). Check that the recording ran for the whole trail.`,
+  );
+}
+
+/** A device without an altimeter writes 0 for every elevation: that is no elevation, not a flat trail. */
+function dropZeroElevations(segments: Position[][], warnings: string[]): Position[][] {
+  const allZero = segments.every((segment) => segment.every((p) => p.length > 2 && p[2] === 0));
+  if (!allZero) return segments;
+  warnings.push("Every elevation in the file is 0 m, as devices without an altimeter write; the trail was read without elevation.");
+  return segments.map((segment) => segment.map((p) => [p[0], p[1]]));
 }
 
 function hasLength(segment: Position[]): boolean {
@@ -110,7 +131,7 @@ export function checkTrailGeometry(raw: RawTrail, parkCenter?: LonLat): RawTrail
   });
   if (segments.length === 0) throw singlePointError();
   if (parkCenter) checkNearPark(segments, parkCenter);
-  checkSteps(segments);
+  refuseTooShort(checkSteps(segments));
 
   const name = tidyName(raw.name);
   // Waypoint names become feature names, stored with the same length limit as a trail's name.
@@ -118,5 +139,5 @@ export function checkTrailGeometry(raw: RawTrail, parkCenter?: LonLat): RawTrail
     const tidy = tidyName(waypointName);
     return tidy ? { name: tidy, ...w } : w;
   });
-  return { ...(name ? { name } : {}), segments, waypoints, warnings };
+  return { ...(name ? { name } : {}), segments: dropZeroElevations(segments, warnings), waypoints, warnings };
 }

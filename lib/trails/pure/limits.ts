@@ -7,6 +7,12 @@ export const TRAIL_LIMITS = {
   maxFileBytes: 20 * 1024 * 1024,
   /** Most points (line points plus waypoints) in one file; counted before and during parsing. */
   maxPoints: 200_000,
+  /**
+   * Shortest line taken as a trail. Below it the file is a misfire (a recording started and
+   * stopped at once, a test tap on a phone); the shortest real line in a park, one feature with its
+   * run-in and landing, is longer. Common practice, no published source.
+   */
+  minTrailLengthM: 20,
   /** Longest believable step between consecutive points of one segment. */
   maxStepM: 500,
   /** A line whose nearest point is further than this from the park's centre is refused. */

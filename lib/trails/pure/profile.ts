@@ -1,5 +1,5 @@
 import { AppError } from "@/lib/shared/errors";
-import { distanceM } from "./geo";
+import { cumulativeDistancesM } from "./geo";
 import { hasElevation } from "./stats";
 import type { Position } from "./types";
 
@@ -16,12 +16,11 @@ export function elevationProfile(segments: Position[][], maxPoints = 300): Profi
   if (!Number.isInteger(maxPoints) || maxPoints < 2) throw new AppError(400, "A profile needs at least two points.", "maxPoints");
   if (!hasElevation(segments)) return [];
   const full: ProfilePoint[] = [];
-  let along = 0;
+  let start = 0;
   for (const segment of segments) {
-    segment.forEach((p, i) => {
-      if (i > 0) along += distanceM(segment[i - 1], p);
-      full.push({ dM: along, eleM: p[2] });
-    });
+    const along = cumulativeDistancesM(segment);
+    for (let i = 0; i < segment.length; i++) full.push({ dM: start + along[i], eleM: segment[i][2] });
+    start += along[along.length - 1];
   }
   if (full.length <= maxPoints) return full.map((p) => ({ dM: tenth(p.dM), eleM: tenth(p.eleM) }));
 

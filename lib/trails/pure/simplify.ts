@@ -10,7 +10,9 @@ import type { Position } from "./types";
  * smaller, never larger, than asked. Expects segments as parseTrailFile returns them.
  */
 export function simplifyLine(segments: Position[][], toleranceM = SIMPLIFY_TOLERANCE_M): LineString | MultiLineString {
+  // Turf rewrites the coordinate arrays it is given (mutate) but never the positions in them, so
+  // copying the arrays is enough; cloning every position of a large trail cost more than simplifying.
   const geometry: LineString | MultiLineString =
-    segments.length === 1 ? { type: "LineString", coordinates: segments[0] } : { type: "MultiLineString", coordinates: segments };
-  return simplify(geometry, { tolerance: toleranceM / METRES_PER_DEGREE, highQuality: false, mutate: false });
+    segments.length === 1 ? { type: "LineString", coordinates: segments[0].slice() } : { type: "MultiLineString", coordinates: segments.map((s) => s.slice()) };
+  return simplify(geometry, { tolerance: toleranceM / METRES_PER_DEGREE, highQuality: false, mutate: true });
 }

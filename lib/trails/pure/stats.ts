@@ -14,7 +14,9 @@ export function hasElevation(segments: Position[][]): boolean {
 function boundingBox(segments: Position[][]): [number, number, number, number] {
   let [minLon, minLat, maxLon, maxLat] = [Infinity, Infinity, -Infinity, -Infinity];
   for (const segment of segments) {
-    for (const [lon, lat] of segment) {
+    for (let i = 0; i < segment.length; i++) {
+      const lon = segment[i][0];
+      const lat = segment[i][1];
       if (lon < minLon) minLon = lon;
       if (lon > maxLon) maxLon = lon;
       if (lat < minLat) minLat = lat;

@@ -1,8 +1,6 @@
-import { readdir } from "node:fs/promises";
-import path from "node:path";
 import { loadActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
-import { photoStorageDir } from "@/lib/server/storage";
+import { photoStorage } from "@/lib/server/storage";
 import { Trail, type Park } from "@/models";
 import { addStaff, createPark, createUser } from "../helpers";
 
@@ -60,16 +58,8 @@ export async function parkWithTrails(count: number, timeZone = "Europe/Zurich") 
   return { park, ranger, trails };
 }
 
-/** Every file under the photo storage folder (empty when it does not exist yet). */
-export async function storedFiles(): Promise<string[]> {
-  try {
-    const entries = await readdir(photoStorageDir(), { recursive: true, withFileTypes: true });
-    return entries.filter((e) => e.isFile()).map((e) => path.join(e.parentPath, e.name)).sort();
-  } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === "ENOENT") return [];
-    throw error;
-  }
-}
+/** Every object in the photo storage, whichever driver holds it (empty when there is none yet). */
+export const storedFiles = (): Promise<string[]> => photoStorage().list();
 
 /** The refusal an async call ends with (or a failure when it does not refuse). */
 export async function refusal(promise: Promise<unknown>): Promise<{ status: number; message: string; field?: string; details?: unknown }> {

@@ -1,4 +1,4 @@
-import { readFile } from "node:fs/promises";
+import { photoStorage } from "@/lib/server/storage";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { createHazard, updateHazard } from "@/lib/hazards/hazard-writes";
@@ -29,8 +29,8 @@ describe("hazard photos (ASVS v5.0.0 5.2.1, 5.2.2, 5.3.2)", () => {
     expect(photo.storageKey).toBe(`hazards/${hazard.id}/${photo.id}.jpg`);
     expect(photo.storageKey).not.toContain("IMG_0042");
 
-    const files = await storedFiles();
-    const full = await readFile(files.find((f) => f.endsWith(`${photo.id}.jpg`))!);
+    expect(await storedFiles()).toEqual(expect.arrayContaining([photo.storageKey, photo.thumbKey]));
+    const full = (await photoStorage().get(photo.storageKey))!.bytes;
     const meta = await sharp(full).metadata();
     expect(meta.format).toBe("jpeg");
     expect(meta.exif).toBeUndefined();

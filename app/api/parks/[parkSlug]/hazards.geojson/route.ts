@@ -1,12 +1,14 @@
-// GET /api/parks/{parkSlug}/hazards.geojson: the park's open hazard pins, for the map.
-import { geoJsonResponse } from "@/lib/server/api/geojson-response";
+// GET /api/parks/{parkSlug}/hazards.geojson: the park's open hazard pins, for the map (per-park cache).
+import { preparedResponse } from "@/lib/server/api/etag";
+import { GEOJSON_CONTENT_TYPE } from "@/lib/server/api/geojson-response";
 import { handler } from "@/lib/server/api/handler";
-import { parkHazardsGeoJson } from "@/lib/map/map-queries";
-import { getParkBySlug } from "@/lib/parks/queries";
+import { hazardsGeoJsonAnswer } from "@/lib/map/map-queries";
+import { notFound } from "@/lib/shared/errors";
 
 export const dynamic = "force-dynamic";
 
 export const GET = handler<{ parkSlug: string }>(async ({ request, params }) => {
-  const park = await getParkBySlug(params.parkSlug);
-  return geoJsonResponse(await parkHazardsGeoJson(park.id), request);
+  const answer = await hazardsGeoJsonAnswer(params.parkSlug);
+  if (!answer) throw notFound("Park not found.");
+  return preparedResponse(answer, request, GEOJSON_CONTENT_TYPE);
 });
