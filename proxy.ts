@@ -1,5 +1,5 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { contentSecurityPolicy, staticSecurityHeaders } from "@/lib/server/security-headers";
+import { contentSecurityPolicy, SELF_FRAMED_PATHS, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
  * Runs before every page and API request. Two jobs only:
@@ -28,9 +28,13 @@ export function proxy(request: NextRequest) {
     headers.set("content-security-policy", csp);
     response = NextResponse.next({ request: { headers } });
   }
-  response.headers.set("Content-Security-Policy", csp);
   const production = (process.env.APP_URL ?? "").startsWith("https://");
-  for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) response.headers.set(name, value);
+  // The embeddable card sends its own CSP with the park's frame-ancestors, and no X-Frame-Options.
+  const selfFramed = SELF_FRAMED_PATHS.some((p) => pathname.startsWith(p));
+  if (!selfFramed) response.headers.set("Content-Security-Policy", csp);
+  for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) {
+    if (!(selfFramed && name === "X-Frame-Options")) response.headers.set(name, value);
+  }
   return response;
 }
 

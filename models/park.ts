@@ -16,6 +16,8 @@ export class Park extends Model<InferAttributes<Park>, InferCreationAttributes<P
   declare summitElevationM: number;
   declare fictional: CreationOptional<boolean>;
   declare mapLayers: CreationOptional<ParkMapLayers>;
+  /** Origins allowed to frame the park's status card (`https://example.org`). */
+  declare embedOrigins: CreationOptional<string[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -32,6 +34,7 @@ Park.init(
     summitElevationM: { type: DataTypes.INTEGER, allowNull: false },
     fictional: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     mapLayers: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+    embedOrigins: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

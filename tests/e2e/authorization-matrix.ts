@@ -55,6 +55,7 @@ export const MATRIX: MatrixRow[] = [
   { method: "GET", route: "/api/parks/[parkSlug]/hazards.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/hazards.geojson` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/park-layers.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/park-layers.geojson` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/map-style.json", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/map-style.json` }) },
+  { method: "GET", route: "/embed/parks/[parkSlug]", expect: everyone(200), call: () => ({ path: `/embed/parks/${PARK}` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/closures.ics", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/closures.ics` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/status.json", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/status.json` }) },
   {

@@ -5,6 +5,9 @@ import { getActor } from "@/lib/server/auth/actor";
 import { can, roleInPark } from "@/lib/server/auth/permissions";
 import { listParkStaff } from "@/lib/parks/queries";
 import { Park } from "@/models";
+import { embedSnippet } from "@/lib/reach/pure/embed";
+import { env } from "@/lib/server/env";
+import { EmbedForm } from "./embed-form";
 import { InviteStaffForm } from "./invite-form";
 
 export const dynamic = "force-dynamic";
@@ -19,7 +22,11 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
     <section className="space-y-4">
       <h1 className="text-2xl font-bold">{park.name}: staff desk</h1>
       <StaffConditionsLinks parkSlug={park.slug} />
-      <Link href={`/staff/${park.slug}/notices`} className="btn-quiet">Notices to riders</Link>
+      <div className="flex flex-wrap gap-2">
+        <Link href={`/staff/${park.slug}/notices`} className="btn-quiet">Notices to riders</Link>
+        <Link href={`/parks/${park.slug}/print`} className="btn-quiet">Printable daily sheet</Link>
+        <Link href={`/parks/${park.slug}/print/labels`} className="btn-quiet">Trailhead QR labels</Link>
+      </div>
       <div className="card">
         <h2 className="mb-2 text-lg font-bold">Team</h2>
         <ul className="divide-y divide-loam-100">
@@ -41,6 +48,13 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
         {can(actor, "trail:write", { parkId: park.id }) && <Link href={`/staff/${park.slug}/trails/new`} className="btn-primary">Upload a trail</Link>}
       </div>
       {can(actor, "staff:invite", { parkId: park.id }) && <InviteStaffForm parkSlug={park.slug} />}
+      <EmbedForm
+        parkSlug={park.slug}
+        origins={park.embedOrigins}
+        snippet={embedSnippet(new URL(`/embed/parks/${park.slug}`, env().APP_URL).toString(), park.name)}
+        feedUrl={new URL(`/api/parks/${park.slug}/status.json`, env().APP_URL).toString()}
+        canEdit={can(actor, "park:update", { parkId: park.id })}
+      />
     </section>
   );
 }

@@ -1,0 +1,37 @@
+import "server-only";
+/** The embeddable status card and the park's list of websites allowed to frame it. */
+import { embedCardHtml, embedOriginsSchema, frameAncestors } from "@/lib/reach/pure/embed";
+import { statusFeedFor } from "@/lib/reach/status";
+import { authorize, type Actor } from "@/lib/server/auth/permissions";
+import { embedContentSecurityPolicy } from "@/lib/server/security-headers";
+import { getParkBySlug } from "@/lib/parks/queries";
+import { AppError } from "@/lib/shared/errors";
+import { AuditEvent, sequelize } from "@/models";
+
+/** GET /embed/parks/{slug}: the card, framable only by the park's listed origins. */
+export async function embedCardResponse(slug: string, now = new Date()): Promise<Response> {
+  const park = await getParkBySlug(slug);
+  const feed = await statusFeedFor(slug);
+  return new Response(embedCardHtml(feed, now), {
+    headers: {
+      "Content-Type": "text/html; charset=utf-8",
+      "Content-Security-Policy": embedContentSecurityPolicy(frameAncestors(park.embedOrigins)),
+      // Public and the same for everyone: a shared cache may hold it for a minute.
+      "Cache-Control": "public, max-age=60",
+    },
+  });
+}
+
+/** Managers list the websites (origins) that may frame the card; the list replaces the last one. */
+export async function setEmbedOrigins(actor: Actor | null, slug: string, text: unknown): Promise<string[]> {
+  const park = await getParkBySlug(slug);
+  authorize(actor, "park:update", { parkId: park.id });
+  const parsed = embedOriginsSchema.safeParse(typeof text === "string" ? text : "");
+  if (!parsed.success) throw new AppError(400, parsed.error.issues[0].message, "origins");
+  const origins = parsed.data;
+  await sequelize.transaction(async (transaction) => {
+    await park.update({ embedOrigins: origins }, { transaction });
+    await AuditEvent.create({ parkId: park.id, actorId: actor.id, action: "park.embed-origins", subjectType: "park", subjectId: park.id, data: { origins } }, { transaction });
+  });
+  return origins;
+}
