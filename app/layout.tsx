@@ -27,7 +27,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
         <main id="main" className="mx-auto max-w-5xl px-4 py-6">
           {children}
         </main>
-        <footer className="mx-auto max-w-5xl px-4 pb-8 text-xs text-loam-600">
+        <footer className="mx-auto max-w-5xl px-4 pb-8 text-xs text-loam-600 print:hidden">
           Loamcast · conditions are posted by park staff; always follow park signage and staff on the day.
         </footer>
       </body>

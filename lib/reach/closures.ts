@@ -1,6 +1,7 @@
 import "server-only";
 /** GET /api/parks/{slug}/closures.ics: the park's planned closures as a calendar riders subscribe to. */
 import { Op } from "sequelize";
+import { absoluteUrl } from "@/lib/reach/links";
 import { env } from "@/lib/server/env";
 import { closuresCalendar, noticeClosureEvents, parkStateEvents } from "@/lib/reach/pure/closure-calendar";
 import { Notice, ParkState, Trail, type Park } from "@/models";
@@ -20,6 +21,5 @@ export async function closuresCalendarFor(park: Park, now = new Date()): Promise
     ...parkStateEvents(states.map((s) => s.get({ plain: true })), calendarPark, now),
     ...noticeClosureEvents(notices.map((n) => n.get({ plain: true })), calendarPark, new Map(trails.map((t) => [t.id, t.name]))),
   ];
-  const appUrl = new URL(env().APP_URL);
-  return closuresCalendar(calendarPark, events, { uidDomain: appUrl.hostname, boardUrl: new URL(`/parks/${park.slug}`, appUrl).toString() });
+  return closuresCalendar(calendarPark, events, { uidDomain: new URL(env().APP_URL).hostname, boardUrl: absoluteUrl(`/parks/${park.slug}`) });
 }

@@ -43,3 +43,7 @@ export function zoneOffsetMs(instantMs: number, timeZone: string): number {
   const wall = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));
   return wall - Math.floor(instantMs / 1000) * 1000;
 }
+
+/** "Wednesday 2 December" for a YYYY-MM-DD park-local date. */
+export const longDate = (date: string) =>
+  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));

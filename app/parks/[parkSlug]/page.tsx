@@ -5,6 +5,8 @@ import { BoardFilterLinks } from "@/components/board/board-filters";
 import { BoardLive } from "@/components/board/board-live";
 import { parseBoardFilters } from "@/lib/conditions/pure/board-filters";
 import { boardForPark } from "@/lib/conditions/board";
+import { webcalUrl } from "@/lib/reach/links";
+import { longDate } from "@/lib/shared/time";
 
 export const dynamic = "force-dynamic";
 
@@ -14,9 +16,6 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { parkSlug } = await params;
   return { title: `Today's conditions · ${parkSlug}` };
 }
-
-const longDate = (date: string) =>
-  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
 
 /** The public conditions board: rendered on the server for a fast first paint, refreshed by a small client part. */
 export default async function ParkBoardPage({ params, searchParams }: Props) {
@@ -46,6 +45,10 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
           <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet">
             Get closure e-mails
           </Link>
+          {/* webcal:// asks the rider's calendar app to subscribe, so later changes arrive by themselves. */}
+          <a href={webcalUrl(`/api/parks/${board.park.slug}/closures.ics`)} className="btn-quiet">
+            Subscribe in your calendar
+          </a>
         </p>
       </header>
       <BoardFilterLinks path={path} filters={filters} />

@@ -5,8 +5,8 @@ import { getActor } from "@/lib/server/auth/actor";
 import { can, roleInPark } from "@/lib/server/auth/permissions";
 import { listParkStaff } from "@/lib/parks/queries";
 import { Park } from "@/models";
+import { absoluteUrl } from "@/lib/reach/links";
 import { embedSnippet } from "@/lib/reach/pure/embed";
-import { env } from "@/lib/server/env";
 import { EmbedForm } from "./embed-form";
 import { InviteStaffForm } from "./invite-form";
 
@@ -51,8 +51,8 @@ export default async function StaffParkPage({ params }: { params: Promise<{ park
       <EmbedForm
         parkSlug={park.slug}
         origins={park.embedOrigins}
-        snippet={embedSnippet(new URL(`/embed/parks/${park.slug}`, env().APP_URL).toString(), park.name)}
-        feedUrl={new URL(`/api/parks/${park.slug}/status.json`, env().APP_URL).toString()}
+        snippet={embedSnippet(absoluteUrl(`/embed/parks/${park.slug}`), park.name)}
+        feedUrl={absoluteUrl(`/api/parks/${park.slug}/status.json`)}
         canEdit={can(actor, "park:update", { parkId: park.id })}
       />
     </section>
