@@ -56,6 +56,9 @@ export const MATRIX: MatrixRow[] = [
   { method: "GET", route: "/api/parks/[parkSlug]/park-layers.geojson", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/park-layers.geojson` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/map-style.json", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/map-style.json` }) },
   { method: "GET", route: "/embed/parks/[parkSlug]", expect: everyone(200), call: () => ({ path: `/embed/parks/${PARK}` }) },
+  { method: "GET", route: "/api/parks/[parkSlug]/preview.png", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/preview.png` }) },
+  { method: "GET", route: "/parks/[parkSlug]/manifest.webmanifest", expect: everyone(200), call: () => ({ path: `/parks/${PARK}/manifest.webmanifest` }) },
+  { method: "GET", route: "/serwist/[path]", expect: everyone(200), call: () => ({ path: "/serwist/sw.js" }) },
   { method: "GET", route: "/api/parks/[parkSlug]/closures.ics", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/closures.ics` }) },
   { method: "GET", route: "/api/parks/[parkSlug]/status.json", expect: everyone(200), call: () => ({ path: `/api/parks/${PARK}/status.json` }) },
   {

@@ -1,26 +1,41 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { cache } from "react";
 import { notFound } from "next/navigation";
 import { BoardFilterLinks } from "@/components/board/board-filters";
 import { BoardLive } from "@/components/board/board-live";
+import { OfflineNote } from "@/components/offline/offline-note";
 import { parseBoardFilters } from "@/lib/conditions/pure/board-filters";
 import { boardForPark } from "@/lib/conditions/board";
-import { webcalUrl } from "@/lib/reach/links";
+import { absoluteUrl, webcalUrl } from "@/lib/reach/links";
+import { statusCounts } from "@/lib/reach/pure/status-feed";
+import { previewMetadata } from "@/lib/reach/preview-image";
 import { longDate } from "@/lib/shared/time";
 
 export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ parkSlug: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
+// One board query per request, shared by the metadata and the page.
+const boardOnce = cache((slug: string) => boardForPark(slug));
+
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { parkSlug } = await params;
-  return { title: `Today's conditions · ${parkSlug}` };
+  const board = await boardOnce(parkSlug);
+  if (!board) return { title: "Park not found" };
+  const counts = statusCounts(board.trails);
+  const description = `${counts.open} open, ${counts.caution} caution, ${counts.closed} closed on ${longDate(board.date)}.`;
+  return {
+    title: `Today's conditions · ${board.park.name}`,
+    description,
+    ...previewMetadata({ title: `${board.park.name}: today's trail conditions`, description, url: absoluteUrl(`/parks/${parkSlug}`), imageUrl: absoluteUrl(`/api/parks/${parkSlug}/preview.png`) }),
+  };
 }
 
 /** The public conditions board: rendered on the server for a fast first paint, refreshed by a small client part. */
 export default async function ParkBoardPage({ params, searchParams }: Props) {
   const { parkSlug } = await params;
-  const [board, query] = await Promise.all([boardForPark(parkSlug), searchParams]);
+  const [board, query] = await Promise.all([boardOnce(parkSlug), searchParams]);
   if (!board) notFound();
   const filters = parseBoardFilters(query);
   const path = `/parks/${board.park.slug}`;
@@ -51,6 +66,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
           </a>
         </p>
       </header>
+      <OfflineNote asOf={board.generatedAt} timeZone={board.park.timeZone} />
       <BoardFilterLinks path={path} filters={filters} />
       <BoardLive initial={board} filters={filters} />
     </section>
