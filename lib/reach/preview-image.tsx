@@ -2,7 +2,8 @@ import "server-only";
 /**
  * The link-preview image (Open Graph, Twitter card) drawn by next/og: the park's name and
  * today's counts, and the trail's own status on a trail page. 1200 × 630 is the size Open
- * Graph consumers crop least.
+ * Graph consumers crop least. Satori lays out flexbox only and counts a number child as
+ * several nodes, so each element gets one string.
  */
 import { ImageResponse } from "next/og";
 import { z } from "zod";
@@ -20,7 +21,7 @@ const INK = { open: "#245522", caution: "#8a5a00", closed: "#98301f" } as const;
 function Count({ n, label, colour }: { n: number; label: string; colour: string }) {
   return (
     <div style={{ display: "flex", flexDirection: "column", alignItems: "center", padding: "16px 28px", borderRadius: 20, background: "#ffffff", border: `6px solid ${colour}` }}>
-      <div style={{ fontSize: 96, lineHeight: 1, color: colour }}>{n}</div>
+      <div style={{ fontSize: 96, lineHeight: 1, color: colour }}>{String(n)}</div>
       <div style={{ fontSize: 34, color: colour }}>{label}</div>
     </div>
   );
@@ -39,7 +40,7 @@ export async function previewImage(slug: string, search: URLSearchParams): Promi
     (
       <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", justifyContent: "space-between", padding: 60, background: "#f6f1ea", color: "#221c16" }}>
         <div style={{ display: "flex", flexDirection: "column" }}>
-          <div style={{ fontSize: 34, color: "#5b4a3a" }}>Loamcast · {longDate(board.date)}</div>
+          <div style={{ fontSize: 34, color: "#5b4a3a" }}>{`Loamcast · ${longDate(board.date)}`}</div>
           <div style={{ fontSize: 80, lineHeight: 1.05, marginTop: 8 }}>{trail ? trail.name : board.park.name}</div>
           <div style={{ fontSize: 40, marginTop: 8, color: status ? INK[status] : "#5b4a3a" }}>
             {trail ? (status ? `${STATUS_SIGNS[status]} ${STATUS_LABELS[status]} today · ${board.park.name}` : `Not inspected yet today · ${board.park.name}`) : "Today's trail conditions"}
