@@ -16,8 +16,9 @@ export async function embedCardResponse(slug: string, now = new Date()): Promise
     headers: {
       "Content-Type": "text/html; charset=utf-8",
       "Content-Security-Policy": embedContentSecurityPolicy(frameAncestors(park.embedOrigins)),
-      // Public and the same for everyone: a shared cache may hold it for a minute.
-      "Cache-Control": "public, max-age=60",
+      // The same for everyone: a shared cache may hold it a minute; browsers ask each time, so a
+      // change to the listed websites shows at once.
+      "Cache-Control": "public, max-age=0, s-maxage=60",
     },
   });
 }

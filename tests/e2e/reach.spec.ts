@@ -1,3 +1,5 @@
+import { createServer, type Server } from "node:http";
+import type { AddressInfo } from "node:net";
 import { expect, test, type Page } from "@playwright/test";
 import { demo, shot, signInAs } from "./helpers";
 
@@ -58,16 +60,22 @@ test.describe("offline", () => {
 });
 
 test.describe("on the park's own website", () => {
-  // Another origin on this machine stands for the park's website (the test serves its page): a
-  // public https page framing or fetching localhost would meet mixed-content and private-network rules.
-  const parkWebsite = (baseURL: string) => baseURL.replace("localhost", "127.0.0.1");
-  /** A page on the park's website (served by the test) that frames the card and reads the feed. */
-  async function openParkWebsite(page: Page, baseURL: string) {
-    await page.route(`${parkWebsite(baseURL)}/resort/**`, (route) =>
-      route.fulfill({ contentType: "text/html", body: `<!doctype html><h1>Resort</h1><iframe id="card" src="${baseURL}/embed/parks/${PARK}" width="360" height="480"></iframe>` }),
-    );
-    await page.goto(`${parkWebsite(baseURL)}/resort/conditions`);
-  }
+  // The park's website: a page on another origin of this machine, served by the test, that frames
+  // the card. (A page Playwright fulfils counts as public, and Chromium keeps public pages away
+  // from loopback addresses, so it is a real loopback server.)
+  let website: Server;
+  let websiteOrigin = "";
+  test.beforeAll(async ({ baseURL }) => {
+    website = createServer((_req, res) => {
+      res.writeHead(200, { "content-type": "text/html" });
+      res.end(`<!doctype html><h1>Resort</h1><iframe id="card" src="${baseURL}/embed/parks/${PARK}" width="360" height="480"></iframe>`);
+    });
+    await new Promise<void>((resolve) => website.listen(0, "127.0.0.1", resolve));
+    websiteOrigin = `http://127.0.0.1:${(website.address() as AddressInfo).port}`;
+  });
+  test.afterAll(() => new Promise<void>((resolve) => website.close(() => resolve())));
+  const openParkWebsite = (page: Page) => page.goto(`${websiteOrigin}/conditions`);
+
   const cardHeading = (page: Page) => page.frameLocator("#card").getByRole("heading", { level: 1 });
 
   test("the status card shows only on the websites the park lists", async ({ page, baseURL, browser }) => {
@@ -82,20 +90,20 @@ test.describe("on the park's own website", () => {
     };
 
     await save("https://someone-else.example");
-    await openParkWebsite(page, baseURL!);
+    await openParkWebsite(page);
     await expect(cardHeading(page)).toHaveCount(0); // framing refused by frame-ancestors
 
     await save("not a website");
     await expect(staff.locator("#embed-origins-error")).toContainText("not a website origin");
 
-    await save(parkWebsite(baseURL!));
+    await save(websiteOrigin);
     await page.reload();
     await expect(cardHeading(page)).toHaveText("Harrow Ridge Bike Park");
     await expect(page.frameLocator("#card").locator("li").first()).toBeVisible();
     await shot(page, "embedded-card");
 
     const card = await page.request.get(`/embed/parks/${PARK}`);
-    expect(card.headers()["content-security-policy"]).toContain(`frame-ancestors 'self' ${parkWebsite(baseURL!)}`);
+    expect(card.headers()["content-security-policy"]).toContain(`frame-ancestors 'self' ${websiteOrigin}`);
     expect(card.headers()["x-frame-options"]).toBeUndefined();
     expect(card.headers()["set-cookie"]).toBeUndefined();
     const board = await page.request.get(`/parks/${PARK}`);
@@ -106,7 +114,7 @@ test.describe("on the park's own website", () => {
   });
 
   test("the park's website reads status.json across origins and revalidates with its ETag", async ({ page, baseURL }) => {
-    await openParkWebsite(page, baseURL!);
+    await openParkWebsite(page);
     const result = await page.evaluate(async (url) => {
       const first = await fetch(url);
       const body = await first.json();
