@@ -7,6 +7,7 @@ import { z } from "zod";
 import { DIFFICULTY_LABELS, PARK_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
 import type { ParkStateKind } from "@/lib/conditions/pure/schemas";
 import { escapeHtml } from "@/lib/shared/text";
+import { longDate } from "@/lib/shared/time";
 import type { StatusFeed } from "./status-feed";
 
 export const MAX_EMBED_ORIGINS = 10;
@@ -84,7 +85,7 @@ li a{color:#221c16;font-weight:600}.diff{grid-column:1;font-size:12px;color:#5b4
 </style></head>
 <body><div class="card">
 <h1>${e(park.name)}</h1>
-<p class="meta">Trail status for ${e(feed.date)}, as of ${e(timeIn(renderedAt.toISOString(), park.timeZone))} park time</p>
+<p class="meta">Trail status for ${e(longDate(feed.date))}, as of ${e(timeIn(renderedAt.toISOString(), park.timeZone))} park time</p>
 <p class="counts"><span>${counts.open} open</span><span>${counts.caution} caution</span><span>${counts.closed} closed</span>${counts.notInspected ? `<span>${counts.notInspected} not inspected</span>` : ""}</p>
 ${notice}<ul>${rows}</ul>
 <p class="foot"><a href="${e(park.url)}" target="_blank" rel="noopener">Full board and map</a> · Follow signs and staff on the day.</p>
