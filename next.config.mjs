@@ -19,7 +19,8 @@ function turbopackRoot() {
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "nodemailer", "pino"],
+  // esbuild bundles the service worker at build time (app/serwist/[path]/route.ts).
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "nodemailer", "pino", "esbuild", "esbuild-wasm"],
   poweredByHeader: false,
   reactStrictMode: true,
   turbopack: { root: turbopackRoot() },

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { REQUEST_ID_HEADER, requestIdFrom } from "@/lib/server/request-id";
-import { contentSecurityPolicy, staticSecurityHeaders } from "@/lib/server/security-headers";
+import { contentSecurityPolicy, SELF_FRAMED_PATHS, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
  * Runs before every page and API request. Three jobs only:
@@ -32,10 +32,14 @@ export function proxy(request: NextRequest) {
     headers.set(REQUEST_ID_HEADER, requestId);
     response = NextResponse.next({ request: { headers } });
   }
-  response.headers.set("Content-Security-Policy", csp);
   response.headers.set(REQUEST_ID_HEADER, requestId);
   const production = (process.env.APP_URL ?? "").startsWith("https://");
-  for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) response.headers.set(name, value);
+  // The embeddable card sends its own CSP with the park's frame-ancestors, and no X-Frame-Options.
+  const selfFramed = SELF_FRAMED_PATHS.some((p) => pathname.startsWith(p));
+  if (!selfFramed) response.headers.set("Content-Security-Policy", csp);
+  for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) {
+    if (!(selfFramed && name === "X-Frame-Options")) response.headers.set(name, value);
+  }
   return response;
 }
 

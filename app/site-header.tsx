@@ -9,7 +9,7 @@ export async function SiteHeader() {
   const actor = await getActor();
   const role = primaryRole(actor);
   return (
-    <header className="border-b border-loam-200 bg-white">
+    <header className="border-b border-loam-200 bg-white print:hidden">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2">
         <Link href="/" className="mr-auto min-h-tap inline-flex items-center text-xl text-loam-900" aria-label="Loamcast home">
           <Wordmark />

@@ -20,6 +20,8 @@ export class Park extends Model<InferAttributes<Park>, InferCreationAttributes<P
   declare websiteUrl: CreationOptional<string | null>;
   /** Optimistic lock for the settings form: bumped on every settings change. */
   declare lockVersion: CreationOptional<number>;
+  /** Origins allowed to frame the park's status card (`https://example.org`). */
+  declare embedOrigins: CreationOptional<string[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -39,6 +41,7 @@ Park.init(
     contactEmail: { type: DataTypes.STRING(254), allowNull: true },
     websiteUrl: { type: DataTypes.STRING(300), allowNull: true },
     lockVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    embedOrigins: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

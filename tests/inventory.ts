@@ -41,7 +41,8 @@ export function exportedMethods(source: string): Method[] {
 
 export function routeHandlers(root = process.cwd()): RouteMethod[] {
   const appDir = path.join(root, "app");
-  return filesUnder(path.join(appDir, "api"), (f) => /[\\/]route\.(ts|tsx|js)$/.test(f)).flatMap((file) =>
+  // Every route file under app/, not only app/api: the embeddable card is one too.
+  return filesUnder(appDir, (f) => /[\\/]route\.(ts|tsx|js)$/.test(f)).flatMap((file) =>
     exportedMethods(readFileSync(file, "utf8")).map((method) => ({ route: routeOf(file, appDir), method, file: path.relative(root, file) })),
   );
 }

@@ -1,6 +1,7 @@
 import "server-only";
 import { headerSafe } from "@/lib/server/mail/transport";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
+import { escapeHtml } from "@/lib/shared/text";
 
 /**
  * The notice e-mail, built from parts only: the subject is ours (park and trail names,
@@ -22,8 +23,7 @@ export type NoticeEmailInput = {
 
 export const SUBJECT_MAX = 150;
 
-const escapeMap: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
-export const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => escapeMap[c]);
+export { escapeHtml };
 
 /** "Ridgeback", "Ridgeback and Fernline", "A, B and C", "A, B and 3 more trails". */
 export function trailList(names: string[]): string {

@@ -22,6 +22,17 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}): stri
   return directives.join("; ");
 }
 
+/** Pages that set their own CSP and framing rules (the embeddable status card); proxy.ts leaves them be. */
+export const SELF_FRAMED_PATHS = ["/embed/"];
+
+/**
+ * The status card's CSP: nothing loads but its own inline styles, and only the origins the
+ * park listed may frame it (CSP Level 3 frame-ancestors; X-Frame-Options cannot list origins).
+ */
+export function embedContentSecurityPolicy(frameAncestors: string): string {
+  return ["default-src 'none'", "style-src 'unsafe-inline'", "img-src 'self' data:", "base-uri 'none'", "form-action 'none'", `frame-ancestors ${frameAncestors}`].join("; ");
+}
+
 export function staticSecurityHeaders({ production }: { production: boolean }): Record<string, string> {
   return {
     "X-Content-Type-Options": "nosniff",

@@ -67,3 +67,7 @@ export function instantToParkLocal(instant: Date, timeZone: string): string {
   const { date, time } = wallClock(instant, timeZone);
   return `${date}T${time}`;
 }
+
+/** "Wednesday 2 December" for a YYYY-MM-DD park-local date. */
+export const longDate = (date: string) =>
+  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));

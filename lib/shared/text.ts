@@ -31,3 +31,7 @@ const CONTROL_IN_NOTE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]/;
 export const noteCheck = (label: string) => (text: string, ctx: z.RefinementCtx) => {
   if (CONTROL_IN_NOTE.test(text) || BIDI_CONTROL.test(text)) ctx.addIssue({ code: "custom", message: `${label} contains characters that are not allowed.` });
 };
+
+const HTML_ESCAPES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
+/** Text safe inside HTML element content and quoted attributes. */
+export const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => HTML_ESCAPES[c]);

@@ -24,6 +24,7 @@ const pagePath = (worker: string) =>
 /** Fields each action reads, valid enough to reach its permission check. */
 const FIELDS: Record<string, Record<string, string>> = {
   inviteStaffAction: { parkSlug: "harrow-ridge", email: "someone@tests.loamcast.test", role: "manager" },
+  saveEmbedOriginsAction: { parkSlug: "harrow-ridge", origins: "https://forged.example" },
   setParkStateAction: { parkSlug: "harrow-ridge", state: "closed", message: "Closed by a forged request", until: "" },
   clearParkStateAction: { parkSlug: "harrow-ridge" },
   noticeFormAction: { parkSlug: "harrow-ridge", kind: "closure", scope: "park", message: "Forged closure", intent: "send" },
@@ -37,6 +38,7 @@ const ANONYMOUS: Record<string, number | "public"> = {
   signUpAction: "public",
   acceptInvitationAction: "public",
   inviteStaffAction: 401,
+  saveEmbedOriginsAction: 401,
   setParkStateAction: 401,
   clearParkStateAction: 401,
   noticeFormAction: 401,

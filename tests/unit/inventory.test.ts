@@ -18,6 +18,7 @@ describe("reading routes and server actions from the source (the authorization m
     const routes = routeHandlers().map((r) => `${r.method} ${r.route}`);
     expect(routes).toContain("POST /api/parks/[parkSlug]/sweep");
     expect(routes).toContain("POST /api/auth/[...nextauth]");
+    expect(routes).toContain("GET /embed/parks/[parkSlug]");
     expect(serverActions().map((a) => a.name)).toContain("setParkStateAction");
   });
 });

@@ -1,27 +1,41 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { cache } from "react";
 import { notFound } from "next/navigation";
 import { BoardFilterLinks } from "@/components/board/board-filters";
 import { BoardLive } from "@/components/board/board-live";
+import { OfflineNote } from "@/components/offline/offline-note";
 import { parseBoardFilters } from "@/lib/conditions/pure/board-filters";
 import { boardForPark } from "@/lib/conditions/board";
+import { absoluteUrl, webcalUrl } from "@/lib/reach/links";
+import { statusCounts } from "@/lib/reach/pure/status-feed";
+import { previewMetadata } from "@/lib/reach/preview-image";
+import { longDate } from "@/lib/shared/park-clock";
 
 export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ parkSlug: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
+// One board query per request, shared by the metadata and the page.
+const boardOnce = cache((slug: string) => boardForPark(slug));
+
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { parkSlug } = await params;
-  return { title: `Today's conditions · ${parkSlug}` };
+  const board = await boardOnce(parkSlug);
+  if (!board) return { title: "Park not found" };
+  const counts = statusCounts(board.trails);
+  const description = `${counts.open} open, ${counts.caution} caution, ${counts.closed} closed on ${longDate(board.date)}.`;
+  return {
+    title: `Today's conditions · ${board.park.name}`,
+    description,
+    ...previewMetadata({ title: `${board.park.name}: today's trail conditions`, description, url: absoluteUrl(`/parks/${parkSlug}`), imageUrl: absoluteUrl(`/api/parks/${parkSlug}/preview.png`) }),
+  };
 }
-
-const longDate = (date: string) =>
-  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
 
 /** The public conditions board: rendered on the server for a fast first paint, refreshed by a small client part. */
 export default async function ParkBoardPage({ params, searchParams }: Props) {
   const { parkSlug } = await params;
-  const [board, query] = await Promise.all([boardForPark(parkSlug), searchParams]);
+  const [board, query] = await Promise.all([boardOnce(parkSlug), searchParams]);
   if (!board) notFound();
   const filters = parseBoardFilters(query);
   const path = `/parks/${board.park.slug}`;
@@ -46,8 +60,13 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
           <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet">
             Get closure e-mails
           </Link>
+          {/* webcal:// asks the rider's calendar app to subscribe, so later changes arrive by themselves. */}
+          <a href={webcalUrl(`/api/parks/${board.park.slug}/closures.ics`)} className="btn-quiet">
+            Subscribe in your calendar
+          </a>
         </p>
       </header>
+      <OfflineNote asOf={board.generatedAt} timeZone={board.park.timeZone} />
       {board.trails.length > 0 && <BoardFilterLinks path={path} filters={filters} />}
       <BoardLive initial={board} filters={filters} />
     </section>

@@ -6,6 +6,8 @@ import { TrailFiguresList } from "@/components/trail-figures";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { getParkBySlug } from "@/lib/parks/queries";
+import { absoluteUrl } from "@/lib/reach/links";
+import { previewMetadata } from "@/lib/reach/preview-image";
 import { getTrailDetail, type TrailDetail } from "@/lib/trails/queries";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { AppError } from "@/lib/shared/errors";
@@ -26,7 +28,13 @@ async function loadTrail(id: string, actor: Awaited<ReturnType<typeof getActor>>
 
 export async function generateMetadata({ params }: Props) {
   const trail = await getTrailDetail((await params).id, null).catch(() => null);
-  return { title: trail ? trail.name : "Trail" };
+  if (!trail || trail.archivedAt) return { title: trail ? trail.name : "Trail" };
+  const description = `${trail.name} at ${trail.park.name}: today's status, surface and hazards.`;
+  return {
+    title: trail.name,
+    description,
+    ...previewMetadata({ title: `${trail.name} · ${trail.park.name}`, description, url: absoluteUrl(`/trails/${trail.id}`), imageUrl: absoluteUrl(`/api/parks/${trail.park.slug}/preview.png?trail=${trail.id}`) }),
+  };
 }
 
 const dateOf = (iso: string) => new Date(iso).toISOString().slice(0, 10);

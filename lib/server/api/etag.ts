@@ -19,11 +19,12 @@ export function prepareJson(body: unknown, tagOf: unknown = body): PreparedJson 
  * with nothing in it instead of the whole body again. Statuses change during the day: caches must
  * check back every time.
  */
-export function preparedResponse({ text, etag }: PreparedJson, request: Request | undefined, contentType = "application/json"): Response {
-  const headers = { "content-type": `${contentType}; charset=utf-8`, "cache-control": "public, max-age=0, must-revalidate", etag };
+export function preparedResponse({ text, etag }: PreparedJson, request: Request | undefined, contentType = "application/json", extraHeaders: Record<string, string> = {}): Response {
+  const headers = { "content-type": `${contentType}; charset=utf-8`, "cache-control": "public, max-age=0, must-revalidate", ...extraHeaders, etag };
   const known = request?.headers.get("if-none-match");
   if (known && known.split(",").some((tag) => tag.trim() === etag)) return new Response(null, { status: 304, headers });
   return new Response(text, { status: 200, headers });
 }
 
-export const jsonWithEtag = (body: unknown, request: Request | undefined, contentType?: string) => preparedResponse(prepareJson(body), request, contentType);
+export const jsonWithEtag = (body: unknown, request: Request | undefined, contentType?: string, extraHeaders?: Record<string, string>) =>
+  preparedResponse(prepareJson(body), request, contentType, extraHeaders);

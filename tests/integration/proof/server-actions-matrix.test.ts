@@ -33,6 +33,7 @@ const actions = {
   ...(await import("@/lib/notices/notice-actions")),
   ...(await import("@/lib/accounts/units-actions")),
   ...(await import("@/lib/notices/subscription-actions")),
+  ...(await import("@/lib/reach/embed-actions")),
 };
 type ActionName = keyof typeof actions;
 
@@ -59,6 +60,7 @@ const ROWS: Row[] = [
   { action: "acceptInvitationAction", expect: everyone("ok"), form: async (w) => ({ token: await openInvitation(w), name: "Invited Ranger", password: PASSWORD }) },
   { action: "acceptInvitationAction", variant: "forged token", expect: everyone(400), form: async () => ({ token: newToken(), name: "Nobody", password: PASSWORD }) },
   { action: "inviteStaffAction", expect: { ...parkStaff(), parkRanger: 403 }, form: async (w) => ({ parkSlug: w.park.slug, email: uniqueEmail("invitee"), role: "ranger" }) },
+  { action: "saveEmbedOriginsAction", expect: { ...parkStaff(), parkRanger: 403 }, form: async (w) => ({ parkSlug: w.park.slug, origins: "https://www.pine-hollow.example" }) },
   { action: "setParkStateAction", expect: parkStaff(), form: async (w) => ({ parkSlug: w.park.slug, state: "advisory", message: "Action matrix check", until: "" }) },
   { action: "clearParkStateAction", expect: parkStaff(), form: async (w) => ({ parkSlug: w.park.slug }) },
   { action: "noticeFormAction", variant: "preview", expect: parkStaff(), form: async (w) => ({ parkSlug: w.park.slug, kind: "advisory", scope: "park", message: "Action matrix check", intent: "preview" }) },
@@ -108,6 +110,7 @@ async function databaseState(w: World) {
     openStates: await count(ParkState, { clearedAt: null }),
     queued: await count(NoticeDelivery, { state: "queued" }),
     subscriptions: (await Subscription.findAll({ attributes: ["id", "kinds", "updatedAt"], order: [["id", "ASC"]] })).map((s) => JSON.stringify(s.toJSON())),
+    embedOrigins: (await Park.findAll({ where: { id: [w.park.id, w.otherPark.id] }, attributes: ["id", "embedOrigins"], order: [["id", "ASC"]] })).map((p) => JSON.stringify(p.embedOrigins)),
     units: (await User.findAll({ where: { id: Object.values(w.users) }, attributes: ["id", "units"], order: [["id", "ASC"]] })).map((u) => JSON.stringify(u.units)),
   };
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { MapLegend } from "@/components/map/map-legend";
+import { OfflineNote } from "@/components/offline/offline-note";
 import { ParkMapLoader } from "@/components/map/park-map-loader";
 import { TrailTextList } from "@/components/map/trail-text-list";
 import { getActor } from "@/lib/server/auth/actor";
@@ -50,6 +51,7 @@ export default async function ParkMapPage({ params }: Props) {
           <Link href={`/staff/${park.slug}/settings#ground-heading`} className="font-semibold underline">Upload them in the park settings</Link>.
         </p>
       )}
+      <OfflineNote asOf={new Date().toISOString()} timeZone={park.timeZone} />
       <a href="#trail-list" className="sr-only focus:not-sr-only">Skip the map: go to the list of trails and hazards</a>
       <ParkMapLoader styleUrl={parkDataUrls(park.slug).style} bounds={bounds} timeZone={park.timeZone} trails={properties} hazards={hazards.features.map((f) => f.properties)} />
       <MapLegend />
