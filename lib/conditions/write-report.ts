@@ -45,7 +45,7 @@ export async function currentReportView(trailId: string, date: string): Promise<
   return row ? reportView(row) : null;
 }
 
-/** One revision inside the caller's transaction. A stale base revision is returned, not thrown, so a sweep can list them all. */
+/** One revision inside the caller's transaction. A stale base revision is returned, not thrown, so a check can list them all. */
 export async function saveRevision(request: RevisionRequest, transaction: Transaction): Promise<RevisionResult> {
   const { trail, park, date, now } = request;
   // Writers of one trail and date take turns, so even the first save of the day (no row to

@@ -1,5 +1,5 @@
 /**
- * After a sweep closes trails, staff are offered a notice with the text already written.
+ * After a check closes trails, staff are offered a notice with the text already written.
  * The notices page reads kind, trailIds (comma-separated) and message from the query.
  */
 export type ClosedTrail = { id: string; name: string; reason: string | null };

@@ -22,8 +22,8 @@ export default async function HazardsPage({ params }: { params: Promise<{ parkSl
       <header>
         <h1 className="text-2xl font-bold">Hazards at {park.name}</h1>
         <p className="flex flex-wrap gap-x-4 text-sm font-semibold">
-          <Link href={`/staff/${park.slug}/sweep`} className="inline-flex min-h-tap items-center text-moss-700 underline">
-            Morning sweep
+          <Link href={`/staff/${park.slug}/morning-check`} className="inline-flex min-h-tap items-center text-moss-700 underline">
+            Morning check
           </Link>
           <Link href={`/parks/${park.slug}`} className="inline-flex min-h-tap items-center text-moss-700 underline">
             Public board

@@ -1,24 +1,24 @@
 "use client";
 import { DifficultyMark } from "@/components/board/difficulty-mark";
 import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
-import { applyChange, type DraftChange, type SweepDraft } from "@/lib/conditions/pure/sweep-draft";
+import { applyChange, type DraftChange, type CheckDraft } from "@/lib/conditions/pure/check-draft";
 import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type Surface } from "@/lib/conditions/pure/vocabulary";
-import type { SweepTrail } from "@/lib/conditions/sweep-start";
+import type { CheckTrail } from "@/lib/conditions/morning-check-start";
 import { ToggleGroup } from "./toggle-group";
 
 export type TrailMessage = { kind: "problem" | "conflict"; text: string; onAdopt?: () => void };
 
 const MODE_TEXT = { untouched: "Not marked", unchanged: "Unchanged", edited: "Edited" } as const;
 
-/** One trail of the sweep: "unchanged" in one tap, or status, reason, surfaces, features and a note. */
-export function SweepTrailCard(props: { trail: SweepTrail; draft: SweepDraft; onChange: (draft: SweepDraft) => void; message?: TrailMessage }) {
+/** One trail of the check: "unchanged" in one tap, or status, reason, surfaces, features and a note. */
+export function CheckTrailRow(props: { trail: CheckTrail; draft: CheckDraft; onChange: (draft: CheckDraft) => void; message?: TrailMessage }) {
   const { trail, draft } = props;
   const change = (c: DraftChange) => props.onChange(applyChange(draft, c));
   const id = `trail-${trail.id}`;
   const featureLine = describeFeatures(draft.features);
   const startFrom = trail.start ? (trail.inspectedToday ? "today's report" : `the report of ${trail.startDate}`) : null;
   return (
-    <li className={`card space-y-3 ${draft.mode !== "untouched" ? "border-2 border-loam-800" : ""}`} aria-labelledby={`${id}-name`} data-testid="sweep-trail" data-trail-name={trail.name}>
+    <li className={`card space-y-3 ${draft.mode !== "untouched" ? "border-2 border-loam-800" : ""}`} aria-labelledby={`${id}-name`} data-testid="check-trail" data-trail-name={trail.name}>
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h2 id={`${id}-name`} className="text-lg font-bold">

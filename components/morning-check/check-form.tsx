@@ -1,31 +1,31 @@
 "use client";
 /**
- * The morning sweep: every trail on one screen, yesterday's values offered as the start,
- * and one Save that sends every marked trail to POST /api/parks/{slug}/sweep (one
+ * The morning check: every trail on one screen, yesterday's values offered as the start,
+ * and one Save that sends every marked trail to POST /api/parks/{slug}/morning-check (one
  * transaction: all saved or none, problems and conflicts listed per trail).
  */
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import { draftFromStart, entryFromDraft, type SweepDraft } from "@/lib/conditions/pure/sweep-draft";
-import type { SweepStart } from "@/lib/conditions/sweep-start";
-import { SweepTrailCard, type TrailMessage } from "./sweep-trail";
+import { draftFromStart, entryFromDraft, type CheckDraft } from "@/lib/conditions/pure/check-draft";
+import type { MorningCheckStart } from "@/lib/conditions/morning-check-start";
+import { CheckTrailRow, type TrailMessage } from "./check-trail";
 
 type Problem = { trailId: string | null; field: string; message: string };
 type Conflict = { trailId: string; trailName: string; current: { revision: number; status: string; reason: string | null; surfaces: string[]; features: Record<string, string>; note: string | null } | null };
 type Outcome = { ok: true; saved: number; closureNoticeHref: string | null } | { ok: false; message: string };
 
-const initialDrafts = (start: SweepStart) => Object.fromEntries(start.trails.map((t) => [t.id, draftFromStart(t.start, t.baseRevision)]));
+const initialDrafts = (start: MorningCheckStart) => Object.fromEntries(start.trails.map((t) => [t.id, draftFromStart(t.start, t.baseRevision)]));
 
-export function SweepForm({ parkSlug, start }: { parkSlug: string; start: SweepStart }) {
+export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start: MorningCheckStart }) {
   const router = useRouter();
-  const [drafts, setDrafts] = useState<Record<string, SweepDraft>>(() => initialDrafts(start));
+  const [drafts, setDrafts] = useState<Record<string, CheckDraft>>(() => initialDrafts(start));
   const [messages, setMessages] = useState<Record<string, TrailMessage>>({});
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const [pending, setPending] = useState(false);
 
   const marked = useMemo(() => start.trails.filter((t) => drafts[t.id]?.mode !== "untouched"), [drafts, start.trails]);
   const inspectedToday = start.trails.filter((t) => t.inspectedToday || drafts[t.id]?.mode !== "untouched").length;
-  const setDraft = (trailId: string, draft: SweepDraft) => setDrafts((all) => ({ ...all, [trailId]: draft }));
+  const setDraft = (trailId: string, draft: CheckDraft) => setDrafts((all) => ({ ...all, [trailId]: draft }));
 
   function showRefusal(body: { error?: { message?: string; details?: { problems?: Problem[]; conflicts?: Conflict[] } } }) {
     const next: Record<string, TrailMessage> = {};
@@ -57,7 +57,7 @@ export function SweepForm({ parkSlug, start }: { parkSlug: string; start: SweepS
     setPending(true);
     setOutcome(null);
     try {
-      const response = await fetch(`/api/parks/${encodeURIComponent(parkSlug)}/sweep`, {
+      const response = await fetch(`/api/parks/${encodeURIComponent(parkSlug)}/morning-check`, {
         method: "POST",
         headers: { "content-type": "application/json" },
         body: JSON.stringify({ date: start.date, entries }),
@@ -83,11 +83,11 @@ export function SweepForm({ parkSlug, start }: { parkSlug: string; start: SweepS
 
   return (
     <form onSubmit={submit} className="space-y-4" noValidate>
-      <p className="card font-semibold" aria-live="polite" data-testid="sweep-count">
-        {inspectedToday} of {start.trails.length} trails inspected today · {marked.length} marked in this sweep
+      <p className="card font-semibold" aria-live="polite" data-testid="check-count">
+        {inspectedToday} of {start.trails.length} trails inspected today · {marked.length} marked in this check
       </p>
       {outcome && (
-        <div role={outcome.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${outcome.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`} data-testid="sweep-outcome">
+        <div role={outcome.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${outcome.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`} data-testid="check-outcome">
           {outcome.ok ? <p>Saved {outcome.saved} trail{outcome.saved === 1 ? "" : "s"}. Riders see it on the board now.</p> : <p>{outcome.message}</p>}
           {outcome.ok && outcome.closureNoticeHref && (
             <a href={outcome.closureNoticeHref} className="btn-primary mt-2">
@@ -98,7 +98,7 @@ export function SweepForm({ parkSlug, start }: { parkSlug: string; start: SweepS
       )}
       <ul className="space-y-4">
         {start.trails.map((trail) => (
-          <SweepTrailCard key={trail.id} trail={trail} draft={drafts[trail.id]} onChange={(d) => setDraft(trail.id, d)} message={messages[trail.id]} />
+          <CheckTrailRow key={trail.id} trail={trail} draft={drafts[trail.id]} onChange={(d) => setDraft(trail.id, d)} message={messages[trail.id]} />
         ))}
       </ul>
       <div className="sticky bottom-0 -mx-4 border-t border-loam-200 bg-loam-50/95 px-4 py-3" data-sticky-bottom>

@@ -1,11 +1,11 @@
 /**
- * The sweep screen's working state for one trail, and the request entry it becomes.
+ * the morning-check screen's working state for one trail, and the request entry it becomes.
  * Pure and zod-free: the screen imports it, unit tests check it.
  */
 import type { FeatureKind, FeatureStates, ReportStatus, Surface } from "./vocabulary";
 
 export type DraftMode = "untouched" | "unchanged" | "edited";
-export type SweepDraft = {
+export type CheckDraft = {
   mode: DraftMode;
   baseRevision: number;
   status: ReportStatus | null;
@@ -18,7 +18,7 @@ export type SweepDraft = {
 export type StartValues = { status: ReportStatus; reason: string | null; surfaces: readonly string[]; features: FeatureStates; note: string | null } | null;
 
 /** The values offered at the start: the last report's, or blank. */
-export function draftFromStart(start: StartValues, baseRevision: number): SweepDraft {
+export function draftFromStart(start: StartValues, baseRevision: number): CheckDraft {
   return {
     mode: "untouched",
     baseRevision,
@@ -38,8 +38,8 @@ export type DraftChange =
   | { type: "note"; note: string };
 
 /** Any control touched makes the trail "edited"; moving to open clears the reason. */
-export function applyChange(draft: SweepDraft, change: DraftChange): SweepDraft {
-  const next: SweepDraft = { ...draft, mode: "edited" };
+export function applyChange(draft: CheckDraft, change: DraftChange): CheckDraft {
+  const next: CheckDraft = { ...draft, mode: "edited" };
   switch (change.type) {
     case "status":
       return { ...next, status: change.status, reason: change.status === "open" ? "" : draft.reason };
@@ -60,12 +60,12 @@ export function applyChange(draft: SweepDraft, change: DraftChange): SweepDraft 
   }
 }
 
-export type SweepRequestEntry =
+export type CheckRequestEntry =
   | { trailId: string; baseRevision: number; unchanged: true }
   | { trailId: string; baseRevision: number; report: { status: ReportStatus | null; reason?: string; surfaces: Surface[]; features: FeatureStates; note?: string } };
 
-/** What the sweep request carries for a trail, or null when the ranger did not mark it. */
-export function entryFromDraft(trailId: string, draft: SweepDraft): SweepRequestEntry | null {
+/** What the check request carries for a trail, or null when the ranger did not mark it. */
+export function entryFromDraft(trailId: string, draft: CheckDraft): CheckRequestEntry | null {
   if (draft.mode === "untouched") return null;
   if (draft.mode === "unchanged") return { trailId, baseRevision: draft.baseRevision, unchanged: true };
   const reason = draft.reason.trim();

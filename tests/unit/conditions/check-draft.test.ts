@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { applyChange, draftFromStart, entryFromDraft } from "@/lib/conditions/pure/sweep-draft";
+import { applyChange, draftFromStart, entryFromDraft } from "@/lib/conditions/pure/check-draft";
 
 const ID = "00000000-0000-4000-8000-000000000001";
 const yesterday = { status: "caution" as const, reason: "Soft berms", surfaces: ["damp"], features: { berms: "soft" as const }, note: null };
 
-describe("sweep drafts", () => {
+describe("check drafts", () => {
   it("start from the last report, unmarked, and send nothing until touched", () => {
     const draft = draftFromStart(yesterday, 0);
     expect(draft).toMatchObject({ mode: "untouched", status: "caution", reason: "Soft berms", surfaces: ["damp"], features: { berms: "soft" }, note: "" });

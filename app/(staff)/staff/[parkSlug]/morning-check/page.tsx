@@ -1,27 +1,27 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { ParkStateForm } from "@/components/sweep/park-state-form";
-import { SweepForm } from "@/components/sweep/sweep-form";
+import { ParkStateForm } from "@/components/morning-check/park-state-form";
+import { MorningCheckForm } from "@/components/morning-check/check-form";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { activeParkState } from "@/lib/conditions/park-state";
-import { sweepStart } from "@/lib/conditions/sweep-start";
+import { morningCheckStart } from "@/lib/conditions/morning-check-start";
 import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";
-export const metadata: Metadata = { title: "Morning sweep" };
+export const metadata: Metadata = { title: "Morning check" };
 
-/** The ranger's morning sweep on a phone: every trail, one save. */
-export default async function SweepPage({ params }: { params: Promise<{ parkSlug: string }> }) {
+/** The ranger's morning check on a phone: every trail, one save. */
+export default async function MorningCheckPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
   const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
   if (!park || !can(actor, "report:write", { parkId: park.id })) notFound();
-  const [start, active] = await Promise.all([sweepStart(park), activeParkState(park.id)]);
+  const [start, active] = await Promise.all([morningCheckStart(park), activeParkState(park.id)]);
   return (
     <section className="space-y-4">
       <header>
-        <h1 className="text-2xl font-bold">Morning sweep</h1>
+        <h1 className="text-2xl font-bold">Morning check</h1>
         <p className="text-loam-700">
           {park.name} · {start.date} (park time). Tap <strong>Unchanged</strong> for a trail as it was, or set what you found; then save once.
         </p>
@@ -35,7 +35,7 @@ export default async function SweepPage({ params }: { params: Promise<{ parkSlug
         </p>
       </header>
       <ParkStateForm parkSlug={park.slug} active={active} />
-      {start.trails.length === 0 ? <p className="card">This park has no trails yet.</p> : <SweepForm parkSlug={park.slug} start={start} />}
+      {start.trails.length === 0 ? <p className="card">This park has no trails yet.</p> : <MorningCheckForm parkSlug={park.slug} start={start} />}
     </section>
   );
 }
