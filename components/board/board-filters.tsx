@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { filterHref, STATUS_FILTERS, type BoardFilters, type FilterKey } from "@/lib/conditions/pure/board-filters";
-import { DIFFICULTY_LABELS, KIND_LABELS, STATUS_LABELS } from "@/lib/conditions/pure/labels";
+import { STATUS_LABELS } from "@/lib/conditions/pure/labels";
+import { DIFFICULTIES, TRAIL_KINDS } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues, trailKindValues } from "@/lib/trails/pure/schemas";
 
 const statusLabel = (s: string) => (s === "not-inspected" ? "Not inspected" : STATUS_LABELS[s as keyof typeof STATUS_LABELS]);
@@ -37,8 +38,8 @@ export function BoardFilterLinks({ path, filters }: { path: string; filters: Boa
       <summary className="min-h-tap cursor-pointer content-center font-semibold">Filter trails</summary>
       <nav aria-label="Filter trails" className="mt-2 space-y-3">
         <Group path={path} filters={filters} name="status" label="Status" options={STATUS_FILTERS.map((s) => [s, statusLabel(s)])} />
-        <Group path={path} filters={filters} name="difficulty" label="Difficulty" options={difficultyValues.map((d) => [d, DIFFICULTY_LABELS[d]])} />
-        <Group path={path} filters={filters} name="kind" label="Kind" options={trailKindValues.map((k) => [k, KIND_LABELS[k]])} />
+        <Group path={path} filters={filters} name="difficulty" label="Difficulty" options={difficultyValues.map((d) => [d, DIFFICULTIES[d].label])} />
+        <Group path={path} filters={filters} name="kind" label="Kind" options={trailKindValues.map((k) => [k, TRAIL_KINDS[k].label])} />
       </nav>
     </details>
   );

@@ -1,8 +1,9 @@
 import Link from "next/link";
-import { describeFeatures, KIND_LABELS } from "@/lib/conditions/pure/labels";
+import { DifficultyBadge } from "@/components/difficulty-badge";
+import { describeFeatures } from "@/lib/conditions/pure/labels";
+import { kindLabel } from "@/lib/trails/pure/vocabulary";
 import type { BoardTrail } from "@/lib/conditions/board";
 import { parkLocalTime } from "@/lib/shared/time";
-import { DifficultyMark } from "./difficulty-mark";
 import { HazardList } from "./hazard-list";
 import { StatusLabel } from "./status-label";
 
@@ -36,8 +37,8 @@ export function TrailCard({ trail, timeZone }: { trail: BoardTrail; timeZone: st
         <div>
           <h3 className="text-lg font-bold leading-tight">{trail.name}</h3>
           <p className="flex flex-wrap items-center gap-x-2 text-sm text-loam-600">
-            <DifficultyMark difficulty={trail.difficulty} />
-            <span>· {KIND_LABELS[trail.kind] ?? trail.kind}</span>
+            <DifficultyBadge difficulty={trail.difficulty} />
+            <span>· {kindLabel(trail.kind)}</span>
           </p>
         </div>
         <StatusLabel status={trail.effectiveStatus} />

@@ -1,31 +1,55 @@
 "use client";
 /**
- * The morning check: every trail on one screen, yesterday's values offered as the start,
+ * The morning check: every trail as a compact row, yesterday's values offered as the start,
  * and one Save that sends every marked trail to POST /api/parks/{slug}/morning-check (one
- * transaction: all saved or none, problems and conflicts listed per trail).
+ * transaction: all saved or none, problems and conflicts listed per trail). Progress, Save,
+ * "Mark the rest unchanged" and the result of the save sit in the bar at the bottom of the
+ * screen, where the thumb is.
  */
 import { useRouter } from "next/navigation";
-import { useMemo, useState } from "react";
-import { draftFromStart, entryFromDraft, type CheckDraft } from "@/lib/conditions/pure/check-draft";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { draftFromStart, entryFromDraft, isChecked, markRestUnchanged, restToMark, type CheckDraft } from "@/lib/conditions/pure/check-draft";
+import type { OfferedNoticeKind } from "@/lib/conditions/pure/notice-link";
 import type { MorningCheckStart } from "@/lib/conditions/morning-check-start";
 import { CheckTrailRow, type TrailMessage } from "./check-trail";
 
 type Problem = { trailId: string | null; field: string; message: string };
 type Conflict = { trailId: string; trailName: string; current: { revision: number; status: string; reason: string | null; surfaces: string[]; features: Record<string, string>; note: string | null } | null };
-type Outcome = { ok: true; saved: number; closureNoticeHref: string | null } | { ok: false; message: string };
+type Outcome = { ok: true; saved: number; notices: Record<OfferedNoticeKind, string | null> } | { ok: false; message: string };
 
 const initialDrafts = (start: MorningCheckStart) => Object.fromEntries(start.trails.map((t) => [t.id, draftFromStart(t.start, t.baseRevision)]));
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start: MorningCheckStart }) {
   const router = useRouter();
   const [drafts, setDrafts] = useState<Record<string, CheckDraft>>(() => initialDrafts(start));
+  const [openRows, setOpenRows] = useState<Set<string>>(new Set());
   const [messages, setMessages] = useState<Record<string, TrailMessage>>({});
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const [pending, setPending] = useState(false);
+  const outcomeRef = useRef<HTMLDivElement>(null);
 
-  const marked = useMemo(() => start.trails.filter((t) => drafts[t.id]?.mode !== "untouched"), [drafts, start.trails]);
-  const inspectedToday = start.trails.filter((t) => t.inspectedToday || drafts[t.id]?.mode !== "untouched").length;
+  const facts = useMemo(() => start.trails.map((t) => ({ id: t.id, inspectedToday: t.inspectedToday, hasStart: Boolean(t.start) })), [start.trails]);
+  const marked = start.trails.filter((t) => drafts[t.id]?.mode !== "untouched");
+  const checked = facts.filter((t) => isChecked(t, drafts[t.id])).length;
+  const rest = restToMark(facts, drafts);
   const setDraft = (trailId: string, draft: CheckDraft) => setDrafts((all) => ({ ...all, [trailId]: draft }));
+  const setOpen = (trailId: string, open: boolean) =>
+    setOpenRows((all) => {
+      const next = new Set(all);
+      if (open) next.add(trailId);
+      else next.delete(trailId);
+      return next;
+    });
+
+  // The result of a save is announced and brought into view with the focus, wherever the ranger was.
+  useEffect(() => {
+    if (!outcome) return;
+    const firstTrouble = Object.keys(messages)[0];
+    const target = !outcome.ok && firstTrouble ? document.getElementById(`trail-${firstTrouble}`) : outcomeRef.current;
+    target?.scrollIntoView({ block: "nearest" });
+    target?.focus({ preventScroll: true });
+  }, [outcome, messages]);
 
   function showRefusal(body: { error?: { message?: string; details?: { problems?: Problem[]; conflicts?: Conflict[] } } }) {
     const next: Record<string, TrailMessage> = {};
@@ -43,6 +67,7 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
         },
       };
     }
+    setOpenRows((all) => new Set([...all, ...Object.keys(next)]));
     setMessages(next);
     setOutcome({ ok: false, message: body.error?.message ?? "Nothing was saved." });
   }
@@ -51,7 +76,7 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
     event.preventDefault();
     const entries = start.trails.map((t) => entryFromDraft(t.id, drafts[t.id])).filter(Boolean);
     if (entries.length === 0) {
-      setOutcome({ ok: false, message: "Mark at least one trail (change it, or tap Unchanged) before saving." });
+      setOutcome({ ok: false, message: "Mark at least one trail (Change it, or tap Unchanged) before saving." });
       return;
     }
     setPending(true);
@@ -65,7 +90,8 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
       const body = await response.json().catch(() => ({}));
       if (!response.ok) return showRefusal(body);
       setMessages({});
-      setOutcome({ ok: true, saved: body.saved.length, closureNoticeHref: body.closureNoticeHref });
+      setOpenRows(new Set());
+      setOutcome({ ok: true, saved: body.saved.length, notices: body.notices });
       router.refresh();
     } catch {
       setOutcome({ ok: false, message: "No connection: nothing was saved. Your marks are still here; try again when you have signal." });
@@ -82,29 +108,53 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
   }
 
   return (
-    <form onSubmit={submit} className="space-y-4" noValidate>
-      <p className="card font-semibold" aria-live="polite" data-testid="check-count">
-        {inspectedToday} of {start.trails.length} trails inspected today · {marked.length} marked in this check
-      </p>
-      {outcome && (
-        <div role={outcome.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${outcome.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`} data-testid="check-outcome">
-          {outcome.ok ? <p>Saved {outcome.saved} trail{outcome.saved === 1 ? "" : "s"}. Riders see it on the board now.</p> : <p>{outcome.message}</p>}
-          {outcome.ok && outcome.closureNoticeHref && (
-            <a href={outcome.closureNoticeHref} className="btn-primary mt-2">
-              Send a closure notice to riders
-            </a>
-          )}
-        </div>
-      )}
-      <ul className="space-y-4">
+    <form onSubmit={submit} className="space-y-3" noValidate>
+      <ul className="space-y-2">
         {start.trails.map((trail) => (
-          <CheckTrailRow key={trail.id} trail={trail} draft={drafts[trail.id]} onChange={(d) => setDraft(trail.id, d)} message={messages[trail.id]} />
+          <CheckTrailRow
+            key={trail.id}
+            trail={trail}
+            draft={drafts[trail.id]}
+            open={openRows.has(trail.id)}
+            onOpen={(open) => setOpen(trail.id, open)}
+            onChange={(d) => setDraft(trail.id, d)}
+            message={messages[trail.id]}
+          />
         ))}
       </ul>
-      <div className="sticky bottom-0 -mx-4 border-t border-loam-200 bg-loam-50/95 px-4 py-3" data-sticky-bottom>
-        <button type="submit" className="btn-primary w-full text-lg" disabled={pending}>
-          {pending ? "Saving…" : `Save ${marked.length} trail${marked.length === 1 ? "" : "s"}`}
-        </button>
+      <div className="sticky bottom-0 -mx-4 space-y-2 border-t border-loam-200 bg-loam-50/95 px-4 py-2" data-sticky-bottom>
+        <div ref={outcomeRef} tabIndex={-1} aria-live="polite" className="outline-none" data-testid="check-outcome">
+          {outcome && (
+            <div className={`rounded-lg p-2 font-semibold ${outcome.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`} role={outcome.ok ? "status" : "alert"}>
+              {outcome.ok ? <p>Saved {plural(outcome.saved, "trail")}. Riders see it on the board now.</p> : <p>{outcome.message}</p>}
+              {outcome.ok && (outcome.notices.closure || outcome.notices.reopening) && (
+                <p className="mt-1 flex flex-wrap gap-2">
+                  {outcome.notices.closure && (
+                    <a href={outcome.notices.closure} className="btn-primary">
+                      Send a closure notice to riders
+                    </a>
+                  )}
+                  {outcome.notices.reopening && (
+                    <a href={outcome.notices.reopening} className="btn-primary">
+                      Send a reopening notice to riders
+                    </a>
+                  )}
+                </p>
+              )}
+            </div>
+          )}
+        </div>
+        <p className="text-sm font-semibold" data-testid="check-count">
+          {checked} of {plural(start.trails.length, "trail")} checked today · {marked.length} marked now
+        </p>
+        <div className="grid grid-cols-2 gap-2">
+          <button type="button" className="btn-quiet border-2" disabled={rest === 0} onClick={() => setDrafts(markRestUnchanged(facts, drafts))}>
+            Mark the rest unchanged{rest > 0 ? ` (${rest})` : ""}
+          </button>
+          <button type="submit" className="btn-primary text-lg" disabled={pending}>
+            {pending ? "Saving…" : `Save ${plural(marked.length, "trail")}`}
+          </button>
+        </div>
       </div>
     </form>
   );

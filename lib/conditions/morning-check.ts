@@ -11,13 +11,14 @@ import { AppError } from "@/lib/shared/errors";
 import { parkLocalDate } from "@/lib/shared/time";
 import { morningCheckSchema, type MorningCheckInput } from "@/lib/conditions/pure/schemas";
 import { Trail, sequelize, type Park } from "@/models";
-import { closureNoticeHref } from "./pure/notice-link";
+import { offeredNotices, type OfferedNoticeKind, type StatusChange } from "./pure/notice-link";
 import { reportView, type ReportView } from "./report-view";
 import { currentReportView, saveRevision } from "./write-report";
 
 export type CheckProblem = { trailId: string | null; field: string; message: string };
 export type CheckConflict = { trailId: string; trailName: string; current: ReportView | null };
-export type CheckResult = { date: string; saved: ReportView[]; closureNoticeHref: string | null };
+/** `notices`: a prefilled notice link per kind, offered only for trails this save newly closed or reopened. */
+export type CheckResult = { date: string; saved: ReportView[]; notices: Record<OfferedNoticeKind, string | null> };
 
 /** Zod issues regrouped per trail: "entries.3.report.reason" → trail 3's reason. */
 function problemsFrom(error: ZodError, body: unknown): CheckProblem[] {
@@ -69,10 +70,10 @@ export async function saveMorningCheck(actor: Actor | null, park: Park, body: un
   // A fixed locking order (by trail id) so two overlapping checks cannot deadlock.
   const entries = [...input.entries].sort((a, b) => a.trailId.localeCompare(b.trailId));
 
-  let saved: ReportView[];
+  let saved: { report: ReportView; from: StatusChange["from"] }[];
   try {
     saved = await sequelize.transaction(async (transaction) => {
-      const reports: ReportView[] = [];
+      const reports: typeof saved = [];
       const conflicts: CheckConflict[] = [];
       const problems: CheckProblem[] = [];
       for (const entry of entries) {
@@ -80,7 +81,7 @@ export async function saveMorningCheck(actor: Actor | null, park: Park, body: un
         const values = entry.unchanged ? ("unchanged" as const) : entry.report!;
         try {
           const result = await saveRevision({ trail, park, actorId: actor.id, date, baseRevision: entry.baseRevision, values, now }, transaction);
-          if (result.ok) reports.push(reportView(result.report));
+          if (result.ok) reports.push({ report: reportView(result.report), from: result.previousStatus });
           else conflicts.push({ trailId: trail.id, trailName: trail.name, current: result.current });
         } catch (error) {
           if (!(error instanceof AppError)) throw error;
@@ -103,6 +104,6 @@ export async function saveMorningCheck(actor: Actor | null, park: Park, body: un
     refuseConflicts(conflicts);
   }
 
-  const closed = saved.filter((r) => r.status === "closed").map((r) => ({ id: r.trailId, name: trails.get(r.trailId)!.name, reason: r.reason }));
-  return { date, saved, closureNoticeHref: closed.length ? closureNoticeHref(park.slug, park.name, closed) : null };
+  const changes = saved.map(({ report, from }) => ({ id: report.trailId, name: trails.get(report.trailId)!.name, reason: report.reason, from, to: report.status }));
+  return { date, saved: saved.map((s) => s.report), notices: offeredNotices(park.slug, park.name, changes) };
 }

@@ -14,6 +14,7 @@ import { AppError, notFound } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
 import { parkLocalDate } from "@/lib/shared/time";
 import { reportPostSchema, type ReportInput } from "@/lib/conditions/pure/schemas";
+import type { ReportStatus } from "@/lib/conditions/pure/vocabulary";
 import { AuditEvent, Park, Trail, TrailReport, sequelize } from "@/models";
 import { reportValues, reportView, type ReportView } from "./report-view";
 
@@ -26,7 +27,8 @@ export type RevisionRequest = {
   values: ReportInput | "unchanged";
   now: Date;
 };
-export type RevisionResult = { ok: true; report: TrailReport } | { ok: false; current: ReportView | null };
+/** `previousStatus`: the status before this save (today's earlier revision, or the last day's), so callers can tell a new closure from a kept one. */
+export type RevisionResult = { ok: true; report: TrailReport; previousStatus: ReportStatus | null } | { ok: false; current: ReportView | null };
 
 const currentWhere = (trailId: string, date: string) => ({ trailId, reportDate: date, isCurrent: true });
 
@@ -71,7 +73,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
     { trailId: trail.id, parkId: park.id, reportDate: date, revision: request.baseRevision + 1, isCurrent: true, ...values, reporterId: request.actorId, reportedAt: now },
     { transaction },
   );
-  const from = previous?.status ?? null;
+  const from = (previous?.status ?? null) as ReportStatus | null;
   if (from !== values.status) {
     await AuditEvent.create(
       {
@@ -86,7 +88,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
       { transaction },
     );
   }
-  return { ok: true, report };
+  return { ok: true, report, previousStatus: from };
 }
 
 export async function loadTrailWithPark(trailId: string): Promise<{ trail: Trail; park: Park }> {

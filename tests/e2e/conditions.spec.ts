@@ -28,7 +28,7 @@ test("a rider reads the board without signing in; filters are plain links", asyn
   for (const src of scripts) expect(await (await request.get(src)).text()).not.toContain("maplibre");
 
   await page.getByText("Filter trails").click();
-  await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Extreme" }).click();
+  await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Extremely difficult" }).click();
   await expect(page).toHaveURL(/difficulty=extreme/);
   await expect(page.getByTestId("board-trail")).toHaveCount(2);
   await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Jump line" }).click();

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
+import { directionLabel, kindLabel } from "@/lib/trails/pure/vocabulary";
 import { ElevationProfile } from "@/components/elevation-profile";
 import { TrailFiguresList } from "@/components/trail-figures";
 import { getActor } from "@/lib/server/auth/actor";
@@ -47,8 +48,11 @@ export default async function TrailPage({ params }: Props) {
         <h1 className="text-2xl font-bold">{trail.name}</h1>
         <p className="flex flex-wrap items-center gap-x-3 gap-y-1">
           <DifficultyBadge difficulty={trail.difficulty} className="font-semibold" />
-          <span>{trail.kind}</span>
-          <span>{trail.direction === "both" ? "ridden both ways" : trail.direction}</span>
+          <span>
+            <span className="sr-only">Kind: </span>
+            {kindLabel(trail.kind)}
+          </span>
+          <span>{directionLabel(trail.direction)}</span>
         </p>
         {trail.archivedAt && <p className="rounded-lg bg-flare-100 p-2 font-semibold">Archived on {dateOf(trail.archivedAt)}: hidden from riders; kept for the record.</p>}
         {canEdit && (

@@ -76,3 +76,26 @@ export function entryFromDraft(trailId: string, draft: CheckDraft): CheckRequest
     report: { status: draft.status, ...(reason ? { reason } : {}), surfaces: draft.surfaces, features: draft.features, ...(note ? { note } : {}) },
   };
 }
+
+/** What the check screen knows about a trail besides its draft. */
+export type CheckRowFacts = { id: string; inspectedToday: boolean; hasStart: boolean };
+
+/** A trail counts as checked today when it already has today's report or is marked in this check. */
+export const isChecked = (trail: CheckRowFacts, draft: CheckDraft): boolean => trail.inspectedToday || draft.mode !== "untouched";
+
+/**
+ * "Mark the rest unchanged": every trail not yet checked today that has a report to keep.
+ * Trails without any earlier report stay as they are (there is nothing to keep), and so do
+ * trails already checked or marked: the ranger's own marks are never overwritten.
+ */
+export function markRestUnchanged(trails: CheckRowFacts[], drafts: Record<string, CheckDraft>): Record<string, CheckDraft> {
+  const next = { ...drafts };
+  for (const trail of trails) {
+    if (trail.hasStart && !isChecked(trail, drafts[trail.id])) next[trail.id] = { ...drafts[trail.id], mode: "unchanged" };
+  }
+  return next;
+}
+
+/** The trails "Mark the rest unchanged" would mark. */
+export const restToMark = (trails: CheckRowFacts[], drafts: Record<string, CheckDraft>): number =>
+  trails.filter((t) => t.hasStart && !isChecked(t, drafts[t.id])).length;

@@ -45,7 +45,7 @@ describe("the morning check", () => {
     const todayA = await TrailReport.findOne({ where: { trailId: a.id, reportDate: "2026-12-02", isCurrent: true } });
     expect(todayA).toMatchObject({ status: "open", surfaces: ["tacky"], features: { berms: "firm" }, revision: 1 });
     // Closing a trail offers a notice with the text written.
-    const href = new URL(result.closureNoticeHref!, "http://x.test");
+    const href = new URL(result.notices.closure!, "http://x.test");
     expect(href.pathname).toBe(`/staff/${park.slug}/notices/new`);
     expect(href.searchParams.get("trailIds")).toBe(c.id);
     expect(href.searchParams.get("message")).toContain("Trail 3 is closed: Wet after rain.");
@@ -53,6 +53,34 @@ describe("the morning check", () => {
     const after = await morningCheckStart(park, now);
     expect(after.trails.filter((t) => t.inspectedToday)).toHaveLength(3);
     expect(after.trails.find((t) => t.id === a.id)!.baseRevision).toBe(1);
+  });
+
+  it("offers a closure notice only for a new closure and a reopening notice for a trail that was closed", async () => {
+    const { park, ranger, trails } = await parkWithTrails(3, ZONE);
+    const [keptClosed, reopened, stillOpen] = trails;
+    const yesterday = at("2026-12-01", "07:00");
+    await postTrailReport(ranger, keptClosed.id, { status: "closed", reason: "Bridge out" }, { now: yesterday });
+    await postTrailReport(ranger, reopened.id, { status: "closed", reason: "Flooded" }, { now: yesterday });
+    await postTrailReport(ranger, stillOpen.id, { status: "open" }, { now: yesterday });
+    const now = at("2026-12-02", "06:50");
+    const result = await saveMorningCheck(
+      ranger,
+      park,
+      {
+        entries: [
+          { trailId: keptClosed.id, baseRevision: 0, unchanged: true },
+          { trailId: reopened.id, baseRevision: 0, report: { status: "open", surfaces: ["damp"] } },
+          { trailId: stillOpen.id, baseRevision: 0, unchanged: true },
+        ],
+      },
+      { now },
+    );
+    // Kept closed: its riders already had the closure notice, so none is offered again.
+    expect(result.notices.closure).toBeNull();
+    const reopening = new URL(result.notices.reopening!, "http://x.test");
+    expect(reopening.searchParams.get("kind")).toBe("reopening");
+    expect(reopening.searchParams.get("trailIds")).toBe(reopened.id);
+    expect(reopening.searchParams.get("message")).toBe(`${park.name}: Trail 2 is open again.`);
   });
 
   it("is all or nothing: one invalid trail saves nothing and names the trail and field", async () => {

@@ -3,7 +3,7 @@ import { filterHref, parseBoardFilters } from "@/lib/conditions/pure/board-filte
 import { filterTrails } from "@/lib/conditions/pure/filter-trails";
 import { monthGrid, shiftMonth } from "@/lib/conditions/pure/calendar";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
-import { closureNoticeHref } from "@/lib/conditions/pure/notice-link";
+import { closureNoticeHref, noticeKindFor } from "@/lib/conditions/pure/notice-link";
 
 const trails = [
   { name: "A", difficulty: "easy", kind: "flow", effectiveStatus: "open" },
@@ -39,6 +39,17 @@ describe("closure notice link", () => {
     expect(href).toContain("trailIds=11111111-1111-4111-8111-111111111111,22222222-2222-4222-8222-222222222222&");
     expect(url.searchParams.get("kind")).toBe("closure");
     expect(url.searchParams.get("message")).toBe("Harrow Ridge: Gnarlroot is closed: Saturated & slick. Plumbline is closed.");
+  });
+});
+
+describe("which notice a status change offers (common practice, no published source)", () => {
+  it("a new closure offers a closure notice, a closed trail opening or easing offers a reopening, anything else none", () => {
+    expect(noticeKindFor({ from: "open", to: "closed" })).toBe("closure");
+    expect(noticeKindFor({ from: null, to: "closed" })).toBe("closure");
+    expect(noticeKindFor({ from: "closed", to: "closed" })).toBeNull();
+    expect(noticeKindFor({ from: "closed", to: "open" })).toBe("reopening");
+    expect(noticeKindFor({ from: "closed", to: "caution" })).toBe("reopening");
+    expect(noticeKindFor({ from: "open", to: "caution" })).toBeNull();
   });
 });
 

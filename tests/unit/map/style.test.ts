@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { LAYER_IDS, SOURCE_IDS, TOGGLE_GROUPS, TRAIL_LINE_LAYER_IDS, trailLineLayerId } from "@/lib/map/pure/layer-ids";
 import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/pure/status";
 import { buildParkStyle, overlayOnHostedStyle } from "@/lib/map/pure/style";
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues } from "@/lib/trails/pure/schemas";
 
 // Checked against the MapLibre style specification itself (@maplibre/maplibre-gl-style-spec,
