@@ -19,7 +19,7 @@ function turbopackRoot() {
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "pg-boss", "nodemailer"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "pg-boss", "nodemailer", "mailparser"],
   poweredByHeader: false,
   reactStrictMode: true,
   turbopack: { root: turbopackRoot() },

@@ -3,14 +3,14 @@ import { DifficultyBadge } from "@/components/difficulty-badge";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
 import { kindLabel } from "@/lib/trails/pure/vocabulary";
 import type { BoardTrail } from "@/lib/conditions/board";
-import { parkLocalTime } from "@/lib/shared/time";
+import { formatParkDay, parkLocalTime } from "@/lib/shared/time";
 import { HazardList } from "./hazard-list";
 import { StatusLabel } from "./status-label";
 
 function lastSeen(trail: BoardTrail, timeZone: string): string {
   if (trail.inspectedToday && trail.lastReportAt) return `Inspected ${parkLocalTime(new Date(trail.lastReportAt), timeZone)}`;
   if (!trail.lastReportAt) return "Not inspected yet today";
-  const when = new Intl.DateTimeFormat("en-GB", { timeZone, weekday: "short", day: "numeric", month: "short" }).format(new Date(trail.lastReportAt));
+  const when = formatParkDay(new Date(trail.lastReportAt), timeZone);
   return `Not inspected yet today · last inspected ${when}`;
 }
 

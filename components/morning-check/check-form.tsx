@@ -47,7 +47,8 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
     if (!outcome) return;
     const firstTrouble = Object.keys(messages)[0];
     const target = !outcome.ok && firstTrouble ? document.getElementById(`trail-${firstTrouble}`) : outcomeRef.current;
-    target?.scrollIntoView({ block: "nearest" });
+    // A trail that needs attention goes to the middle of the screen, clear of the bar at the bottom.
+    target?.scrollIntoView({ block: target === outcomeRef.current ? "nearest" : "center" });
     target?.focus({ preventScroll: true });
   }, [outcome, messages]);
 
@@ -151,7 +152,7 @@ export function MorningCheckForm({ parkSlug, start }: { parkSlug: string; start:
           <button type="button" className="btn-quiet border-2" disabled={rest === 0} onClick={() => setDrafts(markRestUnchanged(facts, drafts))}>
             Mark the rest unchanged{rest > 0 ? ` (${rest})` : ""}
           </button>
-          <button type="submit" className="btn-primary text-lg" disabled={pending}>
+          <button type="submit" className="btn-primary text-lg" disabled={pending || marked.length === 0}>
             {pending ? "Saving…" : `Save ${plural(marked.length, "trail")}`}
           </button>
         </div>

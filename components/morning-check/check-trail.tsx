@@ -6,6 +6,7 @@ import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, 
 import { applyChange, draftFromStart, type DraftChange, type CheckDraft } from "@/lib/conditions/pure/check-draft";
 import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type ReportStatus, type Surface } from "@/lib/conditions/pure/vocabulary";
 import type { CheckTrail } from "@/lib/conditions/morning-check-start";
+import { formatCalendarDate } from "@/lib/shared/time";
 import { ToggleGroup } from "./toggle-group";
 
 export type TrailMessage = { kind: "problem" | "conflict"; text: string; onAdopt?: () => void };
@@ -16,7 +17,7 @@ const MODE_TEXT = { untouched: "Not checked", unchanged: "Unchanged", edited: "C
 function lastState(trail: CheckTrail): string {
   if (!trail.start) return "No earlier report: set its status";
   const parts = [trail.start.reason, trail.start.surfaces.join(", "), describeFeatures(trail.start.features)].filter(Boolean);
-  return [...parts, trail.inspectedToday ? "checked today" : `from ${trail.startDate}`].join(" · ");
+  return [...parts, trail.inspectedToday ? null : `as of ${formatCalendarDate(trail.startDate!)}`].filter(Boolean).join(" · ");
 }
 
 /**
@@ -77,7 +78,7 @@ export function CheckTrailRow(props: {
           <p className="mt-0.5 text-sm text-loam-600">{lastState(trail)}</p>
         </div>
         <span className="shrink-0 rounded bg-loam-100 px-2 py-0.5 text-xs font-semibold" data-testid="mode">
-          {MODE_TEXT[draft.mode]}
+          {draft.mode === "untouched" && trail.inspectedToday ? "Checked today" : MODE_TEXT[draft.mode]}
         </span>
       </div>
       {props.message && (

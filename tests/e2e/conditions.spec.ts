@@ -54,13 +54,15 @@ test("the ranger runs the morning check on a phone: one closure after rain, othe
   await expect(page.getByTestId("check-trail")).toHaveCount(10);
 
   const gnarlroot = checkRow(page, "Gnarlroot");
+  await gnarlroot.getByRole("button", { name: "Change", exact: true }).click();
   await gnarlroot.getByRole("radio", { name: "Closed" }).click();
   await gnarlroot.getByLabel("Reason (closed)").fill("Saturated after the night's rain");
   await setSurfaces(gnarlroot, ["wet", "muddy"]);
 
   for (const name of ["Mossback Ramble", "Cedar Skip"]) {
     const card = checkRow(page, name);
-    // A tap on the status, even the one already shown, marks the trail inspected.
+    await card.getByRole("button", { name: "Change", exact: true }).click();
+    // A tap on the status, even the one already shown, marks the trail checked.
     await card.getByRole("radio", { name: "Open" }).click();
     await setSurfaces(card, ["tacky", "damp"]);
   }
@@ -69,14 +71,15 @@ test("the ranger runs the morning check on a phone: one closure after rain, othe
 
   // With the keyboard: arrow keys move through the status buttons.
   const slatebelt = checkRow(page, "Slatebelt Flow");
+  await slatebelt.getByRole("button", { name: "Change", exact: true }).click();
   await slatebelt.getByRole("radio", { name: "Open" }).click();
   await slatebelt.getByRole("radio", { name: "Open" }).focus();
   await page.keyboard.press("ArrowRight");
   await expect(slatebelt.getByRole("radio", { name: "Caution" })).toBeChecked();
   await slatebelt.getByLabel("Reason (caution)").fill("Boardwalk slick until midday");
 
-  await expect(page.getByTestId("check-count")).toContainText("5 marked in this check");
-  await shot(page, "check-marked");
+  await expect(page.getByTestId("check-count")).toContainText("5 marked now");
+  await shot(page, "check-marked-by-hand");
   await page.getByRole("button", { name: "Save 5 trails" }).click();
   await expect(page.getByTestId("check-outcome")).toContainText("Saved 5 trails.");
   const notice = page.getByRole("link", { name: "Send a closure notice to riders" });

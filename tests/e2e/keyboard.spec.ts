@@ -43,12 +43,14 @@ test("the morning check with the keyboard alone: a status, a reason, a surface, 
   await expect(page.getByRole("heading", { name: "Morning check" })).toBeVisible();
   const card = (name: string) => page.locator(`[data-testid="check-trail"][data-trail-name="${name}"]`);
 
-  // Into Cedar Skip's status: Tab lands on the status shown (or the first), arrows move and select.
+  // Cedar Skip's Change opens its controls with Enter; Tab lands on the status shown (or the first), arrows move and select.
+  await pressUntil(page, "Tab", (f) => f.trail === "Cedar Skip" && f.label === "Change");
+  await page.keyboard.press("Enter");
   const status = await pressUntil(page, "Tab", (f) => f.trail === "Cedar Skip" && f.type === "radio");
   expect(["Open", "Caution", "Closed"].some((s) => status.label.includes(s))).toBe(true);
   for (let i = 0; i < 3 && !(await focused(page)).label.includes("Caution"); i++) await page.keyboard.press("ArrowRight");
   await expect(card("Cedar Skip").getByRole("radio", { name: "Caution" })).toBeChecked();
-  await expect(card("Cedar Skip").getByTestId("mode")).toHaveText("Edited");
+  await expect(card("Cedar Skip").getByTestId("mode")).toHaveText("Changed");
 
   // The reason field follows the status; then a surface, ticked with Space.
   await pressUntil(page, "Tab", (f) => f.label === "Reason (caution)");

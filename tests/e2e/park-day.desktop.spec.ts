@@ -84,6 +84,7 @@ test("the park day: upload, invite, check with a closure and a hazard, board and
   await ranger.goto(`/staff/${PARK}/morning-check`);
   await expect(ranger.getByRole("heading", { name: "Morning check" })).toBeVisible();
   const closed = checkRow(ranger, trailName);
+  await closed.getByRole("button", { name: "Change", exact: true }).click();
   await closed.getByRole("radio", { name: "Closed" }).click();
   await closed.getByLabel("Reason (closed)").fill(reason);
   await setSurfaces(closed, ["wet", "muddy"]);
@@ -92,10 +93,11 @@ test("the park day: upload, invite, check with a closure and a hazard, board and
   expect(others.length).toBeGreaterThanOrEqual(10);
   for (const name of others) {
     const card = checkRow(ranger, name);
+    await card.getByRole("button", { name: "Change", exact: true }).click();
     await card.getByRole("radio", { name: "Open" }).click();
     await setSurfaces(card, name === HAZARD_TRAIL ? ["damp", "rocky"] : ["tacky", "damp"]);
   }
-  await expect(ranger.getByTestId("check-count")).toContainText(`${names.length} marked in this check`);
+  await expect(ranger.getByTestId("check-count")).toContainText(`${names.length} marked now`);
   await shot(ranger, "park-day-4-check-marked");
   await ranger.getByRole("button", { name: `Save ${names.length} trails` }).click();
   await expect(ranger.getByTestId("check-outcome")).toContainText(`Saved ${names.length} trails.`);

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { formatCalendarDate } from "@/lib/shared/time";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { BoardFilterLinks } from "@/components/board/board-filters";
@@ -15,8 +16,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   return { title: `Today's conditions · ${parkSlug}` };
 }
 
-const longDate = (date: string) =>
-  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
+const longDate = (date: string) => formatCalendarDate(date, "long");
 
 /** The public conditions board: rendered on the server for a fast first paint, refreshed by a small client part. */
 export default async function ParkBoardPage({ params, searchParams }: Props) {

@@ -11,6 +11,7 @@ import { getTrailDetail, type TrailDetail } from "@/lib/trails/queries";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { AppError } from "@/lib/shared/errors";
 import { formatDistance } from "@/lib/shared/units";
+import { formatParkDay } from "@/lib/shared/time";
 
 export const dynamic = "force-dynamic";
 
@@ -30,7 +31,7 @@ export async function generateMetadata({ params }: Props) {
   return { title: trail ? trail.name : "Trail" };
 }
 
-const dateOf = (iso: string) => new Date(iso).toISOString().slice(0, 10);
+const dateOf = (iso: string, timeZone: string) => formatParkDay(new Date(iso), timeZone);
 
 export default async function TrailPage({ params }: Props) {
   const { id } = await params;
@@ -54,7 +55,7 @@ export default async function TrailPage({ params }: Props) {
           </span>
           <span>{directionLabel(trail.direction)}</span>
         </p>
-        {trail.archivedAt && <p className="rounded-lg bg-flare-100 p-2 font-semibold">Archived on {dateOf(trail.archivedAt)}: hidden from riders; kept for the record.</p>}
+        {trail.archivedAt && <p className="rounded-lg bg-flare-100 p-2 font-semibold">Archived on {dateOf(trail.archivedAt, trail.park.timeZone)}: hidden from riders; kept for the record.</p>}
         {canEdit && (
           <p>
             <Link href={`/staff/${trail.park.slug}/trails/${trail.id}/edit`} className="btn-quiet">Edit trail</Link>
@@ -108,7 +109,7 @@ export default async function TrailPage({ params }: Props) {
               <span>
                 <span className="font-semibold">Version {v.versionNo}</span>
                 {v.versionNo === trail.currentVersion && <span className="ml-1 rounded bg-moss-100 px-1 text-moss-700">current</span>}
-                <span className="text-loam-600"> · {dateOf(v.uploadedAt)} · {v.sourceFormat.toUpperCase()}{v.lengthM !== null && ` · ${formatDistance(v.lengthM, system)}`}</span>
+                <span className="text-loam-600"> · {dateOf(v.uploadedAt, trail.park.timeZone)} · {v.sourceFormat.toUpperCase()}{v.lengthM !== null && ` · ${formatDistance(v.lengthM, system)}`}</span>
               </span>
               <a href={`${download}?version=${v.versionNo}`} className="font-semibold text-moss-700 underline underline-offset-4" download>
                 Original file

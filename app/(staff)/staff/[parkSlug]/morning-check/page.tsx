@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { formatCalendarDate } from "@/lib/shared/time";
 import { ParkStateForm } from "@/components/morning-check/park-state-form";
 import { MorningCheckForm } from "@/components/morning-check/check-form";
 import { getActor } from "@/lib/server/auth/actor";
@@ -12,7 +13,7 @@ import { Park } from "@/models";
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Morning check" };
 
-/** The ranger's morning check on a phone: every trail, one save. */
+/** The ranger's morning check on a phone: every trail as one compact row, one save. */
 export default async function MorningCheckPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
   const [actor, park] = await Promise.all([getActor(), Park.findOne({ where: { slug: parkSlug } })]);
@@ -23,7 +24,7 @@ export default async function MorningCheckPage({ params }: { params: Promise<{ p
       <header>
         <h1 className="text-2xl font-bold">Morning check</h1>
         <p className="text-loam-700">
-          {park.name} · {start.date} (park time). Tap <strong>Unchanged</strong> for a trail as it was, or set what you found; then save once.
+          {park.name} · {formatCalendarDate(start.date, "long")}. <strong>Unchanged</strong> keeps a trail as it was; <strong>Change</strong> sets what you found. Save once at the end.
         </p>
         <p className="mt-1 flex flex-wrap gap-x-4 text-sm font-semibold">
           <Link href={`/parks/${park.slug}`} className="inline-flex min-h-tap items-center text-moss-700 underline">
