@@ -116,3 +116,23 @@ test("a rider and another park's ranger cannot send notices for Harrow Ridge", a
   await page.goto("/staff/harrow-ridge/notices/new");
   await expect(page.getByRole("heading", { name: /new notice/ })).toHaveCount(0);
 });
+
+test("the admin reads captured mail decoded: GET /api/dev/mail gives text and html beside raw, the page frames the HTML", async ({ page }) => {
+  await signInAs(page, demo("admin"), undefined, "/admin/mail");
+  const { messages } = await (await page.request.get("/api/dev/mail")).json();
+  const withHtml = (messages as { raw: string; text: string; html: string | null; subject: string }[]).filter((m) => m.html);
+  expect(withHtml.length).toBeGreaterThan(0);
+  const mail = withHtml.at(-1)!;
+  // The transfer encoding (RFC 2045 §6.7 quoted-printable, or base64) is undone: the link is whole
+  // in the decoded text, while the raw message carries it only encoded.
+  const link = /https?:\/\/\S+\?token=[A-Za-z0-9._%-]+/.exec(mail.text)?.[0];
+  expect(link).toBeTruthy();
+  expect(mail.raw).not.toContain(link);
+  expect(mail.text).not.toMatch(/=\r?\n|=3D/);
+  expect(mail.html).toMatch(/<a [^>]*href="https?:\/\//);
+  await page.goto("/admin/mail");
+  const first = page.getByTestId("captured-mail").first();
+  await first.getByText("As the rider sees it (HTML)").click();
+  await expect(first.locator("iframe")).toHaveAttribute("sandbox", "");
+  await shot(page, "admin-mail-decoded");
+});
