@@ -63,9 +63,11 @@ export function TrailCard({ trail, timeZone }: { trail: BoardTrail; timeZone: st
       <div className="flex flex-wrap items-center gap-x-4 text-sm">
         {trail.hazards.length > 0 ? (
           <details className="w-full">
-            <summary className="inline-flex min-h-tap cursor-pointer items-center font-semibold" data-testid="hazard-count">
-              <span aria-hidden="true">⚠&nbsp;</span>
+            <summary className="inline-flex min-h-tap cursor-pointer list-none items-center gap-1 rounded-lg border-2 border-flare-500 bg-flare-100 px-3 font-semibold [&::-webkit-details-marker]:hidden" data-testid="hazard-count">
+              <span aria-hidden="true">⚠</span>
               {trail.hazards.length} hazard{trail.hazards.length === 1 ? "" : "s"}
+              <span className="ml-1 text-sm font-normal underline underline-offset-2">show</span>
+              <span aria-hidden="true">▾</span>
             </summary>
             <HazardList hazards={trail.hazards} />
           </details>

@@ -33,23 +33,22 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
         <p className="text-loam-700">
           Conditions for <strong>{longDate(board.date)}</strong> (park time)
         </p>
-        <p className="flex flex-wrap gap-2">
-          <Link href={`${path}/map`} className="btn-quiet">
+        <p className="-mx-4 flex gap-2 overflow-x-auto px-4 pb-1">
+          <Link href={`${path}/map`} className="btn-quiet shrink-0">
             Map
           </Link>
-          <Link href={`${path}/trails`} className="btn-quiet">
+          <Link href={`${path}/trails`} className="btn-quiet shrink-0">
             All trails
           </Link>
-          <Link href={`/pressure?park=${board.park.slug}`} className="btn-quiet">
+          <Link href={`/pressure?park=${board.park.slug}`} className="btn-quiet shrink-0">
             Today&apos;s tyre pressure
           </Link>
-          <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet">
+          <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet shrink-0">
             Get closure e-mails
           </Link>
         </p>
       </header>
-      <BoardFilterLinks path={path} filters={filters} />
-      <BoardLive initial={board} filters={filters} />
+      <BoardLive initial={board} filters={filters} filterLinks={<BoardFilterLinks path={path} filters={filters} />} />
     </section>
   );
 }

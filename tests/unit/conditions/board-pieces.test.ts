@@ -4,6 +4,7 @@ import { filterTrails } from "@/lib/conditions/pure/filter-trails";
 import { monthGrid, shiftMonth } from "@/lib/conditions/pure/calendar";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
 import { closureNoticeHref, noticeKindFor } from "@/lib/conditions/pure/notice-link";
+import { boardCounts, firstGlance } from "@/lib/conditions/pure/board-glance";
 
 const trails = [
   { name: "A", difficulty: "easy", kind: "flow", effectiveStatus: "open" },
@@ -71,5 +72,20 @@ describe("feature notes", () => {
   it("reads as one line in a fixed order", () => {
     expect(describeFeatures({ wood: "slick", berms: "soft" })).toBe("berms soft · wooden features slick");
     expect(describeFeatures({})).toBe("");
+  });
+});
+
+describe("the board's first glance (common practice, no published source)", () => {
+  const trail = (name: string, effectiveStatus: "open" | "caution" | "closed" | null, changedSinceYesterday = false) => ({ name, effectiveStatus, changedSinceYesterday });
+  const trails = [trail("A", "open"), trail("B", "closed"), trail("C", "open", true), trail("D", null), trail("E", "caution"), trail("F", "open")];
+
+  it("counts open, caution, closed and not yet checked", () => {
+    expect(boardCounts(trails)).toEqual({ open: 3, caution: 1, closed: 1, notChecked: 1 });
+  });
+
+  it("puts changed and not-open trails first, each group in its order", () => {
+    const { attention, rest } = firstGlance(trails);
+    expect(attention.map((t) => t.name)).toEqual(["B", "C", "D", "E"]);
+    expect(rest.map((t) => t.name)).toEqual(["A", "F"]);
   });
 });

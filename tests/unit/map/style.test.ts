@@ -26,6 +26,17 @@ describe("the park's own map style", () => {
     expect(validateStyleMin(style)).toEqual([]);
   });
 
+  it("writes every label at 12 px or more, at every zoom (WCAG 2.x legibility: common practice, no published minimum)", () => {
+    const sizes = style.layers.flatMap((l) => {
+      const size = (l as { layout?: Record<string, unknown> }).layout?.["text-size"];
+      if (size === undefined) return [];
+      // A number, or ["interpolate", curve, ["zoom"], zoom1, size1, zoom2, size2…]: the sizes are every other stop.
+      return typeof size === "number" ? [size] : (size as unknown[]).slice(3).filter((_, i) => i % 2 === 1).map(Number);
+    });
+    expect(sizes.length).toBeGreaterThan(5);
+    expect(Math.min(...sizes)).toBeGreaterThanOrEqual(12);
+  });
+
   it("needs no other host: no http(s) or protocol-relative URL, no tiles, sprite or glyph server", () => {
     const everything = strings(style);
     expect(everything.filter((s) => /^[a-z][a-z0-9+.-]*:\/\//i.test(s) || s.startsWith("//"))).toEqual([]);
