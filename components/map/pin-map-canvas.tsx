@@ -16,6 +16,8 @@ export type PinMapCanvasProps = {
   /** A pin was dragged, nudged with the arrow keys, or (when selected) sent where the map was tapped. */
   onMove: (key: string, lon: number, lat: number, how: "drag" | "tap" | "key") => void;
   label: string;
+  /** Style layers that draw what the pins draw: hidden, so a moved pin is never drawn twice. */
+  hideLayers?: readonly string[];
 };
 
 /** One arrow-key press moves a pin about this far. */
@@ -29,7 +31,7 @@ const LOOKS = {
 };
 
 /** A map of draggable pins, shared by the staff pin page and the point picker. */
-export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label }: PinMapCanvasProps) {
+export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label, hideLayers = [] }: PinMapCanvasProps) {
   const { state, onIdle, onError } = useMapState();
 
   function onMapClick(event: MapLayerMouseEvent) {
@@ -56,7 +58,10 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
         initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
         style={{ width: "100%", height: "100%" }}
         onClick={onMapClick}
-        onLoad={(event) => exposeMapForTests(event.target)}
+        onLoad={(event) => {
+          for (const id of hideLayers) if (event.target.getLayer(id)) event.target.setLayoutProperty(id, "visibility", "none");
+          exposeMapForTests(event.target);
+        }}
         onIdle={onIdle}
         onError={onError}
         dragRotate={false}
@@ -71,9 +76,10 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
             draggable
             onDragEnd={(event: MarkerDragEvent) => onMove(pin.key, event.lngLat.lng, event.lngLat.lat, "drag")}
           >
+            {/* The touch target is 44 × 44 px (WCAG 2.2, 2.5.5) whatever the size of the dot drawn inside it. */}
             <button
               type="button"
-              className={`inline-flex items-center justify-center rounded-full ${LOOKS[pin.look]} ${selectedKey === pin.key ? "outline-4 outline-offset-2 outline-moss-600" : ""}`}
+              className={`inline-flex h-11 w-11 items-center justify-center rounded-full ${selectedKey === pin.key ? "outline-4 -outline-offset-4 outline-moss-600" : ""}`}
               aria-label={`${pin.label}${selectedKey === pin.key ? " (selected: tap the map or use the arrow keys to move it)" : ""}`}
               aria-pressed={selectedKey === pin.key}
               title={pin.label}
@@ -81,7 +87,9 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
               onClick={() => onSelect?.(pin.key)}
               onKeyDown={(event) => onKey(event, pin)}
             >
-              {pin.look === "hazard" ? "!" : ""}
+              <span aria-hidden="true" className={`inline-flex items-center justify-center rounded-full ${LOOKS[pin.look]}`}>
+                {pin.look === "hazard" ? "!" : ""}
+              </span>
             </button>
           </Marker>
         ))}

@@ -1,16 +1,18 @@
 import "server-only";
 import { hazardView, type HazardView } from "@/lib/hazards/hazard-writes";
+import { snapToTrail } from "@/lib/map/pure/snap";
 import { Hazard, Photo, Trail } from "@/models";
 
-export type HazardListItem = HazardView & { trailName: string | null };
+/** `alongM`: how far along its trail the pin sits (nearest point of the line), for staff who think in trail metres, not coordinates. */
+export type HazardListItem = HazardView & { trailName: string | null; alongM: number | null };
 
-/** A park's open hazards, newest first, with trail names and photo ids. */
+/** A park's open hazards, newest first, with trail names, distance along the trail and photo ids. */
 export async function openHazards(parkId: string): Promise<HazardListItem[]> {
   const rows = await Hazard.findAll({
     where: { parkId, resolvedAt: null },
     include: [
       { model: Photo, as: "photos", attributes: ["id", "createdAt"] },
-      { model: Trail, as: "trail", attributes: ["name"] },
+      { model: Trail, as: "trail", attributes: ["name", "geometry"] },
     ],
     order: [
       ["reportedAt", "DESC"],
@@ -19,7 +21,8 @@ export async function openHazards(parkId: string): Promise<HazardListItem[]> {
   });
   return rows.map((h) => {
     const joined = h as Hazard & { photos: Photo[]; trail: Trail | null };
-    return { ...hazardView(h, joined.photos), trailName: joined.trail?.name ?? null };
+    const alongM = joined.trail ? Math.round(snapToTrail(joined.trail.geometry, h.lon, h.lat).distanceAlongM) : null;
+    return { ...hazardView(h, joined.photos), trailName: joined.trail?.name ?? null, alongM };
   });
 }
 

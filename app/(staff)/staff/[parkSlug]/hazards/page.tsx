@@ -8,6 +8,9 @@ import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { openHazards, trailChoices } from "@/lib/hazards/hazard-queries";
 import { Park } from "@/models";
+import { formatParkDateTime } from "@/lib/shared/time";
+import { formatDistance } from "@/lib/trails/pure/geo";
+import { boundsAround } from "@/lib/map/pure/bounds";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Hazards" };
@@ -30,7 +33,7 @@ export default async function HazardsPage({ params }: { params: Promise<{ parkSl
           </Link>
         </p>
       </header>
-      <HazardForm parkSlug={park.slug} trails={trails} />
+      <HazardForm parkSlug={park.slug} trails={trails} mapBounds={boundsAround(park.centerLon, park.centerLat, 0.01)} />
       <section className="card space-y-3" aria-labelledby="open-hazards">
         <h2 id="open-hazards" className="text-lg font-bold">
           Open hazards ({hazards.length})
@@ -39,7 +42,9 @@ export default async function HazardsPage({ params }: { params: Promise<{ parkSl
         <ul className="space-y-3">
           {hazards.map((h) => (
             <li key={h.id} className="space-y-2 border-b border-loam-100 pb-3">
-              <p className="text-sm text-loam-600">{h.trailName ? `On ${h.trailName}` : "Off the trails"} · {h.lat.toFixed(5)}, {h.lon.toFixed(5)}</p>
+              <p className="text-sm text-loam-600">
+                {h.trailName ? `On ${h.trailName}, ${formatDistance(h.alongM ?? 0)} from its start` : "Off the trails"} · pinned {formatParkDateTime(new Date(h.reportedAt), park.timeZone)}
+              </p>
               <HazardList hazards={[h]} />
               <ResolveHazardButton hazardId={h.id} lockVersion={h.lockVersion} />
             </li>
