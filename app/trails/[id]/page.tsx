@@ -3,6 +3,9 @@ import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
 import { directionLabel, kindLabel } from "@/lib/trails/pure/vocabulary";
 import { ElevationProfile } from "@/components/elevation-profile";
+import { TrailCard } from "@/components/board/trail-card";
+import { TrailSketch } from "@/components/trail-sketch";
+import { boardForPark } from "@/lib/conditions/board";
 import { TrailFiguresList } from "@/components/trail-figures";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
@@ -38,6 +41,7 @@ export default async function TrailPage({ params }: Props) {
   const actor = await getActor();
   const [trail, system] = await Promise.all([loadTrail(id, actor), distanceSystemFor(actor)]);
   const download = `/api/trails/${trail.id}/download`;
+  const today = trail.archivedAt ? null : (await boardForPark(trail.park.slug))?.trails.find((t) => t.id === trail.id);
   const canEdit = !trail.archivedAt && actor !== null && can(actor, "trail:write", { parkId: (await getParkBySlug(trail.park.slug)).id });
 
   return (
@@ -63,6 +67,25 @@ export default async function TrailPage({ params }: Props) {
         )}
       </header>
 
+      {today && (
+        <section aria-labelledby="today-heading" className="space-y-2">
+          <h2 id="today-heading" className="text-lg font-bold">Today</h2>
+          <ul>
+            <TrailCard trail={today} timeZone={trail.park.timeZone} />
+          </ul>
+        </section>
+      )}
+
+      <section className="card space-y-2" aria-labelledby="line-heading">
+        <h2 id="line-heading" className="text-lg font-bold">The line</h2>
+        <TrailSketch line={trail.line} name={trail.name} />
+        <p className="text-sm">
+          <Link href={`/parks/${trail.park.slug}/map`} className="inline-flex min-h-tap items-center font-semibold text-moss-700 underline">
+            Open the park map
+          </Link>
+        </p>
+      </section>
+
       <section className="card space-y-3" aria-labelledby="figures-heading">
         <h2 id="figures-heading" className="text-lg font-bold">Measured from the GPS line</h2>
         <TrailFiguresList figures={trail} system={system} />
@@ -73,7 +96,7 @@ export default async function TrailPage({ params }: Props) {
 
       <section className="card space-y-2" aria-labelledby="profile-heading">
         <h2 id="profile-heading" className="text-lg font-bold">Elevation profile</h2>
-        <ElevationProfile profile={trail.profile} system={system} />
+        <ElevationProfile profile={trail.profile} system={system} marks={trail.features.map((f, i) => ({ dM: f.distanceAlongM, label: String(i + 1) }))} />
       </section>
 
       <section className="card space-y-2" aria-labelledby="features-heading">
@@ -82,9 +105,11 @@ export default async function TrailPage({ params }: Props) {
           <p className="text-sm text-loam-600">No features recorded.</p>
         ) : (
           <ol className="divide-y divide-loam-100" data-testid="feature-list">
-            {trail.features.map((f) => (
+            {trail.features.map((f, i) => (
               <li key={f.id} className="flex justify-between gap-2 py-2">
                 <span>
+                  <span className="mr-2 inline-flex h-6 w-6 items-center justify-center rounded-full border-2 border-loam-900 text-xs font-bold" aria-hidden="true">{i + 1}</span>
+                  <span className="sr-only">Mark {i + 1} on the profile: </span>
                   <span className="font-semibold">{f.kind.replace("-", " ")}</span>
                   {f.size && <span className="text-loam-600"> · {f.size}</span>}
                   {f.name && <span className="text-loam-600"> · {f.name}</span>}
