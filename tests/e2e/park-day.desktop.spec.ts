@@ -196,7 +196,7 @@ test("the park day: upload, invite, check with a closure and a hazard, board and
   await expect(preview).toContainText(`Subject: Harrow Ridge Bike Park: ${trailName} closed`);
   await shot(ranger, "park-day-9-notice-preview");
   await preview.getByRole("button", { name: /^Send to \d+ riders?$/ }).click();
-  await expect(ranger.getByRole("status")).toContainText("Notice queued");
+  await expect(ranger.getByTestId("sending-banner")).toContainText("Sending to");
 
   const worker = await run("node_modules/.bin/tsx", ["--conditions=react-server", "scripts/worker.ts", "--once"], { env: process.env, timeout: 60_000 });
   expect(worker.stdout).toMatch(/done: \d+ sent/);
