@@ -34,7 +34,7 @@ function Group({ path, filters, name, label, options }: { path: string; filters:
 /** Filters as plain links: they work without JavaScript and can be shared. */
 export function BoardFilterLinks({ path, filters }: { path: string; filters: BoardFilters }) {
   return (
-    <details className="card" open={Boolean(filters.status || filters.difficulty || filters.kind)}>
+    <details className="card py-1" open={Boolean(filters.status || filters.difficulty || filters.kind)}>
       <summary className="min-h-tap cursor-pointer content-center font-semibold">Filter trails</summary>
       <nav aria-label="Filter trails" className="mt-2 space-y-3">
         <Group path={path} filters={filters} name="status" label="Status" options={STATUS_FILTERS.map((s) => [s, statusLabel(s)])} />
