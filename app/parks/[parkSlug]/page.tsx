@@ -44,7 +44,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
             Today&apos;s tyre pressure
           </Link>
           <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet shrink-0">
-            Get closure e-mails
+            Get trail notices by e-mail
           </Link>
         </p>
       </header>
