@@ -1,6 +1,7 @@
 "use client";
-import type { KeyboardEvent } from "react";
-import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MarkerDragEvent } from "react-map-gl/maplibre";
+import { useCallback, useEffect, useRef, useState, type KeyboardEvent } from "react";
+import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MapRef, type MarkerDragEvent } from "react-map-gl/maplibre";
+import { spreadOffsets } from "@/lib/map/pure/spread-pins";
 import type { Bounds } from "@/lib/map/pure/bounds";
 import { exposeMapForTests, maplibregl } from "./maplibre-setup";
 import { useMapState } from "./use-map-state";
@@ -33,6 +34,19 @@ const LOOKS = {
 /** A map of draggable pins, shared by the staff pin page and the point picker. */
 export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label, hideLayers = [] }: PinMapCanvasProps) {
   const { state, onIdle, onError } = useMapState();
+  const mapRef = useRef<MapRef>(null);
+  // Pins that would overlap at this zoom are drawn apart, each its own 44 px target.
+  const [offsets, setOffsets] = useState<Record<string, [number, number]>>({});
+  const latestPins = useRef(pins);
+  latestPins.current = pins;
+  const respread = useCallback(() => {
+    const map = mapRef.current;
+    if (!map) return;
+    setOffsets(spreadOffsets(latestPins.current.map((pin) => ({ key: pin.key, ...map.project([pin.lon, pin.lat]) }))));
+  }, []);
+  // Callers pass a fresh array each render: spread again only when a pin really moved.
+  const where = pins.map((pin) => `${pin.key}@${pin.lon},${pin.lat}`).join("|");
+  useEffect(respread, [where, respread]);
 
   function onMapClick(event: MapLayerMouseEvent) {
     // A tap on a pin bubbles up to the map too: only a tap on the ground moves the selected pin.
@@ -53,6 +67,7 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
   return (
     <div className="relative h-[60vh] min-h-80 overflow-hidden rounded-xl border border-loam-300" data-testid="pin-map" data-map-state={state} aria-label={label} role="group">
       <Map
+        ref={mapRef}
         mapLib={maplibregl}
         mapStyle={styleUrl}
         initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
@@ -61,7 +76,9 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
         onLoad={(event) => {
           for (const id of hideLayers) if (event.target.getLayer(id)) event.target.setLayoutProperty(id, "visibility", "none");
           exposeMapForTests(event.target);
+          respread();
         }}
+        onMoveEnd={respread}
         onIdle={onIdle}
         onError={onError}
         dragRotate={false}
@@ -73,6 +90,7 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
             key={pin.key}
             longitude={pin.lon}
             latitude={pin.lat}
+            offset={offsets[pin.key] ?? [0, 0]}
             draggable
             onDragEnd={(event: MarkerDragEvent) => onMove(pin.key, event.lngLat.lng, event.lngLat.lat, "drag")}
           >
