@@ -20,7 +20,7 @@ function turbopackRoot() {
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that bundlers cannot follow.
   // esbuild bundles the service worker at build time (app/serwist/[path]/route.ts).
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "nodemailer", "pino", "esbuild", "esbuild-wasm"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "sharp", "nodemailer", "pino", "esbuild", "esbuild-wasm", "mailparser"],
   poweredByHeader: false,
   reactStrictMode: true,
   turbopack: { root: turbopackRoot() },

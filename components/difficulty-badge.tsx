@@ -1,11 +1,12 @@
-import { DIFFICULTIES, isDifficulty, type Difficulty } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES, isDifficulty, type Difficulty } from "@/lib/trails/pure/vocabulary";
 
 const DIAMOND = "M10 1.5 18.5 10 10 18.5 1.5 10Z";
 
 /**
  * The trade's sign for a difficulty grade, drawn in SVG: white circle, green circle, blue square,
  * black diamond, double black diamond (IMBA Trail Difficulty Rating System). Decorative on its own
- * (aria-hidden): always show it beside its text, as DifficultyBadge does.
+ * (aria-hidden): always show it beside its words, as DifficultyBadge does. The one drawing of the
+ * signs: board, map, trail list, trail page, morning check, history and legend all use it.
  */
 export function DifficultySymbol({ difficulty, size = 18 }: { difficulty: Difficulty; size?: number }) {
   const d = DIFFICULTIES[difficulty];
@@ -27,16 +28,17 @@ export function DifficultySymbol({ difficulty, size = 18 }: { difficulty: Diffic
 }
 
 /**
- * A trail's difficulty as the sign plus its name, never the symbol or colour alone.
- * Usage: `<DifficultyBadge difficulty="intermediate" />` (`wrap` lets a long label break in narrow
- * table cells). An unknown value shows as text only.
+ * A trail's difficulty as the sign plus its words, never the symbol or colour alone.
+ * Usage: `<DifficultyBadge difficulty="intermediate" />`; `label="hidden"` keeps the words for
+ * screen readers only (where they are printed beside it already), `wrap` lets a long label break
+ * in narrow table cells. An unknown value shows as text only.
  */
-export function DifficultyBadge({ difficulty, className = "", wrap = false }: { difficulty: Difficulty | string; className?: string; wrap?: boolean }) {
+export function DifficultyBadge({ difficulty, className = "", wrap = false, size = 18, label = "visible" }: { difficulty: Difficulty | string; className?: string; wrap?: boolean; size?: number; label?: "visible" | "hidden" }) {
   if (!isDifficulty(difficulty)) return <span className={className}>{difficulty}</span>;
   return (
     <span className={["inline-flex items-center gap-1.5", wrap ? "" : "whitespace-nowrap", className].filter(Boolean).join(" ")} data-difficulty={difficulty}>
-      <DifficultySymbol difficulty={difficulty} />
-      <span>{DIFFICULTIES[difficulty].label}</span>
+      <DifficultySymbol difficulty={difficulty} size={size} />
+      <span className={label === "hidden" ? "sr-only" : undefined}>{DIFFICULTIES[difficulty].label}</span>
     </span>
   );
 }

@@ -1,3 +1,5 @@
+"use client";
+import { useEffect, useRef } from "react";
 import type { FormState } from "@/lib/shared/form-state";
 
 /** A labelled input with its error announced to screen readers. */
@@ -33,11 +35,29 @@ export function Field(props: { name: string; label: string; type?: string; state
   );
 }
 
+/**
+ * The form's outcome, and where the person's attention goes: to the first field that needs
+ * attention (by its name), else to this message, brought into view. One pattern for every form.
+ */
 export function FormMessage({ state }: { state: FormState }) {
-  if (!state.message) return <p aria-live="polite" className="sr-only" />;
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (!state.message && !state.fieldErrors) return;
+    const form = ref.current?.closest("form");
+    const first = Object.keys(state.fieldErrors ?? {})[0];
+    const field = first && form ? form.elements.namedItem(first) : null;
+    if (field instanceof HTMLElement) field.focus();
+    else ref.current?.scrollIntoView({ block: "nearest" });
+  }, [state]);
   return (
-    <p role={state.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${state.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`}>
-      {state.message}
-    </p>
+    <div ref={ref}>
+      {state.message ? (
+        <p role={state.ok ? "status" : "alert"} className={`rounded-lg p-3 font-semibold ${state.ok ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}`}>
+          {state.message}
+        </p>
+      ) : (
+        <p aria-live="polite" className="sr-only" />
+      )}
+    </div>
   );
 }

@@ -1,9 +1,7 @@
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES, DIRECTION_LABELS, TRAIL_KINDS } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues, trailDirectionValues, trailKindValues } from "@/lib/trails/pure/schemas";
 
 export type MetadataValues = { name: string; difficulty: string; kind: string; direction: string };
-
-const DIRECTION_LABELS: Record<string, string> = { downhill: "Downhill", uphill: "Uphill", both: "Both ways" };
 
 /** Name, difficulty, kind and direction inputs shared by the upload and edit pages (controlled). */
 export function TrailMetadataFields({ values, onChange, errors = {}, idPrefix }: {
@@ -35,7 +33,7 @@ export function TrailMetadataFields({ values, onChange, errors = {}, idPrefix }:
         <label htmlFor={`${idPrefix}-difficulty`} className="label">Difficulty</label>
         <select {...field("difficulty")}>
           {difficultyValues.map((d) => (
-            <option key={d} value={d}>{`${DIFFICULTIES[d].label} (${DIFFICULTIES[d].colourName} ${DIFFICULTIES[d].symbol.replace("-", " ")})`}</option>
+            <option key={d} value={d}>{`${DIFFICULTIES[d].label} (${DIFFICULTIES[d].signName})`}</option>
           ))}
         </select>
         {error("difficulty")}
@@ -43,7 +41,7 @@ export function TrailMetadataFields({ values, onChange, errors = {}, idPrefix }:
       <div>
         <label htmlFor={`${idPrefix}-kind`} className="label">Kind</label>
         <select {...field("kind")}>
-          {trailKindValues.map((k) => <option key={k} value={k}>{k}</option>)}
+          {trailKindValues.map((k) => <option key={k} value={k}>{TRAIL_KINDS[k].label}</option>)}
         </select>
         {error("kind")}
       </div>

@@ -39,7 +39,7 @@ export async function up() {
     const date = shiftDate(today, offset);
     const who = offset % 3 === 0 ? manager : ranger;
     for (const [index, trail] of trails.entries()) {
-      // The sweep starts at 06:30 and takes about four minutes a trail. Today's reports are
+      // The check starts at 06:30 and takes about four minutes a trail. Today's reports are
       // written only for inspections that have already happened at the park's clock.
       const postedAt = at(date, 6 * 60 + 30 + index * 4);
       if (postedAt > now) continue;

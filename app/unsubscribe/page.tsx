@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { describeUnsubscribe } from "@/lib/notices/subscriptions";
 
-export const metadata = { title: "Stop notice e-mails", robots: { index: false } };
+export const metadata = { title: "Stop trail notices", robots: { index: false } };
 export const dynamic = "force-dynamic";
 
 /**

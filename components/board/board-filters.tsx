@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { filterHref, STATUS_FILTERS, type BoardFilters, type FilterKey } from "@/lib/conditions/pure/board-filters";
-import { DIFFICULTY_LABELS, KIND_LABELS, STATUS_LABELS } from "@/lib/conditions/pure/labels";
+import { STATUS_LABELS } from "@/lib/conditions/pure/labels";
+import { DIFFICULTIES, TRAIL_KINDS } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues, trailKindValues } from "@/lib/trails/pure/schemas";
 
 const statusLabel = (s: string) => (s === "not-inspected" ? "Not inspected" : STATUS_LABELS[s as keyof typeof STATUS_LABELS]);
@@ -33,12 +34,12 @@ function Group({ path, filters, name, label, options }: { path: string; filters:
 /** Filters as plain links: they work without JavaScript and can be shared. */
 export function BoardFilterLinks({ path, filters }: { path: string; filters: BoardFilters }) {
   return (
-    <details className="card" open={Boolean(filters.status || filters.difficulty || filters.kind)}>
+    <details className="card py-1" open={Boolean(filters.status || filters.difficulty || filters.kind)}>
       <summary className="min-h-tap cursor-pointer content-center font-semibold">Filter trails</summary>
       <nav aria-label="Filter trails" className="mt-2 space-y-3">
         <Group path={path} filters={filters} name="status" label="Status" options={STATUS_FILTERS.map((s) => [s, statusLabel(s)])} />
-        <Group path={path} filters={filters} name="difficulty" label="Difficulty" options={difficultyValues.map((d) => [d, DIFFICULTY_LABELS[d]])} />
-        <Group path={path} filters={filters} name="kind" label="Kind" options={trailKindValues.map((k) => [k, KIND_LABELS[k]])} />
+        <Group path={path} filters={filters} name="difficulty" label="Difficulty" options={difficultyValues.map((d) => [d, DIFFICULTIES[d].label])} />
+        <Group path={path} filters={filters} name="kind" label="Kind" options={trailKindValues.map((k) => [k, TRAIL_KINDS[k].label])} />
       </nav>
     </details>
   );

@@ -3,7 +3,7 @@ import Link from "next/link";
 /** Links from the staff desk to the conditions tools of one park. */
 export function StaffConditionsLinks({ parkSlug }: { parkSlug: string }) {
   const links = [
-    { href: `/staff/${parkSlug}/sweep`, label: "Morning sweep" },
+    { href: `/staff/${parkSlug}/morning-check`, label: "Morning check" },
     { href: `/staff/${parkSlug}/hazards`, label: "Hazards" },
     { href: `/staff/${parkSlug}/activity`, label: "Status changes and export" },
     { href: `/parks/${parkSlug}`, label: "Public board" },

@@ -1,15 +1,16 @@
 import Link from "next/link";
-import { describeFeatures, KIND_LABELS } from "@/lib/conditions/pure/labels";
+import { DifficultyBadge } from "@/components/difficulty-badge";
+import { describeFeatures } from "@/lib/conditions/pure/labels";
+import { kindLabel } from "@/lib/trails/pure/vocabulary";
 import type { BoardTrail } from "@/lib/conditions/board";
-import { parkLocalTime } from "@/lib/shared/park-clock";
-import { DifficultyMark } from "./difficulty-mark";
+import { parkLocalTime, formatParkDay } from "@/lib/shared/park-clock";
 import { HazardList } from "./hazard-list";
 import { StatusLabel } from "./status-label";
 
 function lastSeen(trail: BoardTrail, timeZone: string): string {
   if (trail.inspectedToday && trail.lastReportAt) return `Inspected ${parkLocalTime(new Date(trail.lastReportAt), timeZone)}`;
   if (!trail.lastReportAt) return "Not inspected yet today";
-  const when = new Intl.DateTimeFormat("en-GB", { timeZone, weekday: "short", day: "numeric", month: "short" }).format(new Date(trail.lastReportAt));
+  const when = formatParkDay(new Date(trail.lastReportAt), timeZone);
   return `Not inspected yet today · last inspected ${when}`;
 }
 
@@ -36,8 +37,8 @@ export function TrailCard({ trail, timeZone }: { trail: BoardTrail; timeZone: st
         <div>
           <h3 className="text-lg font-bold leading-tight">{trail.name}</h3>
           <p className="flex flex-wrap items-center gap-x-2 text-sm text-loam-600">
-            <DifficultyMark difficulty={trail.difficulty} />
-            <span>· {KIND_LABELS[trail.kind] ?? trail.kind}</span>
+            <DifficultyBadge difficulty={trail.difficulty} />
+            <span>· {kindLabel(trail.kind)}</span>
           </p>
         </div>
         <StatusLabel status={trail.effectiveStatus} />
@@ -62,9 +63,11 @@ export function TrailCard({ trail, timeZone }: { trail: BoardTrail; timeZone: st
       <div className="flex flex-wrap items-center gap-x-4 text-sm">
         {trail.hazards.length > 0 ? (
           <details className="w-full">
-            <summary className="inline-flex min-h-tap cursor-pointer items-center font-semibold" data-testid="hazard-count">
-              <span aria-hidden="true">⚠&nbsp;</span>
+            <summary className="inline-flex min-h-tap cursor-pointer list-none items-center gap-1 rounded-lg border-2 border-flare-500 bg-flare-100 px-3 font-semibold [&::-webkit-details-marker]:hidden" data-testid="hazard-count">
+              <span aria-hidden="true">⚠</span>
               {trail.hazards.length} hazard{trail.hazards.length === 1 ? "" : "s"}
+              <span className="ml-1 text-sm font-normal underline underline-offset-2">show</span>
+              <span aria-hidden="true">▾</span>
             </summary>
             <HazardList hazards={trail.hazards} />
           </details>

@@ -6,13 +6,18 @@
  */
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
+import { PickPointMap } from "@/components/map/pick-point-map";
 import { HAZARD_KIND_LABELS } from "@/lib/conditions/pure/labels";
+import type { Bounds } from "@/lib/map/pure/bounds";
 
 type Trail = { id: string; name: string; lengthM: number };
 type Where = "coordinates" | "along";
 const KINDS = Object.entries(HAZARD_KIND_LABELS);
 
-export function HazardForm({ parkSlug, trails }: { parkSlug: string; trails: Trail[] }) {
+/** A typed coordinate pair, or null while either is blank or not a number. */
+const typedPoint = (lon: string, lat: string) => (lon.trim() && lat.trim() && Number.isFinite(Number(lon)) && Number.isFinite(Number(lat)) ? { lon: Number(lon), lat: Number(lat) } : null);
+
+export function HazardForm({ parkSlug, trails, mapBounds }: { parkSlug: string; trails: Trail[]; mapBounds: Bounds }) {
   const router = useRouter();
   const form = useRef<HTMLFormElement>(null);
   const [where, setWhere] = useState<Where>("coordinates");
@@ -117,6 +122,17 @@ export function HazardForm({ parkSlug, trails }: { parkSlug: string; trails: Tra
         </div>
         {where === "coordinates" ? (
           <div className="space-y-2">
+            <PickPointMap
+              parkSlug={parkSlug}
+              bounds={mapBounds}
+              value={typedPoint(lon, lat)}
+              label="Tap the map where the hazard is; drag the pin or use the arrow keys to adjust"
+              onChange={(pickedLon, pickedLat) => {
+                setLon(pickedLon.toFixed(6));
+                setLat(pickedLat.toFixed(6));
+                setLocating(null);
+              }}
+            />
             <button type="button" className="btn-quiet w-full" onClick={useMyLocation}>
               Use my location
             </button>

@@ -41,19 +41,21 @@ export function MonthGlance({ month, statusByDate, hrefForMonth, today }: { mont
             <tr key={w}>
               {week.map((date, d) => {
                 const status = date ? statusByDate.get(date) : undefined;
+                // YYYY-MM-DD strings compare as dates: a day after today has no report yet, it is not "no report".
+                const future = date !== null && date > today;
                 return (
                   <td key={d} className="p-0.5">
                     {date && (
                       <div
-                        className={`flex h-12 flex-col items-center justify-center rounded ${status ? CELL[status] : "border border-loam-200"} ${date === today ? "outline-2 outline-loam-900" : ""}`}
+                        className={`flex h-12 flex-col items-center justify-center rounded ${status ? CELL[status] : future ? "border border-dashed border-loam-200" : "border border-loam-200"} ${date === today ? "outline-2 outline-loam-900" : ""}`}
                         style={status === "closed" ? { backgroundImage: "repeating-linear-gradient(135deg, #f8e1dc 0 5px, #ffffff 5px 9px)" } : undefined}
-                        title={status ? `${date}: ${STATUS_LABELS[status]}` : `${date}: no report`}
+                        title={status ? `${date}: ${STATUS_LABELS[status]}` : future ? `${date}: still to come` : `${date}: no report`}
                       >
                         <span className="text-xs">{Number(date.slice(8))}</span>
                         <span aria-hidden="true" className="font-bold">
-                          {status ? STATUS_SIGNS[status] : "·"}
+                          {status ? STATUS_SIGNS[status] : future ? "" : "·"}
                         </span>
-                        <span className="sr-only">{status ? STATUS_LABELS[status] : "no report"}</span>
+                        <span className="sr-only">{status ? STATUS_LABELS[status] : future ? "still to come" : "no report"}</span>
                       </div>
                     )}
                   </td>

@@ -1,7 +1,7 @@
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES } from "@/lib/trails/pure/vocabulary";
 import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/pure/status";
 import { difficultyValues } from "@/lib/trails/pure/schemas";
-import { DifficultySymbol } from "./difficulty-symbol";
+import { DifficultySymbol } from "@/components/difficulty-badge";
 import { StatusSwatch } from "./status-swatch";
 
 /** What the map's lines, patterns and pins mean. Plain HTML: it reads before the map loads. */
@@ -28,9 +28,9 @@ export function MapLegend() {
           <ul className="space-y-1">
             {difficultyValues.map((d) => (
               <li key={d} className="flex items-center gap-2" data-legend-difficulty={d}>
-                <DifficultySymbol difficulty={d} label="none" />
+                <DifficultySymbol difficulty={d} />
                 <span>
-                  <strong>{DIFFICULTIES[d].label}</strong>: {DIFFICULTIES[d].colourName} line
+                  <strong>{DIFFICULTIES[d].label}</strong>: {DIFFICULTIES[d].signName}, {DIFFICULTIES[d].colourName} line
                 </span>
               </li>
             ))}

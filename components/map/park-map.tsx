@@ -4,6 +4,7 @@ import Map, { GeolocateControl, NavigationControl, type MapLayerMouseEvent, type
 import type { Bounds } from "@/lib/map/pure/bounds";
 import type { HazardMapProperties } from "@/lib/map/pure/geojson";
 import { LAYER_IDS, SOURCE_IDS } from "@/lib/map/pure/layer-ids";
+import { nearestTrail } from "@/lib/map/pure/nearest-trail";
 import type { TrailMapProperties } from "@/lib/map/pure/schemas";
 import { LayerToggles } from "./layer-toggles";
 import { exposeMapForTests, maplibregl } from "./maplibre-setup";
@@ -42,10 +43,12 @@ export default function ParkMap({ styleUrl, bounds, timeZone, trails, hazards }:
   const onClick = useCallback(
     (event: MapLayerMouseEvent) => {
       // Hazards sit on top of trails: a tap on a pin opens the pin.
-      const hit = event.features?.find((f) => f.layer.id === LAYER_IDS.hazards) ?? event.features?.[0];
-      const id = hit?.properties?.id as string | undefined;
-      if (!hit || !id) return select(null);
-      select(hit.layer.id === LAYER_IDS.hazards ? { kind: "hazard", id } : { kind: "trail", id });
+      const pin = event.features?.find((f) => f.layer.id === LAYER_IDS.hazards)?.properties?.id as string | undefined;
+      if (pin) return select({ kind: "hazard", id: pin });
+      // Of the trails inside the generous hit area, the one nearest the finger.
+      const lines = (event.features ?? []).filter((f) => f.layer.id === LAYER_IDS.trailHit && typeof f.properties?.id === "string");
+      const id = nearestTrail(event.lngLat.lng, event.lngLat.lat, lines.map((f) => ({ id: f.properties.id as string, geometry: f.geometry })));
+      select(id ? { kind: "trail", id } : null);
     },
     [select],
   );

@@ -10,12 +10,15 @@ export type PickPointProps = {
   /** Where the map opens when there is no point yet (defaults to around the initial point). */
   bounds?: Bounds;
   onChange: (lon: number, lat: number) => void;
+  /** The point shown, when the form also sets it another way (typed, or the phone's location). */
+  value?: { lon: number; lat: number } | null;
   label?: string;
 };
 
 /** Tap the map to place the point; drag it or use the arrow keys to adjust. */
-export default function PickPointCanvas({ parkSlug, initial, bounds, onChange, label = "Tap the map to place the point" }: PickPointProps) {
-  const [point, setPoint] = useState(initial ?? null);
+export default function PickPointCanvas({ parkSlug, initial, bounds, onChange, value, label = "Tap the map to place the point" }: PickPointProps) {
+  const [picked, setPoint] = useState(initial ?? null);
+  const point = value !== undefined ? value : picked;
   const place = (lon: number, lat: number) => {
     setPoint({ lon, lat });
     onChange(lon, lat);

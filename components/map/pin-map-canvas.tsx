@@ -1,6 +1,7 @@
 "use client";
-import type { KeyboardEvent } from "react";
-import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MarkerDragEvent } from "react-map-gl/maplibre";
+import { useCallback, useEffect, useRef, useState, type KeyboardEvent } from "react";
+import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MapRef, type MarkerDragEvent } from "react-map-gl/maplibre";
+import { spreadOffsets } from "@/lib/map/pure/spread-pins";
 import type { Bounds } from "@/lib/map/pure/bounds";
 import { exposeMapForTests, maplibregl } from "./maplibre-setup";
 import { useMapState } from "./use-map-state";
@@ -16,6 +17,8 @@ export type PinMapCanvasProps = {
   /** A pin was dragged, nudged with the arrow keys, or (when selected) sent where the map was tapped. */
   onMove: (key: string, lon: number, lat: number, how: "drag" | "tap" | "key") => void;
   label: string;
+  /** Style layers that draw what the pins draw: hidden, so a moved pin is never drawn twice. */
+  hideLayers?: readonly string[];
 };
 
 /** One arrow-key press moves a pin about this far. */
@@ -29,8 +32,21 @@ const LOOKS = {
 };
 
 /** A map of draggable pins, shared by the staff pin page and the point picker. */
-export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label }: PinMapCanvasProps) {
+export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSelect, onMove, label, hideLayers = [] }: PinMapCanvasProps) {
   const { state, onIdle, onError } = useMapState();
+  const mapRef = useRef<MapRef>(null);
+  // Pins that would overlap at this zoom are drawn apart, each its own 44 px target.
+  const [offsets, setOffsets] = useState<Record<string, [number, number]>>({});
+  const latestPins = useRef(pins);
+  latestPins.current = pins;
+  const respread = useCallback(() => {
+    const map = mapRef.current;
+    if (!map) return;
+    setOffsets(spreadOffsets(latestPins.current.map((pin) => ({ key: pin.key, ...map.project([pin.lon, pin.lat]) }))));
+  }, []);
+  // Callers pass a fresh array each render: spread again only when a pin really moved.
+  const where = pins.map((pin) => `${pin.key}@${pin.lon},${pin.lat}`).join("|");
+  useEffect(respread, [where, respread]);
 
   function onMapClick(event: MapLayerMouseEvent) {
     // A tap on a pin bubbles up to the map too: only a tap on the ground moves the selected pin.
@@ -51,12 +67,18 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
   return (
     <div className="relative h-[60vh] min-h-80 overflow-hidden rounded-xl border border-loam-300" data-testid="pin-map" data-map-state={state} aria-label={label} role="group">
       <Map
+        ref={mapRef}
         mapLib={maplibregl}
         mapStyle={styleUrl}
         initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
         style={{ width: "100%", height: "100%" }}
         onClick={onMapClick}
-        onLoad={(event) => exposeMapForTests(event.target)}
+        onLoad={(event) => {
+          for (const id of hideLayers) if (event.target.getLayer(id)) event.target.setLayoutProperty(id, "visibility", "none");
+          exposeMapForTests(event.target);
+          respread();
+        }}
+        onMoveEnd={respread}
         onIdle={onIdle}
         onError={onError}
         dragRotate={false}
@@ -68,12 +90,14 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
             key={pin.key}
             longitude={pin.lon}
             latitude={pin.lat}
+            offset={offsets[pin.key] ?? [0, 0]}
             draggable
             onDragEnd={(event: MarkerDragEvent) => onMove(pin.key, event.lngLat.lng, event.lngLat.lat, "drag")}
           >
+            {/* The touch target is 44 × 44 px (WCAG 2.2, 2.5.5) whatever the size of the dot drawn inside it. */}
             <button
               type="button"
-              className={`inline-flex items-center justify-center rounded-full ${LOOKS[pin.look]} ${selectedKey === pin.key ? "outline-4 outline-offset-2 outline-moss-600" : ""}`}
+              className={`inline-flex h-11 w-11 items-center justify-center rounded-full ${selectedKey === pin.key ? "outline-4 -outline-offset-4 outline-moss-600" : ""}`}
               aria-label={`${pin.label}${selectedKey === pin.key ? " (selected: tap the map or use the arrow keys to move it)" : ""}`}
               aria-pressed={selectedKey === pin.key}
               title={pin.label}
@@ -81,7 +105,9 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
               onClick={() => onSelect?.(pin.key)}
               onKeyDown={(event) => onKey(event, pin)}
             >
-              {pin.look === "hazard" ? "!" : ""}
+              <span aria-hidden="true" className={`inline-flex items-center justify-center rounded-full ${LOOKS[pin.look]}`}>
+                {pin.look === "hazard" ? "!" : ""}
+              </span>
             </button>
           </Marker>
         ))}

@@ -1,6 +1,7 @@
 "use client";
 import { useRef, useState } from "react";
 import type { Bounds } from "@/lib/map/pure/bounds";
+import { PIN_DRAWN_LAYERS } from "@/lib/map/pure/layer-ids";
 import { applyMoveAnswer, moveRequest, sendMove, undoRequest, type Pin, type PinMoveResult } from "@/lib/map/pure/pin-moves";
 import PinMapCanvas from "./pin-map-canvas";
 
@@ -57,6 +58,7 @@ export default function StaffPinMap({ styleUrl, bounds, pins: initial }: StaffPi
         bounds={bounds}
         pins={pins.map((p) => ({ key: p.key, lon: p.lon, lat: p.lat, label: p.label, look: p.kind }))}
         selectedKey={selected}
+        hideLayers={PIN_DRAWN_LAYERS}
         onSelect={(key) => setSelected((s) => (s === key ? null : key))}
         onMove={onMove}
         label="Trail features and hazard pins"

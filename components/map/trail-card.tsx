@@ -1,10 +1,10 @@
 import Link from "next/link";
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES } from "@/lib/trails/pure/vocabulary";
 import { formatParkTime, formatLength, formatSurfaces } from "@/lib/map/pure/format";
 import { statusKey } from "@/lib/map/pure/status";
 import type { HazardMapProperties } from "@/lib/map/pure/geojson";
 import type { TrailMapProperties } from "@/lib/map/pure/schemas";
-import { DifficultySymbol } from "./difficulty-symbol";
+import { DifficultyBadge } from "@/components/difficulty-badge";
 import { StatusBadge } from "./status-swatch";
 
 type CardShell = { onClose: () => void; children: React.ReactNode; label: string };
@@ -28,7 +28,7 @@ export function TrailCard({ trail, timeZone, onClose }: { trail: TrailMapPropert
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
         <dt className="text-loam-600">Difficulty</dt>
         <dd>
-          <DifficultySymbol difficulty={trail.difficulty} label="visible" />
+          <DifficultyBadge difficulty={trail.difficulty} />
         </dd>
         <dt className="text-loam-600">Today</dt>
         <dd>

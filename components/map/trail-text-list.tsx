@@ -3,7 +3,7 @@ import { formatParkTime, formatLength } from "@/lib/map/pure/format";
 import { statusKey } from "@/lib/map/pure/status";
 import type { HazardMapProperties } from "@/lib/map/pure/geojson";
 import type { TrailMapProperties } from "@/lib/map/pure/schemas";
-import { DifficultySymbol } from "./difficulty-symbol";
+import { DifficultyBadge } from "@/components/difficulty-badge";
 import { StatusBadge } from "./status-swatch";
 
 /** The list item starts with the hazard's kind, which the map data words in lower case. */
@@ -25,7 +25,7 @@ export function TrailTextList({ trails, hazards, timeZone, trailNames }: { trail
             <Link href={`/trails/${t.id}`} className="basis-full font-semibold text-loam-900 underline-offset-2 hover:underline sm:min-w-40 sm:flex-1 sm:basis-auto">
               {t.name}
             </Link>
-            <DifficultySymbol difficulty={t.difficulty} label="visible" />
+            <DifficultyBadge difficulty={t.difficulty} />
             <StatusBadge status={statusKey(t.status)} />
             <span className="text-sm text-loam-600">
               {formatLength(t.lengthM)}

@@ -19,7 +19,7 @@ export async function setParkStateAction(_prev: FormState, form: FormData): Prom
     if (endsAt && endsAt <= new Date()) throw new AppError(400, "That time has already passed today.", "until");
     await setParkState(await getActor(), park, { state: form.get("state"), message: form.get("message"), endsAt: endsAt?.toISOString() });
     revalidatePath(`/parks/${park.slug}`);
-    revalidatePath(`/staff/${park.slug}/sweep`);
+    revalidatePath(`/staff/${park.slug}/morning-check`);
     return { ok: true, message: "Park-wide notice set. The board shows it now." };
   } catch (error) {
     return formError(error, form);
@@ -31,7 +31,7 @@ export async function clearParkStateAction(_prev: FormState, form: FormData): Pr
     const park = await getParkBySlug(String(form.get("parkSlug") ?? ""));
     const { cleared } = await clearParkState(await getActor(), park);
     revalidatePath(`/parks/${park.slug}`);
-    revalidatePath(`/staff/${park.slug}/sweep`);
+    revalidatePath(`/staff/${park.slug}/morning-check`);
     return { ok: true, message: cleared ? "Cleared. Trails show their own status again." : "There was nothing to clear." };
   } catch (error) {
     return formError(error, form);

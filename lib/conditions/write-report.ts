@@ -15,6 +15,7 @@ import { isUuid } from "@/lib/shared/ids";
 import { parkLocalDate } from "@/lib/shared/park-clock";
 import { reportPostSchema, type ReportInput } from "@/lib/conditions/pure/schemas";
 import { recordAudit } from "@/lib/audit/record";
+import type { ReportStatus } from "@/lib/conditions/pure/vocabulary";
 import { Park, Trail, TrailReport, sequelize } from "@/models";
 import { reportValues, reportView, type ReportView } from "./report-view";
 
@@ -27,7 +28,8 @@ export type RevisionRequest = {
   values: ReportInput | "unchanged";
   now: Date;
 };
-export type RevisionResult = { ok: true; report: TrailReport } | { ok: false; current: ReportView | null };
+/** `previousStatus`: the status before this save (today's earlier revision, or the last day's), so callers can tell a new closure from a kept one. */
+export type RevisionResult = { ok: true; report: TrailReport; previousStatus: ReportStatus | null } | { ok: false; current: ReportView | null };
 
 const currentWhere = (trailId: string, date: string) => ({ trailId, reportDate: date, isCurrent: true });
 
@@ -46,7 +48,7 @@ export async function currentReportView(trailId: string, date: string): Promise<
   return row ? reportView(row) : null;
 }
 
-/** One revision inside the caller's transaction. A stale base revision is returned, not thrown, so a sweep can list them all. */
+/** One revision inside the caller's transaction. A stale base revision is returned, not thrown, so a check can list them all. */
 export async function saveRevision(request: RevisionRequest, transaction: Transaction): Promise<RevisionResult> {
   const { trail, park, date, now } = request;
   // Writers of one trail and date take turns, so even the first save of the day (no row to
@@ -72,7 +74,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
     { trailId: trail.id, parkId: park.id, reportDate: date, revision: request.baseRevision + 1, isCurrent: true, ...values, reporterId: request.actorId, reportedAt: now },
     { transaction },
   );
-  const from = previous?.status ?? null;
+  const from = (previous?.status ?? null) as ReportStatus | null;
   if (from !== values.status) {
     await recordAudit({
         parkId: park.id,
@@ -84,7 +86,7 @@ export async function saveRevision(request: RevisionRequest, transaction: Transa
         createdAt: now,
       }, transaction);
   }
-  return { ok: true, report };
+  return { ok: true, report, previousStatus: from };
 }
 
 export async function loadTrailWithPark(trailId: string): Promise<{ trail: Trail; park: Park }> {

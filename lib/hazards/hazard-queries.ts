@@ -1,16 +1,20 @@
 import "server-only";
 import { hazardView, type HazardView } from "@/lib/hazards/hazard-writes";
+import { snapFeatures } from "@/lib/trails/pure/features";
 import { Hazard, Photo, Trail } from "@/models";
 
-export type HazardListItem = HazardView & { trailName: string | null };
+const segmentsOf = (line: Trail["geometry"]) => (line.type === "LineString" ? [line.coordinates] : line.coordinates);
 
-/** A park's open hazards, newest first, with trail names and photo ids. */
+/** `alongM`: how far along its trail the pin sits (nearest point of the line), for staff who think in trail metres, not coordinates. */
+export type HazardListItem = HazardView & { trailName: string | null; alongM: number | null };
+
+/** A park's open hazards, newest first, with trail names, distance along the trail and photo ids. */
 export async function openHazards(parkId: string): Promise<HazardListItem[]> {
   const rows = await Hazard.findAll({
     where: { parkId, resolvedAt: null },
     include: [
       { model: Photo, as: "photos", attributes: ["id", "createdAt"] },
-      { model: Trail, as: "trail", attributes: ["name"] },
+      { model: Trail, as: "trail", attributes: ["name", "geometry"] },
     ],
     order: [
       ["reportedAt", "DESC"],
@@ -19,7 +23,8 @@ export async function openHazards(parkId: string): Promise<HazardListItem[]> {
   });
   return rows.map((h) => {
     const joined = h as Hazard & { photos: Photo[]; trail: Trail | null };
-    return { ...hazardView(h, joined.photos), trailName: joined.trail?.name ?? null };
+    const alongM = joined.trail ? Math.round(snapFeatures([{ lon: h.lon, lat: h.lat }], segmentsOf(joined.trail.geometry))[0]?.distanceAlongM ?? 0) : null;
+    return { ...hazardView(h, joined.photos), trailName: joined.trail?.name ?? null, alongM };
   });
 }
 

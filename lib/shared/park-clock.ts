@@ -68,6 +68,26 @@ export function instantToParkLocal(instant: Date, timeZone: string): string {
   return `${date}T${time}`;
 }
 
+/**
+ * One style for every date and time a reader sees, always in the park's zone (never the
+ * server's), through Intl.DateTimeFormat: "Wed 2 Dec, 07:42", "Wed 2 Dec", "Wednesday 2 December".
+ * The locale is a parameter so a page that knows the reader's can pass it.
+ */
+export const DISPLAY_LOCALE = "en-GB";
+
+export function formatParkDateTime(instant: Date, timeZone = "UTC", locale = DISPLAY_LOCALE): string {
+  return new Intl.DateTimeFormat(locale, { timeZone, weekday: "short", day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", hourCycle: "h23" }).format(instant);
+}
+
+export function formatParkDay(instant: Date, timeZone: string, locale = DISPLAY_LOCALE): string {
+  return new Intl.DateTimeFormat(locale, { timeZone, weekday: "short", day: "numeric", month: "short" }).format(instant);
+}
+
+/** A calendar date (YYYY-MM-DD, already the park's) in words; read at noon UTC so no zone can move it a day. */
+export function formatCalendarDate(date: string, style: "short" | "long" = "short", locale = DISPLAY_LOCALE): string {
+  const options: Intl.DateTimeFormatOptions = style === "long" ? { weekday: "long", day: "numeric", month: "long" } : { weekday: "short", day: "numeric", month: "short", year: "numeric" };
+  return new Intl.DateTimeFormat(locale, { ...options, timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
+}
+
 /** "Wednesday 2 December" for a YYYY-MM-DD park-local date. */
-export const longDate = (date: string) =>
-  new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
+export const longDate = (date: string) => formatCalendarDate(date, "long");

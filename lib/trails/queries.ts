@@ -70,7 +70,7 @@ export async function getTrailDetail(id: string, actor: Actor | null) {
   if (!isUuid(id)) throw new AppError(404, "Trail not found.");
   const trail = await Trail.findByPk(id, {
     attributes: { exclude: ["geometry"] },
-    include: [{ model: Park, as: "park", attributes: ["id", "slug", "name"] }],
+    include: [{ model: Park, as: "park", attributes: ["id", "slug", "name", "timeZone"] }],
   });
   if (!trail || (trail.archivedAt && !can(actor, "trail:write", { parkId: trail.parkId }))) throw new AppError(404, "Trail not found.");
   const [features, versions] = await Promise.all([
@@ -80,7 +80,7 @@ export async function getTrailDetail(id: string, actor: Actor | null) {
   const park = (trail as Trail & { park: Park }).park;
   return {
     ...trailSummary(trail),
-    park: { slug: park.slug, name: park.name },
+    park: { slug: park.slug, name: park.name, timeZone: park.timeZone },
     archivedAt: trail.archivedAt ? trail.archivedAt.toISOString() : null,
     lockVersion: trail.lockVersion,
     bbox: [trail.minLon, trail.minLat, trail.maxLon, trail.maxLat] as [number, number, number, number],

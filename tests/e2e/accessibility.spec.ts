@@ -14,7 +14,7 @@ const PAGES: Visit[] = [
   { path: "/parks/harrow-ridge/map" },
   { path: "/parks/harrow-ridge/trails" },
   { path: `/trails/${TRAIL}/history` },
-  { path: "/staff/harrow-ridge/sweep", as: "ranger" },
+  { path: "/staff/harrow-ridge/morning-check", as: "ranger" },
   { path: "/staff/harrow-ridge/activity", as: "ranger" },
   { path: "/staff/harrow-ridge/hazards", as: "ranger" },
   { path: `/trails/${TRAIL}` },

@@ -179,13 +179,13 @@ export const MATRIX: MatrixRow[] = [
   },
   { method: "DELETE", route: "/api/trail-features/[id]", expect: parkStaff(204), call: async (fx) => ({ path: `/api/trail-features/${(await fx.freshFeature()).id}` }) },
 
-  // Conditions: reports, sweep, park-wide state, hazards.
+  // Conditions: reports, check, park-wide state, hazards.
   { method: "POST", route: "/api/trails/[id]/reports", expect: parkStaff(201), call: async (fx) => ({ path: `/api/trails/${fx.trailId}/reports`, data: { status: "open", baseRevision: await fx.currentRevision() } }) },
   {
     method: "POST",
-    route: "/api/parks/[parkSlug]/sweep",
+    route: "/api/parks/[parkSlug]/morning-check",
     expect: parkStaff(201),
-    call: async (fx) => ({ path: `/api/parks/${PARK}/sweep`, data: { entries: [{ trailId: fx.trailId, baseRevision: await fx.currentRevision(), report: { status: "open" } }] } }),
+    call: async (fx) => ({ path: `/api/parks/${PARK}/morning-check`, data: { entries: [{ trailId: fx.trailId, baseRevision: await fx.currentRevision(), report: { status: "open" } }] } }),
   },
   {
     method: "POST",

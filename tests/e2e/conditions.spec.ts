@@ -4,7 +4,7 @@ import { demo, shot, signInAs } from "./helpers";
 
 const BOARD = "/parks/harrow-ridge";
 
-const sweepCard = (page: Page, name: string) => page.locator(`[data-testid="sweep-trail"][data-trail-name="${name}"]`);
+const checkRow = (page: Page, name: string) => page.locator(`[data-testid="check-trail"][data-trail-name="${name}"]`);
 const boardCard = (page: Page, name: string) => page.getByTestId("board-trail").filter({ has: page.getByRole("heading", { name, exact: true }) });
 
 async function setSurfaces(card: Locator, wanted: string[]) {
@@ -28,7 +28,7 @@ test("a rider reads the board without signing in; filters are plain links", asyn
   for (const src of scripts) expect(await (await request.get(src)).text()).not.toContain("maplibre");
 
   await page.getByText("Filter trails").click();
-  await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Extreme" }).click();
+  await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Extremely difficult" }).click();
   await expect(page).toHaveURL(/difficulty=extreme/);
   await expect(page.getByTestId("board-trail")).toHaveCount(2);
   await page.getByRole("navigation", { name: "Filter trails" }).getByRole("link", { name: "Jump line" }).click();
@@ -47,41 +47,44 @@ test("the board filters without JavaScript too", async ({ browser }) => {
   await context.close();
 });
 
-test("the ranger sweeps on a phone: one closure after rain, others open; the board shows it", async ({ page }) => {
-  await signInAs(page, demo("ranger"), undefined, "/staff/harrow-ridge/sweep");
-  await page.goto("/staff/harrow-ridge/sweep");
-  await expect(page.getByRole("heading", { name: "Morning sweep" })).toBeVisible();
-  await expect(page.getByTestId("sweep-trail")).toHaveCount(10);
+test("the ranger runs the morning check on a phone: one closure after rain, others open; the board shows it", async ({ page }) => {
+  await signInAs(page, demo("ranger"), undefined, "/staff/harrow-ridge/morning-check");
+  await page.goto("/staff/harrow-ridge/morning-check");
+  await expect(page.getByRole("heading", { name: "Morning check" })).toBeVisible();
+  await expect(page.getByTestId("check-trail")).toHaveCount(10);
 
-  const gnarlroot = sweepCard(page, "Gnarlroot");
+  const gnarlroot = checkRow(page, "Gnarlroot");
+  await gnarlroot.getByRole("button", { name: "Change", exact: true }).click();
   await gnarlroot.getByRole("radio", { name: "Closed" }).click();
   await gnarlroot.getByLabel("Reason (closed)").fill("Saturated after the night's rain");
   await setSurfaces(gnarlroot, ["wet", "muddy"]);
 
   for (const name of ["Mossback Ramble", "Cedar Skip"]) {
-    const card = sweepCard(page, name);
-    // A tap on the status, even the one already shown, marks the trail inspected.
+    const card = checkRow(page, name);
+    await card.getByRole("button", { name: "Change", exact: true }).click();
+    // A tap on the status, even the one already shown, marks the trail checked.
     await card.getByRole("radio", { name: "Open" }).click();
     await setSurfaces(card, ["tacky", "damp"]);
   }
-  await sweepCard(page, "Tumblewire").getByRole("button", { name: "Unchanged" }).click();
-  await expect(sweepCard(page, "Tumblewire").getByTestId("mode")).toHaveText("Unchanged");
+  await checkRow(page, "Tumblewire").getByRole("button", { name: "Unchanged" }).click();
+  await expect(checkRow(page, "Tumblewire").getByTestId("mode")).toHaveText("Unchanged");
 
   // With the keyboard: arrow keys move through the status buttons.
-  const slatebelt = sweepCard(page, "Slatebelt Flow");
+  const slatebelt = checkRow(page, "Slatebelt Flow");
+  await slatebelt.getByRole("button", { name: "Change", exact: true }).click();
   await slatebelt.getByRole("radio", { name: "Open" }).click();
   await slatebelt.getByRole("radio", { name: "Open" }).focus();
   await page.keyboard.press("ArrowRight");
   await expect(slatebelt.getByRole("radio", { name: "Caution" })).toBeChecked();
   await slatebelt.getByLabel("Reason (caution)").fill("Boardwalk slick until midday");
 
-  await expect(page.getByTestId("sweep-count")).toContainText("5 marked in this sweep");
-  await shot(page, "sweep-marked");
+  await expect(page.getByTestId("check-count")).toContainText("5 marked now");
+  await shot(page, "check-marked-by-hand");
   await page.getByRole("button", { name: "Save 5 trails" }).click();
-  await expect(page.getByTestId("sweep-outcome")).toContainText("Saved 5 trails.");
+  await expect(page.getByTestId("check-outcome")).toContainText("Saved 5 trails.");
   const notice = page.getByRole("link", { name: "Send a closure notice to riders" });
   await expect(notice).toHaveAttribute("href", /^\/staff\/harrow-ridge\/notices\/new\?kind=closure&trailIds=[0-9a-f-]{36}&message=.*Gnarlroot/);
-  await shot(page, "sweep-saved");
+  await shot(page, "check-saved");
 
   await page.goto(BOARD);
   const card = boardCard(page, "Gnarlroot");
@@ -89,7 +92,7 @@ test("the ranger sweeps on a phone: one closure after rain, others open; the boa
   await expect(card).toContainText("Saturated after the night's rain");
   await expect(card.getByTestId("inspected")).toHaveText(/^Inspected \d{2}:\d{2}$/);
   await expect(boardCard(page, "Slatebelt Flow").locator('[data-status="caution"]')).toBeVisible();
-  await shot(page, "board-after-sweep");
+  await shot(page, "board-after-check");
 
   await page.goto(`${BOARD}?status=closed`);
   await expect(boardCard(page, "Gnarlroot")).toBeVisible();
@@ -119,7 +122,7 @@ test.describe("hazards", () => {
 
     await page.goto(BOARD);
     const card = boardCard(page, "Mossback Ramble");
-    await expect(card.getByTestId("hazard-count")).toHaveText(/1 hazard$/);
+    await expect(card.getByTestId("hazard-count")).toHaveText(/1 hazard\s*show/);
     await card.getByTestId("hazard-count").click();
     await expect(card.getByText("Runoff cut a rut across the second bend")).toBeVisible();
     const thumb = card.getByRole("img", { name: /Photo 1 of the washout/ });
@@ -165,7 +168,7 @@ test("the API: board public, writes need staff of the park, CSV for staff", asyn
   expect((await request.get("/api/parks/harrow-ridge/board", { headers: { "if-none-match": board.headers().etag } })).status()).toBe(304);
 
   const trailId = body.trails[0].id;
-  expect((await request.post("/api/parks/harrow-ridge/sweep", { data: { entries: [{ trailId, unchanged: true }] } })).status()).toBe(401);
+  expect((await request.post("/api/parks/harrow-ridge/morning-check", { data: { entries: [{ trailId, unchanged: true }] } })).status()).toBe(401);
   expect((await request.post(`/api/trails/${trailId}/reports`, { data: { status: "open" } })).status()).toBe(401);
   expect((await request.get("/api/parks/harrow-ridge/reports.csv")).status()).toBe(401);
 
@@ -190,8 +193,8 @@ test("the API: board public, writes need staff of the park, CSV for staff", asyn
 });
 
 test("a park-wide closure overrides every trail on the board until staff clear it", async ({ page }) => {
-  await signInAs(page, demo("manager"), undefined, "/staff/harrow-ridge/sweep");
-  await page.goto("/staff/harrow-ridge/sweep");
+  await signInAs(page, demo("manager"), undefined, "/staff/harrow-ridge/morning-check");
+  await page.goto("/staff/harrow-ridge/morning-check");
   const wholePark = page.getByRole("radio", { name: "Whole park closed" });
   // The panel opens by itself while a notice is in force; otherwise one tap opens it.
   if (!(await wholePark.isVisible())) await page.getByText("Park-wide notice").first().click();
@@ -206,7 +209,7 @@ test("a park-wide closure overrides every trail on the board until staff clear i
   await expect(page.getByTestId("park-state")).toBeVisible();
   await shot(page, "board-park-closed");
 
-  await page.goto("/staff/harrow-ridge/sweep");
+  await page.goto("/staff/harrow-ridge/morning-check");
   await page.getByRole("button", { name: "Clear the park-wide notice" }).click();
   await expect(page.getByText("Cleared. Trails show their own status again.")).toBeVisible();
   await page.goto(BOARD);

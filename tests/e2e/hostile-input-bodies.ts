@@ -44,7 +44,7 @@ export const BODY_CASES: HostileCase[] = [
   // Another park's trail, named through a route of one's own park.
   { name: "another park's trail in a hazard pin", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/hazards", multipart: (t) => ({ kind: "other", trailId: t.demoTrailId, distanceAlongM: "10" }), expect: 422, field: "trailId" },
   { name: "another park's trail in a notice", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/notices", json: (t) => ({ ...notice, trailIds: [t.demoTrailId] }), expect: 422, field: "trailIds" },
-  { name: "another park's trail in a sweep", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/sweep", json: (t) => ({ entries: [{ trailId: t.demoTrailId, report: { status: "closed", reason: "Taken over" } }] }), expect: 400, field: "trailId" },
+  { name: "another park's trail in a check", as: "otherParkRanger", method: "POST", path: () => "/api/parks/cinder-hollow/morning-check", json: (t) => ({ entries: [{ trailId: t.demoTrailId, report: { status: "closed", reason: "Taken over" } }] }), expect: 400, field: "trailId" },
   { name: "another park's trail in a ride log", as: "rider", method: "POST", path: () => "/api/me/ride-logs", json: (t) => rideLog(t, { parkSlug: "cinder-hollow", trailIds: [t.demoTrailId] }), expect: 422, field: "trailIds" },
 
   // Numbers out of range.
@@ -100,7 +100,7 @@ export const BODY_CASES: HostileCase[] = [
   // Huge arrays.
   { name: "10,000 trail ids in a subscription", as: "rider", method: "POST", path: () => "/api/me/subscriptions", json: () => ({ parkSlug: "harrow-ridge", trailIds: FAKE_UUIDS(10_000), kinds: ["closure"] }), expect: 413 },
   { name: "10,000 trail ids for today's pressure", as: "anonymous", method: "POST", path: () => "/api/pressure", json: () => ({ ...valid, name: undefined, today: { parkSlug: "harrow-ridge", trailIds: FAKE_UUIDS(10_000) } }), expect: 413 },
-  { name: "2,000 trails in one sweep (500 at most)", as: "parkRanger", method: "POST", path: () => "/api/parks/harrow-ridge/sweep", json: () => ({ entries: FAKE_UUIDS(2_000).map((trailId) => ({ trailId, unchanged: true })) }), expect: 400 },
+  { name: "2,000 trails in one check (500 at most)", as: "parkRanger", method: "POST", path: () => "/api/parks/harrow-ridge/morning-check", json: () => ({ entries: FAKE_UUIDS(2_000).map((trailId) => ({ trailId, unchanged: true })) }), expect: 400 },
   { name: "101 trails in one notice (100 at most)", as: "manager", method: "POST", path: () => "/api/parks/harrow-ridge/notices", json: () => ({ ...notice, trailIds: FAKE_UUIDS(101) }), expect: 400, field: "trailIds" },
 
   // Account routes: every field named, nothing taken that the route does not know.

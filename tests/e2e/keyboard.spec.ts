@@ -9,7 +9,7 @@ import { demo, shot, signInAs } from "./helpers";
  */
 type Focused = { label: string; trail: string | null; type: string; checked: boolean; unobscured: boolean };
 
-/** What has focus: its label, the sweep trail it belongs to, and whether it can be seen (not under the sticky Save bar). */
+/** What has focus: its label, the checked trail it belongs to, and whether it can be seen (not under the sticky Save bar). */
 const focused = (page: Page): Promise<Focused> =>
   page.evaluate(() => {
     const el = document.activeElement as HTMLInputElement;
@@ -38,17 +38,19 @@ async function pressUntil(page: Page, key: "Tab" | "Shift+Tab", matches: (f: Foc
   throw new Error(`${key} never reached the control`);
 }
 
-test("the morning sweep with the keyboard alone: a status, a reason, a surface, Unchanged, save", async ({ page }) => {
-  await signInAs(page, demo("ranger"), undefined, "/staff/harrow-ridge/sweep");
-  await expect(page.getByRole("heading", { name: "Morning sweep" })).toBeVisible();
-  const card = (name: string) => page.locator(`[data-testid="sweep-trail"][data-trail-name="${name}"]`);
+test("the morning check with the keyboard alone: a status, a reason, a surface, Unchanged, save", async ({ page }) => {
+  await signInAs(page, demo("ranger"), undefined, "/staff/harrow-ridge/morning-check");
+  await expect(page.getByRole("heading", { name: "Morning check" })).toBeVisible();
+  const card = (name: string) => page.locator(`[data-testid="check-trail"][data-trail-name="${name}"]`);
 
-  // Into Cedar Skip's status: Tab lands on the status shown (or the first), arrows move and select.
+  // Cedar Skip's Change opens its controls with Enter; Tab lands on the status shown (or the first), arrows move and select.
+  await pressUntil(page, "Tab", (f) => f.trail === "Cedar Skip" && f.label === "Change");
+  await page.keyboard.press("Enter");
   const status = await pressUntil(page, "Tab", (f) => f.trail === "Cedar Skip" && f.type === "radio");
   expect(["Open", "Caution", "Closed"].some((s) => status.label.includes(s))).toBe(true);
   for (let i = 0; i < 3 && !(await focused(page)).label.includes("Caution"); i++) await page.keyboard.press("ArrowRight");
   await expect(card("Cedar Skip").getByRole("radio", { name: "Caution" })).toBeChecked();
-  await expect(card("Cedar Skip").getByTestId("mode")).toHaveText("Edited");
+  await expect(card("Cedar Skip").getByTestId("mode")).toHaveText("Changed");
 
   // The reason field follows the status; then a surface, ticked with Space.
   await pressUntil(page, "Tab", (f) => f.label === "Reason (caution)");
@@ -66,13 +68,13 @@ test("the morning sweep with the keyboard alone: a status, a reason, a surface, 
   await pressUntil(page, "Tab", (f) => f.trail === "Gnarlroot" && f.label.startsWith("Unchanged"));
   await page.keyboard.press("Enter");
   await expect(card("Gnarlroot").getByTestId("mode")).toHaveText("Unchanged");
-  await shot(page, "keyboard-sweep");
+  await shot(page, "keyboard-check");
 
   // On to the Save button, past every other trail; Enter saves.
   await pressUntil(page, "Tab", (f) => /^Save \d+ trails?$/.test(f.label));
   await expect(page.getByRole("button", { name: "Save 2 trails" })).toBeFocused();
   await page.keyboard.press("Enter");
-  await expect(page.getByTestId("sweep-outcome")).toContainText("Saved 2 trails.");
+  await expect(page.getByTestId("check-outcome")).toContainText("Saved 2 trails.");
 
   await page.goto("/parks/harrow-ridge");
   const boardCard = page.getByTestId("board-trail").filter({ has: page.getByRole("heading", { name: "Cedar Skip", exact: true }) });

@@ -66,3 +66,19 @@ test("staff of the park see a link to move pins from the rider's map; riders do 
   await page.goto(`/parks/${PARK}/map`);
   await expect(page.getByRole("link", { name: "Move pins" })).toHaveAttribute("href", `/staff/${PARK}/map`);
 });
+
+test("staff pins are at least 44 px to touch, and each hazard is drawn once: by its pin, not also by the style", async ({ page }) => {
+  await signInAs(page, demo("ranger"), undefined, `/staff/${PARK}/map`);
+  await openMap(page, `/staff/${PARK}/map`, "pin-map");
+  const boxes = await page.locator("[data-pin]").evaluateAll((pins) => pins.map((p) => p.getBoundingClientRect()).map((r) => Math.min(r.width, r.height)));
+  expect(boxes.length).toBeGreaterThan(0);
+  // WCAG 2.2, 2.5.5 Target Size (Enhanced): 44 × 44 CSS pixels.
+  expect(Math.min(...boxes)).toBeGreaterThanOrEqual(44);
+  const hazards = (await (await page.request.get(`/api/parks/${PARK}/hazards.geojson`)).json()).features.length;
+  await expect(page.locator('[data-pin^="hazard:"]')).toHaveCount(hazards);
+  const drawnByStyle = await page.evaluate(() => {
+    const map = (window as unknown as { __loamcastMap: { queryRenderedFeatures: (o: object) => unknown[]; getLayoutProperty: (id: string, p: string) => unknown } }).__loamcastMap;
+    return { rendered: map.queryRenderedFeatures({ layers: ["lc-hazards", "lc-features"] }).length, visibility: map.getLayoutProperty("lc-hazards", "visibility") };
+  });
+  expect(drawnByStyle).toEqual({ rendered: 0, visibility: "none" });
+});

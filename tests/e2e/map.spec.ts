@@ -58,6 +58,43 @@ test.describe("park map", () => {
     await expect(card).toBeHidden();
   });
 
+  test("a tap exactly on a trail opens that trail, not a neighbour a few pixels away", async ({ page }) => {
+    const trails = await trailsFromApi(page.request);
+    await openMap(page, `/parks/${PARK}/map`);
+    await page.getByRole("checkbox", { name: "Hazard pins" }).uncheck();
+    await page.getByRole("checkbox", { name: "Trail features (berms, jumps, drops)" }).uncheck();
+    await page.getByTestId("park-map").scrollIntoViewIfNeeded();
+    const lines = (t: TrailFeature) => (t.geometry.type === "LineString" ? [t.geometry.coordinates as number[][]] : (t.geometry.coordinates as number[][][]));
+    // On screen: a vertex of one trail with another trail's vertex 4–20 px away, both inside the
+    // map and clear of every third trail, so both lie in one 22 px hit box.
+    const pair = await page.evaluate((all) => {
+      const map = (window as unknown as { __loamcastMap: { project: (ll: [number, number]) => { x: number; y: number }; getCanvas: () => HTMLCanvasElement } }).__loamcastMap;
+      const { width, height } = map.getCanvas().getBoundingClientRect();
+      const points = all.flatMap((t) => t.coords.map((c) => ({ id: t.id, lonLat: c, ...map.project(c as [number, number]) })));
+      const inside = points.filter((p) => p.x > 40 && p.y > 40 && p.x < width - 60 && p.y < height - 40);
+      for (const a of inside) {
+        for (const b of inside) {
+          if (a.id === b.id) continue;
+          const d = Math.hypot(a.x - b.x, a.y - b.y);
+          if (d < 4 || d > 20) continue;
+          const crowded = inside.some((c) => c.id !== a.id && c.id !== b.id && Math.hypot(c.x - a.x, c.y - a.y) < 30);
+          if (!crowded) return { a: { id: a.id, lonLat: a.lonLat }, b: { id: b.id, lonLat: b.lonLat }, px: d };
+        }
+      }
+      return null;
+    }, trails.map((t) => ({ id: t.properties.id, coords: lines(t).flat() })));
+    expect(pair, "two trails within 20 px of each other on the park map").not.toBeNull();
+    const name = (id: string) => trails.find((t) => t.properties.id === id)!.properties.name;
+    const card = page.getByTestId("map-card");
+    for (const side of [pair!.a, pair!.b]) {
+      const point = await screenPoint(page, side.lonLat);
+      await page.mouse.click(point.x, point.y);
+      await expect(card.getByRole("heading", { name: name(side.id) })).toBeVisible();
+      await card.getByRole("button", { name: "Close" }).click();
+    }
+    await shot(page, "map-tap-nearest");
+  });
+
   test("the legend names every status with its pattern and every difficulty with its sign", async ({ page }) => {
     await page.goto(`/parks/${PARK}/map`);
     const legend = page.getByTestId("map-legend");

@@ -56,15 +56,16 @@ test("a rider subscribes and confirms, staff send a closure, the rider's e-mail 
   await shot(ranger, "notices-preview");
   await preview.getByRole("button", { name: /^Send to \d+ riders?$/ }).click();
   await expect(ranger).toHaveURL(/\/staff\/harrow-ridge\/notices\/[0-9a-f-]{36}\?sent=1$/);
-  await expect(ranger.getByRole("status")).toContainText("Notice queued");
+  await expect(ranger.getByTestId("sending-banner")).toContainText("This page follows the deliveries by itself.");
 
   // 4. The worker sends it (one pass, as the background worker of npm start does continuously).
   const worker = await run("node_modules/.bin/tsx", ["--conditions=react-server", "scripts/worker.ts", "--once"], { env: process.env, timeout: 60_000 });
   expect(worker.stdout).toMatch(/done: \d+ sent/);
-  await ranger.getByRole("link", { name: "Refresh" }).click();
-  await expect(ranger.locator("[data-state=failed]")).toHaveText("0");
-  await expect(ranger.locator("[data-state=queued]")).toHaveText("0");
-  await expect(ranger.getByRole("row").filter({ hasText: email })).toContainText("sent");
+  // No reload: the page reads the deliveries again by itself, and the banner goes once all are settled.
+  await expect(ranger.getByTestId("sending-banner")).toHaveCount(0, { timeout: 15_000 });
+  const summary = ranger.getByTestId("delivery-summary");
+  await expect(summary).toContainText(/^\d+ delivered$/);
+  await expect(ranger.getByRole("row").filter({ hasText: email })).toContainText("delivered");
   await shot(ranger, "notices-deliveries");
   await staff.close();
 
@@ -114,4 +115,24 @@ test("a rider and another park's ranger cannot send notices for Harrow Ridge", a
   expect((await page.request.get("/api/parks/harrow-ridge/notices")).status()).toBe(403);
   await page.goto("/staff/harrow-ridge/notices/new");
   await expect(page.getByRole("heading", { name: /new notice/ })).toHaveCount(0);
+});
+
+test("the admin reads captured mail decoded: GET /api/dev/mail gives text and html beside raw, the page frames the HTML", async ({ page }) => {
+  await signInAs(page, demo("admin"), undefined, "/admin/mail");
+  const { messages } = await (await page.request.get("/api/dev/mail")).json();
+  const withHtml = (messages as { raw: string; text: string; html: string | null; subject: string }[]).filter((m) => m.html);
+  expect(withHtml.length).toBeGreaterThan(0);
+  const mail = withHtml.at(-1)!;
+  // The transfer encoding (RFC 2045 §6.7 quoted-printable, or base64) is undone: the link is whole
+  // in the decoded text, while the raw message carries it only encoded.
+  const link = /https?:\/\/\S+\?token=[A-Za-z0-9._%-]+/.exec(mail.text)?.[0];
+  expect(link).toBeTruthy();
+  expect(mail.raw).not.toContain(link);
+  expect(mail.text).not.toMatch(/=\r?\n|=3D/);
+  expect(mail.html).toMatch(/<a [^>]*href="https?:\/\//);
+  await page.goto("/admin/mail");
+  const first = page.getByTestId("captured-mail").first();
+  await first.getByText("As the rider sees it (HTML)").click();
+  await expect(first.locator("iframe")).toHaveAttribute("sandbox", "");
+  await shot(page, "admin-mail-decoded");
 });

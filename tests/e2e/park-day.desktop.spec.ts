@@ -8,7 +8,7 @@ import { htmlPartOf, linkIn, mailTo, readable, signUpAndProve } from "./mail-hel
 
 /**
  * The park day, end to end, on a phone and on a desktop (the file name makes both projects run it):
- * a manager uploads a trail and invites a ranger, who joins and posts the morning sweep with a
+ * a manager uploads a trail and invites a ranger, who joins and posts the morning check with a
  * closure and a hazard with a photo; a rider checks the board and the map, gets today's pressure
  * band for the open trails, and receives the closure notice by e-mail with a working unsubscribe.
  *
@@ -21,7 +21,7 @@ const TRAIL_FILE = path.resolve("tests/fixtures/trails/good-track.gpx");
 const SURFACES = ["dry", "dusty", "tacky", "damp", "wet", "muddy", "loose", "rocky", "frozen", "snow"];
 const HAZARD_TRAIL = "Slatebelt Flow";
 
-const sweepCard = (page: Page, name: string) => page.locator(`[data-testid="sweep-trail"][data-trail-name="${name}"]`);
+const checkRow = (page: Page, name: string) => page.locator(`[data-testid="check-trail"][data-trail-name="${name}"]`);
 const boardCard = (page: Page, name: string) => page.getByTestId("board-trail").filter({ has: page.getByRole("heading", { name, exact: true }) });
 
 async function setSurfaces(card: Locator, wanted: string[]) {
@@ -36,7 +36,7 @@ async function newPage(browser: Browser): Promise<Page> {
   return context.newPage();
 }
 
-test("the park day: upload, invite, sweep with a closure and a hazard, board and map, pressure, closure e-mail", async ({ page: manager, browser }) => {
+test("the park day: upload, invite, check with a closure and a hazard, board and map, pressure, closure e-mail", async ({ page: manager, browser }) => {
   test.setTimeout(240_000);
   const tag = `${test.info().project.name}-${Date.now().toString(36)}`;
   const trailName = `Fernbrake ${tag}`;
@@ -78,27 +78,29 @@ test("the park day: upload, invite, sweep with a closure and a hazard, board and
   await shot(ranger, "park-day-3-ranger-joins");
   await ranger.getByRole("button", { name: "Join the team" }).click();
   await expect(ranger).toHaveURL(/\/sign-in\?joined=1/);
-  await signInAs(ranger, rangerEmail, rangerPassword, `/staff/${PARK}/sweep`);
+  await signInAs(ranger, rangerEmail, rangerPassword, `/staff/${PARK}/morning-check`);
 
-  // 2. The morning sweep: the new trail closed after rain, every other trail open with its surfaces.
-  await ranger.goto(`/staff/${PARK}/sweep`);
-  await expect(ranger.getByRole("heading", { name: "Morning sweep" })).toBeVisible();
-  const closed = sweepCard(ranger, trailName);
+  // 2. The morning check: the new trail closed after rain, every other trail open with its surfaces.
+  await ranger.goto(`/staff/${PARK}/morning-check`);
+  await expect(ranger.getByRole("heading", { name: "Morning check" })).toBeVisible();
+  const closed = checkRow(ranger, trailName);
+  await closed.getByRole("button", { name: "Change", exact: true }).click();
   await closed.getByRole("radio", { name: "Closed" }).click();
   await closed.getByLabel("Reason (closed)").fill(reason);
   await setSurfaces(closed, ["wet", "muddy"]);
-  const names = await ranger.getByTestId("sweep-trail").evaluateAll((cards) => cards.map((c) => c.getAttribute("data-trail-name")!));
+  const names = await ranger.getByTestId("check-trail").evaluateAll((cards) => cards.map((c) => c.getAttribute("data-trail-name")!));
   const others = names.filter((n) => n !== trailName);
   expect(others.length).toBeGreaterThanOrEqual(10);
   for (const name of others) {
-    const card = sweepCard(ranger, name);
+    const card = checkRow(ranger, name);
+    await card.getByRole("button", { name: "Change", exact: true }).click();
     await card.getByRole("radio", { name: "Open" }).click();
     await setSurfaces(card, name === HAZARD_TRAIL ? ["damp", "rocky"] : ["tacky", "damp"]);
   }
-  await expect(ranger.getByTestId("sweep-count")).toContainText(`${names.length} marked in this sweep`);
-  await shot(ranger, "park-day-4-sweep-marked");
+  await expect(ranger.getByTestId("check-count")).toContainText(`${names.length} marked now`);
+  await shot(ranger, "park-day-4-check-marked");
   await ranger.getByRole("button", { name: `Save ${names.length} trails` }).click();
-  await expect(ranger.getByTestId("sweep-outcome")).toContainText(`Saved ${names.length} trails.`);
+  await expect(ranger.getByTestId("check-outcome")).toContainText(`Saved ${names.length} trails.`);
   const noticeLink = ranger.getByRole("link", { name: "Send a closure notice to riders" });
   const noticeHref = (await noticeLink.getAttribute("href"))!;
   expect(noticeHref).toContain(`trailIds=${trailId}`);
@@ -193,7 +195,7 @@ test("the park day: upload, invite, sweep with a closure and a hazard, board and
   await expect(preview).toContainText(`Subject: Harrow Ridge Bike Park: ${trailName} closed`);
   await shot(ranger, "park-day-9-notice-preview");
   await preview.getByRole("button", { name: /^Send to \d+ riders?$/ }).click();
-  await expect(ranger.getByRole("status")).toContainText("Notice queued");
+  await expect(ranger.getByTestId("sending-banner")).toContainText("Sending to");
 
   const worker = await run("node_modules/.bin/tsx", ["--conditions=react-server", "scripts/worker.ts", "--once"], { env: process.env, timeout: 60_000 });
   expect(worker.stdout).toMatch(/done: \d+ sent/);

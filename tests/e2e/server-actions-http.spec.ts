@@ -17,7 +17,7 @@ type ManifestEntry = { exportedName: string; workers: Record<string, unknown> };
 const manifest = () => JSON.parse(readFileSync(".next/server/server-reference-manifest.json", "utf8")).node as Record<string, ManifestEntry>;
 
 const SOME_ID = "00000000-0000-4000-8000-000000000000";
-/** "app/(staff)/staff/[parkSlug]/sweep/page" → "/staff/harrow-ridge/sweep". */
+/** "app/(staff)/staff/[parkSlug]/morning-check/page" → "/staff/harrow-ridge/morning-check". */
 const pagePath = (worker: string) =>
   worker.replace(/^app/, "").replace(/\/page$/, "").replace(/\/\([^)]+\)/g, "").replace("[parkSlug]", "harrow-ridge").replace("[noticeId]", SOME_ID).replace("[token]", "x") || "/";
 
@@ -87,7 +87,7 @@ test("a rider posting the staff's park-state action directly is refused, and the
   const [id] = Object.entries(manifest()).find(([, e]) => e.exportedName === "setParkStateAction")!;
   const parkState = async () => (await (await rider.get("/api/parks/harrow-ridge/board")).json()).parkState;
   const before = await parkState();
-  const result = await postAction(rider, id, "/staff/harrow-ridge/sweep", FIELDS.setParkStateAction);
+  const result = await postAction(rider, id, "/staff/harrow-ridge/morning-check", FIELDS.setParkStateAction);
   expect(result.state).toMatchObject({ ok: false, status: 403 });
   expect(await parkState()).toEqual(before);
   // The same request shape works for an action the rider may use, so the refusal above is the check, not the encoding.

@@ -85,12 +85,12 @@ test("a report posted through instance A is on instance B's board, and A's sessi
   expect(await trailOf(await page.request.get(`/api/parks/${PARK}/board`), "Cedar Skip")).toMatchObject({ note: second, revision: before.revision + 2 });
 
   // In the browser too (cookies belong to the host, not the port, so it sends A's cookie to B):
-  // the staff sweep page opens on B for the ranger who signed in on A.
+  // the staff check page opens on B for the ranger who signed in on A.
   const staffPageOnB = await page.context().newPage();
-  await staffPageOnB.goto(`${B}/staff/${PARK}/sweep`);
-  await expect(staffPageOnB.getByRole("heading", { name: "Morning sweep" })).toBeVisible();
+  await staffPageOnB.goto(`${B}/staff/${PARK}/morning-check`);
+  await expect(staffPageOnB.getByRole("heading", { name: "Morning check" })).toBeVisible();
   await expect(staffPageOnB.getByTestId("signed-in-as")).toContainText("ranger");
-  await shot(staffPageOnB, "two-instances-sweep-on-b");
+  await shot(staffPageOnB, "two-instances-check-on-b");
 
   await rangerOnB.dispose();
   await anonymousB.dispose();

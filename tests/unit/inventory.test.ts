@@ -16,7 +16,7 @@ describe("reading routes and server actions from the source (the authorization m
 
   it("finds every route handler and server action of this app", () => {
     const routes = routeHandlers().map((r) => `${r.method} ${r.route}`);
-    expect(routes).toContain("POST /api/parks/[parkSlug]/sweep");
+    expect(routes).toContain("POST /api/parks/[parkSlug]/morning-check");
     expect(routes).toContain("POST /api/auth/[...nextauth]");
     expect(routes).toContain("GET /embed/parks/[parkSlug]");
     expect(serverActions().map((a) => a.name)).toContain("setParkStateAction");

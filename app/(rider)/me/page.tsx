@@ -3,7 +3,7 @@ import { UnitsForm } from "@/components/pressure/units-form";
 import { getActor } from "@/lib/server/auth/actor";
 import { unitsFor } from "@/lib/accounts/units";
 
-export const metadata = { title: "My account" };
+export const metadata = { title: "My bike" };
 export const dynamic = "force-dynamic";
 
 const MY_LINKS = [
@@ -14,12 +14,12 @@ const MY_LINKS = [
   { href: "/me/account", label: "Account and sign-in", text: "Password, e-mail, sign out everywhere, your data." },
 ];
 
-export default async function MyAccountPage() {
+export default async function MyBikePage() {
   const actor = (await getActor())!;
   const units = await unitsFor(actor);
   return (
     <section className="space-y-4">
-      <h1 className="text-2xl font-bold">My account</h1>
+      <h1 className="text-2xl font-bold">My bike</h1>
       <div className="card">
         <p className="font-semibold">{actor.name}</p>
         <p className="text-loam-600">{actor.email}</p>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { formatCalendarDate, longDate } from "@/lib/shared/park-clock";
 import Link from "next/link";
 import { cache } from "react";
 import { notFound } from "next/navigation";
@@ -10,7 +11,6 @@ import { boardForPark } from "@/lib/conditions/board";
 import { absoluteUrl, webcalUrl } from "@/lib/reach/links";
 import { statusCounts } from "@/lib/reach/pure/status-feed";
 import { previewMetadata } from "@/lib/reach/preview-image";
-import { longDate } from "@/lib/shared/park-clock";
 
 export const dynamic = "force-dynamic";
 
@@ -47,18 +47,18 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
         <p className="text-loam-700">
           Conditions for <strong>{longDate(board.date)}</strong> (park time)
         </p>
-        <p className="flex flex-wrap gap-2">
-          <Link href={`${path}/map`} className="btn-quiet">
+        <p className="-mx-4 flex gap-2 overflow-x-auto px-4 pb-1">
+          <Link href={`${path}/map`} className="btn-quiet shrink-0">
             Map
           </Link>
-          <Link href={`${path}/trails`} className="btn-quiet">
+          <Link href={`${path}/trails`} className="btn-quiet shrink-0">
             All trails
           </Link>
-          <Link href={`/pressure?park=${board.park.slug}`} className="btn-quiet">
+          <Link href={`/pressure?park=${board.park.slug}`} className="btn-quiet shrink-0">
             Today&apos;s tyre pressure
           </Link>
-          <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet">
-            Get closure e-mails
+          <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet shrink-0">
+            Get trail notices by e-mail
           </Link>
           {/* webcal:// asks the rider's calendar app to subscribe, so later changes arrive by themselves. */}
           <a href={webcalUrl(`/api/parks/${board.park.slug}/closures.ics`)} className="btn-quiet">
@@ -67,8 +67,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
         </p>
       </header>
       <OfflineNote asOf={board.generatedAt} timeZone={board.park.timeZone} />
-      {board.trails.length > 0 && <BoardFilterLinks path={path} filters={filters} />}
-      <BoardLive initial={board} filters={filters} />
+      <BoardLive initial={board} filters={filters} filterLinks={<BoardFilterLinks path={path} filters={filters} />} />
     </section>
   );
 }

@@ -1,7 +1,11 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { DifficultyBadge } from "@/components/difficulty-badge";
+import { directionLabel, kindLabel } from "@/lib/trails/pure/vocabulary";
 import { ElevationProfile } from "@/components/elevation-profile";
+import { TrailCard } from "@/components/board/trail-card";
+import { TrailSketch } from "@/components/trail-sketch";
+import { boardForPark } from "@/lib/conditions/board";
 import { TrailFiguresList } from "@/components/trail-figures";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
@@ -12,6 +16,7 @@ import { getTrailDetail, type TrailDetail } from "@/lib/trails/queries";
 import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { AppError } from "@/lib/shared/errors";
 import { formatDistance } from "@/lib/shared/units";
+import { formatParkDay } from "@/lib/shared/park-clock";
 
 export const dynamic = "force-dynamic";
 
@@ -37,13 +42,14 @@ export async function generateMetadata({ params }: Props) {
   };
 }
 
-const dateOf = (iso: string) => new Date(iso).toISOString().slice(0, 10);
+const dateOf = (iso: string, timeZone: string) => formatParkDay(new Date(iso), timeZone);
 
 export default async function TrailPage({ params }: Props) {
   const { id } = await params;
   const actor = await getActor();
   const [trail, system] = await Promise.all([loadTrail(id, actor), distanceSystemFor(actor)]);
   const download = `/api/trails/${trail.id}/download`;
+  const today = trail.archivedAt ? null : (await boardForPark(trail.park.slug))?.trails.find((t) => t.id === trail.id);
   const canEdit = !trail.archivedAt && actor !== null && can(actor, "trail:write", { parkId: (await getParkBySlug(trail.park.slug)).id });
 
   return (
@@ -55,16 +61,38 @@ export default async function TrailPage({ params }: Props) {
         <h1 className="text-2xl font-bold">{trail.name}</h1>
         <p className="flex flex-wrap items-center gap-x-3 gap-y-1">
           <DifficultyBadge difficulty={trail.difficulty} className="font-semibold" />
-          <span>{trail.kind}</span>
-          <span>{trail.direction === "both" ? "ridden both ways" : trail.direction}</span>
+          <span>
+            <span className="sr-only">Kind: </span>
+            {kindLabel(trail.kind)}
+          </span>
+          <span>{directionLabel(trail.direction)}</span>
         </p>
-        {trail.archivedAt && <p className="rounded-lg bg-flare-100 p-2 font-semibold">Archived on {dateOf(trail.archivedAt)}: hidden from riders; kept for the record.</p>}
+        {trail.archivedAt && <p className="rounded-lg bg-flare-100 p-2 font-semibold">Archived on {dateOf(trail.archivedAt, trail.park.timeZone)}: hidden from riders; kept for the record.</p>}
         {canEdit && (
           <p>
             <Link href={`/staff/${trail.park.slug}/trails/${trail.id}/edit`} className="btn-quiet">Edit trail</Link>
           </p>
         )}
       </header>
+
+      {today && (
+        <section aria-labelledby="today-heading" className="space-y-2">
+          <h2 id="today-heading" className="text-lg font-bold">Today</h2>
+          <ul>
+            <TrailCard trail={today} timeZone={trail.park.timeZone} />
+          </ul>
+        </section>
+      )}
+
+      <section className="card space-y-2" aria-labelledby="line-heading">
+        <h2 id="line-heading" className="text-lg font-bold">The line</h2>
+        <TrailSketch line={trail.line} name={trail.name} />
+        <p className="text-sm">
+          <Link href={`/parks/${trail.park.slug}/map`} className="inline-flex min-h-tap items-center font-semibold text-moss-700 underline">
+            Open the park map
+          </Link>
+        </p>
+      </section>
 
       <section className="card space-y-3" aria-labelledby="figures-heading">
         <h2 id="figures-heading" className="text-lg font-bold">Measured from the GPS line</h2>
@@ -76,7 +104,7 @@ export default async function TrailPage({ params }: Props) {
 
       <section className="card space-y-2" aria-labelledby="profile-heading">
         <h2 id="profile-heading" className="text-lg font-bold">Elevation profile</h2>
-        <ElevationProfile profile={trail.profile} system={system} />
+        <ElevationProfile profile={trail.profile} system={system} marks={trail.features.map((f, i) => ({ dM: f.distanceAlongM, label: String(i + 1) }))} />
       </section>
 
       <section className="card space-y-2" aria-labelledby="features-heading">
@@ -85,9 +113,11 @@ export default async function TrailPage({ params }: Props) {
           <p className="text-sm text-loam-600">No features recorded.</p>
         ) : (
           <ol className="divide-y divide-loam-100" data-testid="feature-list">
-            {trail.features.map((f) => (
+            {trail.features.map((f, i) => (
               <li key={f.id} className="flex justify-between gap-2 py-2">
                 <span>
+                  <span className="mr-2 inline-flex h-6 w-6 items-center justify-center rounded-full border-2 border-loam-900 text-xs font-bold" aria-hidden="true">{i + 1}</span>
+                  <span className="sr-only">Mark {i + 1} on the profile: </span>
                   <span className="font-semibold">{f.kind.replace("-", " ")}</span>
                   {f.size && <span className="text-loam-600"> · {f.size}</span>}
                   {f.name && <span className="text-loam-600"> · {f.name}</span>}
@@ -112,7 +142,7 @@ export default async function TrailPage({ params }: Props) {
               <span>
                 <span className="font-semibold">Version {v.versionNo}</span>
                 {v.versionNo === trail.currentVersion && <span className="ml-1 rounded bg-moss-100 px-1 text-moss-700">current</span>}
-                <span className="text-loam-600"> · {dateOf(v.uploadedAt)} · {v.sourceFormat.toUpperCase()}{v.lengthM !== null && ` · ${formatDistance(v.lengthM, system)}`}</span>
+                <span className="text-loam-600"> · {dateOf(v.uploadedAt, trail.park.timeZone)} · {v.sourceFormat.toUpperCase()}{v.lengthM !== null && ` · ${formatDistance(v.lengthM, system)}`}</span>
               </span>
               <a href={`${download}?version=${v.versionNo}`} className="font-semibold text-moss-700 underline underline-offset-4" download>
                 Original file

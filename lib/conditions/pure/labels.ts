@@ -33,23 +33,6 @@ export const PARK_STATE_LABELS: Record<ParkStateKind, string> = {
   advisory: "Advisory",
 };
 
-export const DIFFICULTY_LABELS: Record<string, string> = {
-  easiest: "Easiest",
-  easy: "Easy",
-  intermediate: "Intermediate",
-  difficult: "Difficult",
-  extreme: "Extreme",
-};
-
-export const KIND_LABELS: Record<string, string> = {
-  flow: "Flow",
-  jump: "Jump line",
-  technical: "Technical",
-  climb: "Climb",
-  "cross-country": "Cross-country",
-  downhill: "Downhill",
-};
-
 /** "berms soft · jumps good": the feature notes in one line. */
 export function describeFeatures(features: Record<string, string | undefined>): string {
   return (Object.keys(FEATURE_LABELS) as (keyof typeof FEATURE_LABELS)[])

@@ -1,5 +1,5 @@
 /**
- * Trail reports, the morning sweep and the park-wide state: the shapes the API, the sweep
+ * Trail reports, the morning check and the park-wide state: the shapes the API, the check
  * screen and the seeder all send. Strict objects: an unknown or misspelt key is refused.
  */
 import { z } from "zod";
@@ -70,8 +70,8 @@ export const reportPostSchema = withReportRules(reportObject.extend({ baseRevisi
 
 const dateSchema = z.iso.date({ error: "Use a date like 2026-12-02." });
 
-/** One trail in the morning sweep: either "unchanged" (keep the last values) or a report. */
-export const sweepEntrySchema = z
+/** One trail in the morning check: either "unchanged" (keep the last values) or a report. */
+export const checkEntrySchema = z
   .object({
     trailId: z.uuid({ error: "trailId must be a trail's id." }),
     baseRevision: baseRevisionSchema,
@@ -84,14 +84,14 @@ export const sweepEntrySchema = z
     path: ["report"],
   });
 
-export const sweepSchema = z
+export const morningCheckSchema = z
   .object({
     date: dateSchema.optional(),
     entries: z
-      .array(sweepEntrySchema)
+      .array(checkEntrySchema)
       .min(1, { error: "Mark at least one trail before saving." })
       .max(500)
-      .refine((list) => new Set(list.map((e) => e.trailId)).size === list.length, { error: "Each trail only once per sweep." }),
+      .refine((list) => new Set(list.map((e) => e.trailId)).size === list.length, { error: "Each trail only once per check." }),
   })
   .strict();
 
@@ -117,6 +117,6 @@ export const dateRangeSchema = z
 export type { FeatureStates, ParkStateKind, ReportStatus, Surface } from "@/lib/conditions/pure/vocabulary";
 export type ReportInput = z.infer<typeof reportInputSchema>;
 export type ReportPost = z.infer<typeof reportPostSchema>;
-export type SweepEntry = z.infer<typeof sweepEntrySchema>;
-export type SweepInput = z.infer<typeof sweepSchema>;
+export type CheckEntry = z.infer<typeof checkEntrySchema>;
+export type MorningCheckInput = z.infer<typeof morningCheckSchema>;
 export type ParkStateInput = z.infer<typeof parkStateSchema>;

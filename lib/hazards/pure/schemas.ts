@@ -52,7 +52,7 @@ export const hazardInputSchema = z
     } else if (along && !h.trailId) {
       ctx.addIssue({ code: "custom", path: ["trailId"], message: "Choose the trail the distance is measured along." });
     } else if (!hasPoint && !along) {
-      ctx.addIssue({ code: "custom", path: ["lon"], message: "Give the hazard's position: coordinates, your location, or a trail and a distance along it." });
+      ctx.addIssue({ code: "custom", path: ["lon"], message: "Give the hazard's position: tap the map, use your location, type the coordinates, or choose a trail and a distance along it." });
     } else if (hasPoint && along) {
       ctx.addIssue({ code: "custom", path: ["distanceAlongM"], message: "Give coordinates or a distance along the trail, not both." });
     }

@@ -1,8 +1,8 @@
-import { parkLocalDate, parkLocalTime, shiftDate } from "@/lib/shared/park-clock";
+import { parkLocalDate, parkLocalTime, shiftDate, formatParkDay } from "@/lib/shared/park-clock";
 
 /**
  * When something happened, in the park's own time zone: "today 07:12", "yesterday 18:40",
- * "28 Nov 07:12", or "never". Shared by the map card and the list.
+ * "Sat 28 Nov 07:12", or "never". Shared by the map card and the list.
  */
 export function formatParkTime(iso: string | null, timeZone: string, now = new Date()): string {
   if (!iso) return "never";
@@ -11,8 +11,7 @@ export function formatParkTime(iso: string | null, timeZone: string, now = new D
   const time = parkLocalTime(at, timeZone);
   if (day === today) return `today ${time}`;
   if (day === shiftDate(today, -1)) return `yesterday ${time}`;
-  const date = new Intl.DateTimeFormat("en-GB", { timeZone, day: "numeric", month: "short" }).format(at);
-  return `${date} ${time}`;
+  return `${formatParkDay(at, timeZone)} ${time}`;
 }
 
 /** "2.4 km" / "740 m". */

@@ -41,3 +41,6 @@ export const TOGGLE_GROUPS = {
   contours: { label: "Contour lines", layers: [LAYER_IDS.contours, LAYER_IDS.contoursIndex, LAYER_IDS.contourLabels] },
 } as const;
 export type ToggleGroup = keyof typeof TOGGLE_GROUPS;
+
+/** What the staff pin map draws as draggable pins, so the style's own copies are hidden there. */
+export const PIN_DRAWN_LAYERS = [...TOGGLE_GROUPS.features.layers, ...TOGGLE_GROUPS.hazards.layers] as const;

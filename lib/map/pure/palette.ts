@@ -1,4 +1,4 @@
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues, type Difficulty } from "@/lib/trails/pure/schemas";
 
 /**

@@ -80,7 +80,7 @@ export function trailLayers(): LayerSpecification[] {
         "symbol-spacing": 160,
         "text-field": statusMatch((k) => STATUS_LOOKS[k].tag, "") as never,
         "text-font": FONT_STACK,
-        "text-size": 11,
+        "text-size": 12,
         "text-letter-spacing": 0.12,
       },
       paint: labelPaint,
@@ -92,7 +92,7 @@ export function trailLayers(): LayerSpecification[] {
       source: SOURCE_IDS.trailLabels,
       maxzoom: 15,
       filter: ["==", ["get", "role"], "status"],
-      layout: { "text-field": ["get", "tag"], "text-font": FONT_STACK, "text-size": 10.5, "text-letter-spacing": 0.1, "text-padding": 1 },
+      layout: { "text-field": ["get", "tag"], "text-font": FONT_STACK, "text-size": 12, "text-letter-spacing": 0.1, "text-padding": 1 },
       paint: { ...labelPaint, "text-halo-width": 2.2 },
     },
     {
@@ -103,7 +103,7 @@ export function trailLayers(): LayerSpecification[] {
       layout: {
         "text-field": ["format", ["get", "name"], {}, "\n", {}, ["get", "tag"], { "font-scale": 0.8 }] as never,
         "text-font": FONT_STACK,
-        "text-size": ["interpolate", ["linear"], ["zoom"], 12, 11, 16, 14] as never,
+        "text-size": ["interpolate", ["linear"], ["zoom"], 12, 12, 16, 15] as never,
         "text-variable-anchor": ["center", "top", "bottom", "left", "right"],
         "text-radial-offset": 0.6,
         "text-justify": "auto",
@@ -128,7 +128,7 @@ export function featureLayers(): LayerSpecification[] {
       type: "symbol",
       source: SOURCE_IDS.features,
       minzoom: 15.5,
-      layout: { "text-field": ["get", "label"], "text-font": FONT_STACK, "text-size": 10, "text-anchor": "left", "text-offset": [0.7, 0] },
+      layout: { "text-field": ["get", "label"], "text-font": FONT_STACK, "text-size": 12, "text-anchor": "left", "text-offset": [0.7, 0] },
       paint: { ...labelPaint, "text-halo-width": 1.5 },
     },
   ];
@@ -155,7 +155,7 @@ export function hazardLayers(): LayerSpecification[] {
       type: "symbol",
       source: SOURCE_IDS.hazards,
       minzoom: 13.5,
-      layout: { "text-field": ["concat", "Hazard: ", ["get", "kindLabel"]], "text-font": FONT_STACK, "text-size": 11, "text-anchor": "top", "text-offset": [0, 1.1] },
+      layout: { "text-field": ["concat", "Hazard: ", ["get", "kindLabel"]], "text-font": FONT_STACK, "text-size": 12, "text-anchor": "top", "text-offset": [0, 1.1] },
       paint: labelPaint,
     },
   ];

@@ -4,7 +4,8 @@
  * from our origin but itself, sets no cookie and reads none.
  */
 import { z } from "zod";
-import { DIFFICULTY_LABELS, PARK_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import { PARK_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import { difficultyLabel } from "@/lib/trails/pure/vocabulary";
 import type { ParkStateKind } from "@/lib/conditions/pure/schemas";
 import { escapeHtml } from "@/lib/shared/text";
 import { longDate } from "@/lib/shared/park-clock";
@@ -68,7 +69,7 @@ export function embedCardHtml(feed: StatusFeed, renderedAt: Date): string {
   const rows = feed.trails
     .map(
       (t) =>
-        `<li><a href="${e(t.url)}" target="_blank" rel="noopener">${e(t.name)}</a><span class="diff">${e(DIFFICULTY_LABELS[t.difficulty] ?? t.difficulty)}</span>${statusBadge(t.status)}${t.reason ? `<span class="reason">${e(t.reason)}</span>` : ""}</li>`,
+        `<li><a href="${e(t.url)}" target="_blank" rel="noopener">${e(t.name)}</a><span class="diff">${e(difficultyLabel(t.difficulty))}</span>${statusBadge(t.status)}${t.reason ? `<span class="reason">${e(t.reason)}</span>` : ""}</li>`,
     )
     .join("");
   return `<!doctype html>

@@ -3,24 +3,6 @@ import type { TrailStats } from "./stats";
 
 export type { Difficulty };
 
-/**
- * The trade's difficulty scale (IMBA Trail Difficulty Rating System, Trail Solutions, 2004):
- * white circle, green circle, blue square, black diamond, double black diamond.
- * `colour` is the sign's fill; a white sign needs `outline` to show on a light map.
- */
-export const DIFFICULTIES = {
-  easiest: { label: "Easiest", symbol: "circle", colour: "#ffffff", colourName: "white", outline: "#1f2937" },
-  easy: { label: "Easy", symbol: "circle", colour: "#15803d", colourName: "green", outline: null },
-  intermediate: { label: "More difficult", symbol: "square", colour: "#1d4ed8", colourName: "blue", outline: null },
-  difficult: { label: "Very difficult", symbol: "diamond", colour: "#111827", colourName: "black", outline: null },
-  extreme: { label: "Extremely difficult", symbol: "double-diamond", colour: "#111827", colourName: "black", outline: null },
-} as const satisfies Record<Difficulty, { label: string; symbol: string; colour: string; colourName: string; outline: string | null }>;
-
-/** Each grade's sign colour, for map lines and legends: the one place these colours are defined. */
-export const DIFFICULTY_COLOURS = Object.fromEntries(Object.entries(DIFFICULTIES).map(([key, d]) => [key, d.colour])) as Record<Difficulty, string>;
-
-export const isDifficulty = (value: string): value is Difficulty => value in DIFFICULTIES;
-
 /** IMBA grade limits, in percent. Average: white < 5, green ≤ 5, blue ≤ 10, black ≤ 15. Maximum: white 10, green 15. */
 export const IMBA_GRADE_LIMITS = {
   avg: { easy: 5, intermediate: 10, difficult: 15 },

@@ -15,7 +15,21 @@ export type ProfileChart = {
   yUnit: string;
   /** One sentence for screen readers. */
   summary: string;
+  /** Marks along the line (built features): where each sits on the drawn profile. */
+  marks: { x: number; y: number; label: string }[];
 };
+
+export type ProfileMark = { dM: number; label: string };
+
+/** The elevation at `dM` metres along a profile, linearly between its points (clamped to its ends). */
+export function elevationAt(profile: ProfilePoint[], dM: number): number {
+  if (dM <= profile[0].dM) return profile[0].eleM;
+  for (let i = 1; i < profile.length; i++) {
+    const [a, b] = [profile[i - 1], profile[i]];
+    if (dM <= b.dM) return b.dM === a.dM ? b.eleM : a.eleM + ((b.eleM - a.eleM) * (dM - a.dM)) / (b.dM - a.dM);
+  }
+  return profile.at(-1)!.eleM;
+}
 
 /**
  * Round step sizes for axis labels: 1, 2 or 5 times a power of ten, the step nearest to
@@ -49,7 +63,7 @@ const MARGIN = { left: 52, right: 12, top: 24, bottom: 40 };
  * The elevation profile as SVG geometry in the viewer's units (km/m or mi/ft): distance along the
  * trail across, elevation up, the elevation axis widened to round values. Null without elevation.
  */
-export function profileChart(profile: ProfilePoint[], system: DistanceSystem, size = SIZE): ProfileChart | null {
+export function profileChart(profile: ProfilePoint[], system: DistanceSystem, size = SIZE, marks: ProfileMark[] = []): ProfileChart | null {
   if (profile.length < 2) return null;
   const imperial = system === "imperial";
   const toX = (m: number) => (imperial ? m / M_PER_MI : m / 1000);
@@ -75,5 +89,6 @@ export function profileChart(profile: ProfilePoint[], system: DistanceSystem, si
   const lowest = Math.min(...profile.map((p) => p.eleM));
   const highest = Math.max(...profile.map((p) => p.eleM));
   const summary = `Elevation profile: from ${formatHeight(profile[0].eleM, system)} at the start to ${formatHeight(profile.at(-1)!.eleM, system)} at the end, between ${formatHeight(lowest, system)} and ${formatHeight(highest, system)}, over ${formatDistance(profile.at(-1)!.dM, system)}.`;
-  return { ...size, plot, line, area, xTicks, yTicks, xUnit: imperial ? "mi" : "km", yUnit: imperial ? "ft" : "m", summary };
+  const onLine = marks.map((m) => ({ x: px(toX(Math.min(m.dM, profile.at(-1)!.dM))), y: py(toY(elevationAt(profile, m.dM))), label: m.label }));
+  return { ...size, plot, line, area, xTicks, yTicks, xUnit: imperial ? "mi" : "km", yUnit: imperial ? "ft" : "m", summary, marks: onLine };
 }

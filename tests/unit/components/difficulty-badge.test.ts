@@ -2,7 +2,7 @@ import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { DifficultyBadge } from "@/components/difficulty-badge";
-import { DIFFICULTIES, DIFFICULTY_COLOURS } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES, DIFFICULTY_COLOURS } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues } from "@/lib/trails/pure/schemas";
 
 // The trade's signs (IMBA Trail Difficulty Rating System): white circle, green circle, blue square,

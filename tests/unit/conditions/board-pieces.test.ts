@@ -3,7 +3,8 @@ import { filterHref, parseBoardFilters } from "@/lib/conditions/pure/board-filte
 import { filterTrails } from "@/lib/conditions/pure/filter-trails";
 import { monthGrid, shiftMonth } from "@/lib/conditions/pure/calendar";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
-import { closureNoticeHref } from "@/lib/conditions/pure/notice-link";
+import { closureNoticeHref, noticeKindFor } from "@/lib/conditions/pure/notice-link";
+import { boardCounts, firstGlance } from "@/lib/conditions/pure/board-glance";
 
 const trails = [
   { name: "A", difficulty: "easy", kind: "flow", effectiveStatus: "open" },
@@ -42,6 +43,17 @@ describe("closure notice link", () => {
   });
 });
 
+describe("which notice a status change offers (common practice, no published source)", () => {
+  it("a new closure offers a closure notice, a closed trail opening or easing offers a reopening, anything else none", () => {
+    expect(noticeKindFor({ from: "open", to: "closed" })).toBe("closure");
+    expect(noticeKindFor({ from: null, to: "closed" })).toBe("closure");
+    expect(noticeKindFor({ from: "closed", to: "closed" })).toBeNull();
+    expect(noticeKindFor({ from: "closed", to: "open" })).toBe("reopening");
+    expect(noticeKindFor({ from: "closed", to: "caution" })).toBe("reopening");
+    expect(noticeKindFor({ from: "open", to: "caution" })).toBeNull();
+  });
+});
+
 describe("month at a glance", () => {
   it("lays December 2026 out Monday first (1 December 2026 is a Tuesday)", () => {
     const weeks = monthGrid("2026-12");
@@ -60,5 +72,20 @@ describe("feature notes", () => {
   it("reads as one line in a fixed order", () => {
     expect(describeFeatures({ wood: "slick", berms: "soft" })).toBe("berms soft · wooden features slick");
     expect(describeFeatures({})).toBe("");
+  });
+});
+
+describe("the board's first glance (common practice, no published source)", () => {
+  const trail = (name: string, effectiveStatus: "open" | "caution" | "closed" | null, changedSinceYesterday = false) => ({ name, effectiveStatus, changedSinceYesterday });
+  const trails = [trail("A", "open"), trail("B", "closed"), trail("C", "open", true), trail("D", null), trail("E", "caution"), trail("F", "open")];
+
+  it("counts open, caution, closed and not yet checked", () => {
+    expect(boardCounts(trails)).toEqual({ open: 3, caution: 1, closed: 1, notChecked: 1 });
+  });
+
+  it("puts changed and not-open trails first, each group in its order", () => {
+    const { attention, rest } = firstGlance(trails);
+    expect(attention.map((t) => t.name)).toEqual(["B", "C", "D", "E"]);
+    expect(rest.map((t) => t.name)).toEqual(["A", "F"]);
   });
 });

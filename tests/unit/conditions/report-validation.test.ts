@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { hazardInputSchema, hazardPatchSchema } from "@/lib/hazards/pure/schemas";
-import { parkStateSchema, reportInputSchema, reportPostSchema, sweepSchema } from "@/lib/conditions/pure/schemas";
+import { parkStateSchema, reportInputSchema, reportPostSchema, morningCheckSchema } from "@/lib/conditions/pure/schemas";
 
 const issues = (result: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) =>
   (result.error?.issues ?? []).map((i) => `${i.path.join(".")}: ${i.message}`);
@@ -43,19 +43,19 @@ describe("trail report validation", () => {
   });
 });
 
-describe("sweep validation", () => {
+describe("check validation", () => {
   const id = (n: number) => `00000000-0000-4000-8000-00000000000${n}`;
   it("takes unchanged or a report per trail, never both or neither", () => {
-    expect(sweepSchema.safeParse({ entries: [{ trailId: id(1), baseRevision: 0, unchanged: true }, { trailId: id(2), report: { status: "open" } }] }).success).toBe(true);
-    expect(sweepSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true, report: { status: "open" } }] }).success).toBe(false);
-    expect(sweepSchema.safeParse({ entries: [{ trailId: id(1) }] }).success).toBe(false);
+    expect(morningCheckSchema.safeParse({ entries: [{ trailId: id(1), baseRevision: 0, unchanged: true }, { trailId: id(2), report: { status: "open" } }] }).success).toBe(true);
+    expect(morningCheckSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true, report: { status: "open" } }] }).success).toBe(false);
+    expect(morningCheckSchema.safeParse({ entries: [{ trailId: id(1) }] }).success).toBe(false);
   });
-  it("refuses an empty sweep and a trail twice", () => {
-    expect(issues(sweepSchema.safeParse({ entries: [] }))).toEqual(["entries: Mark at least one trail before saving."]);
-    expect(issues(sweepSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true }, { trailId: id(1), unchanged: true }] }))).toEqual(["entries: Each trail only once per sweep."]);
+  it("refuses an empty check and a trail twice", () => {
+    expect(issues(morningCheckSchema.safeParse({ entries: [] }))).toEqual(["entries: Mark at least one trail before saving."]);
+    expect(issues(morningCheckSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true }, { trailId: id(1), unchanged: true }] }))).toEqual(["entries: Each trail only once per check."]);
   });
   it("points at the trail and field that failed", () => {
-    expect(issues(sweepSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true }, { trailId: id(2), report: { status: "closed" } }] }))).toEqual([
+    expect(issues(morningCheckSchema.safeParse({ entries: [{ trailId: id(1), unchanged: true }, { trailId: id(2), report: { status: "closed" } }] }))).toEqual([
       "entries.1.report.reason: Give a reason when a trail is closed.",
     ]);
   });

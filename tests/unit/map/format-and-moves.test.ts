@@ -11,7 +11,7 @@ describe("times in the park's own zone", () => {
   it("reads today, yesterday, an earlier date, or never", () => {
     expect(formatParkTime("2026-12-02T15:12:00Z", zone, now)).toBe("today 07:12");
     expect(formatParkTime("2026-12-02T02:40:00Z", zone, now)).toBe("yesterday 18:40");
-    expect(formatParkTime("2026-11-28T15:05:00Z", zone, now)).toBe("28 Nov 07:05");
+    expect(formatParkTime("2026-11-28T15:05:00Z", zone, now)).toBe("Sat 28 Nov 07:05");
     expect(formatParkTime(null, zone, now)).toBe("never");
   });
 

@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { LAYER_IDS, SOURCE_IDS, TOGGLE_GROUPS, TRAIL_LINE_LAYER_IDS, trailLineLayerId } from "@/lib/map/pure/layer-ids";
 import { STATUS_LOOKS, TRAIL_STATUS_KEYS } from "@/lib/map/pure/status";
 import { buildParkStyle, overlayOnHostedStyle } from "@/lib/map/pure/style";
-import { DIFFICULTIES } from "@/lib/trails/pure/difficulty";
+import { DIFFICULTIES } from "@/lib/trails/pure/vocabulary";
 import { difficultyValues } from "@/lib/trails/pure/schemas";
 
 // Checked against the MapLibre style specification itself (@maplibre/maplibre-gl-style-spec,
@@ -24,6 +24,17 @@ describe("the park's own map style", () => {
   it("is valid against the MapLibre style specification (version 8)", () => {
     expect(style.version).toBe(8);
     expect(validateStyleMin(style)).toEqual([]);
+  });
+
+  it("writes every label at 12 px or more, at every zoom (WCAG 2.x legibility: common practice, no published minimum)", () => {
+    const sizes = style.layers.flatMap((l) => {
+      const size = (l as { layout?: Record<string, unknown> }).layout?.["text-size"];
+      if (size === undefined) return [];
+      // A number, or ["interpolate", curve, ["zoom"], zoom1, size1, zoom2, size2…]: the sizes are every other stop.
+      return typeof size === "number" ? [size] : (size as unknown[]).slice(3).filter((_, i) => i % 2 === 1).map(Number);
+    });
+    expect(sizes.length).toBeGreaterThan(5);
+    expect(Math.min(...sizes)).toBeGreaterThanOrEqual(12);
   });
 
   it("needs no other host: no http(s) or protocol-relative URL, no tiles, sprite or glyph server", () => {

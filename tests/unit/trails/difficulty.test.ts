@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { computeTrailStats, DIFFICULTIES, suggestedDifficulty } from "@/lib/trails/pure";
-import { difficultyValues } from "@/lib/trails/pure/schemas";
+import { difficultyValues, trailKindValues } from "@/lib/trails/pure/schemas";
+import { difficultyLabel, directionLabel, kindLabel, TRAIL_KINDS } from "@/lib/trails/pure/vocabulary";
 import { meridianLine } from "./helpers";
 
 // Source: IMBA Trail Difficulty Rating System (IMBA, Trail Solutions, 2004), as summarised in
@@ -42,5 +43,22 @@ describe("the trade's difficulty symbols", () => {
     expect(Object.values(DIFFICULTIES).map((d) => d.colourName)).toEqual(["white", "green", "blue", "black", "black"]);
     for (const d of Object.values(DIFFICULTIES)) expect(d.colour).toMatch(/^#[0-9a-f]{6}$/);
     expect(DIFFICULTIES.easiest.outline).not.toBeNull(); // a white line needs an outline on a light map
+  });
+});
+
+describe("one vocabulary for difficulty and kind", () => {
+  // IMBA Trail Difficulty Rating System (Trail Solutions, 2004): the five signs and their words.
+  it("names every grade and sign apart, the two black grades included", () => {
+    expect(Object.values(DIFFICULTIES).map((d) => d.label)).toEqual(["Easiest", "Easy", "More difficult", "Very difficult", "Extremely difficult"]);
+    expect(Object.values(DIFFICULTIES).map((d) => d.signName)).toEqual(["white circle", "green circle", "blue square", "black diamond", "double black diamond"]);
+    expect(difficultyLabel("extreme")).toBe("Extremely difficult");
+    expect(difficultyLabel("mystery")).toBe("mystery");
+  });
+
+  it("has one label for every trail kind, and words the direction apart from the kind", () => {
+    expect(Object.keys(TRAIL_KINDS)).toEqual([...trailKindValues]);
+    expect(new Set(Object.values(TRAIL_KINDS).map((k) => k.label)).size).toBe(trailKindValues.length);
+    expect(kindLabel("downhill")).toBe("Downhill");
+    expect(directionLabel("downhill")).toBe("Ridden downhill");
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { niceStep, profileChart, ticksBetween } from "@/lib/trails/pure/profile-chart";
+import { elevationAt, niceStep, profileChart, ticksBetween } from "@/lib/trails/pure/profile-chart";
 import { M_PER_FT } from "@/lib/shared/units";
 
 // Axis steps of 1, 2 or 5 × 10^n: Heckbert, "Nice numbers for graph labels", Graphics Gems (1990) — from memory.
@@ -38,6 +38,21 @@ describe("profileChart", () => {
     expect(chart.area.endsWith("Z")).toBe(true);
     expect(chart.summary).toContain("1320 m at the start");
     expect(chart.summary).toContain("2.41 km");
+  });
+
+  it("puts a feature's mark on the line at its distance, the elevation interpolated linearly between points", () => {
+    // 600 m along: halfway from 1320 m to 1000 m, so 1160 m (plain linear interpolation).
+    expect(elevationAt(profile, 600)).toBe(1160);
+    expect(elevationAt(profile, -5)).toBe(1320);
+    expect(elevationAt(profile, 9_999)).toBe(640);
+    const chart = profileChart(profile, "metric", undefined, [{ dM: 600, label: "1" }])!;
+    const { plot } = chart;
+    const x = plot.left + (0.6 / 2.41) * (plot.right - plot.left);
+    const y = plot.bottom - ((1160 - 600) / (1400 - 600)) * (plot.bottom - plot.top);
+    expect(chart.marks).toHaveLength(1);
+    expect(chart.marks[0].label).toBe("1");
+    expect(chart.marks[0].x).toBeCloseTo(x, 0);
+    expect(chart.marks[0].y).toBeCloseTo(y, 0);
   });
 
   it("draws in miles and feet for imperial viewers", () => {

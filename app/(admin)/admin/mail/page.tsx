@@ -1,5 +1,6 @@
 import { usesFakeMail } from "@/lib/server/env";
 import { capturedMail } from "@/lib/server/mail/captured";
+import { formatParkDateTime } from "@/lib/shared/park-clock";
 
 export const metadata = { title: "Sent mail (local)" };
 export const dynamic = "force-dynamic";
@@ -14,10 +15,21 @@ export default async function CapturedMailPage() {
       {messages.length === 0 && <p className="card">No messages yet.</p>}
       <ul className="space-y-3">
         {messages.map((m) => (
-          <li key={m.id} className="card">
+          <li key={m.id} className="card space-y-2" data-testid="captured-mail">
             <p className="font-bold">{m.subject}</p>
-            <p className="text-sm text-loam-600">to {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString("en-GB")}</p>
-            <pre tabIndex={0} aria-label={`Body of ${m.subject}`} className="mt-2 max-h-64 overflow-auto whitespace-pre-wrap rounded bg-loam-50 p-2 text-xs">{m.text}</pre>
+            <p className="text-sm text-loam-600">
+              to {m.to.join(", ")} · {formatParkDateTime(new Date(m.receivedAt))}
+            </p>
+            <pre tabIndex={0} aria-label={`Text of ${m.subject}`} className="max-h-64 overflow-auto whitespace-pre-wrap rounded bg-loam-50 p-2 text-xs">
+              {m.text}
+            </pre>
+            {m.html && (
+              <details>
+                <summary className="min-h-tap cursor-pointer content-center font-semibold">As the rider sees it (HTML)</summary>
+                {/* Sandboxed with nothing allowed: no scripts, no same-origin access; links open nowhere from here. */}
+                <iframe title={`HTML of ${m.subject}`} sandbox="" srcDoc={m.html} className="mt-2 h-96 w-full rounded border border-loam-200 bg-white" />
+              </details>
+            )}
           </li>
         ))}
       </ul>

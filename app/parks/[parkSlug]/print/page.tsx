@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { DifficultyMark } from "@/components/board/difficulty-mark";
+import { DifficultyBadge } from "@/components/difficulty-badge";
 import { StatusLabel } from "@/components/board/status-label";
 import { PrintButton } from "@/components/print/print-button";
 import { boardForPark } from "@/lib/conditions/board";
@@ -67,7 +67,7 @@ export default async function PrintSheetPage({ params }: Props) {
             <tr key={trail.id} className="break-inside-avoid border-b border-loam-300 align-top" data-testid="print-trail">
               <td className="py-2 pr-2">
                 <span className="block text-xl font-bold">{trail.name}</span>
-                <DifficultyMark difficulty={trail.difficulty} />
+                <DifficultyBadge difficulty={trail.difficulty} />
               </td>
               <td className="py-2 pr-2">
                 <StatusLabel status={trail.effectiveStatus} />

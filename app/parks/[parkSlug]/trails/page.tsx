@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { DifficultyBadge } from "@/components/difficulty-badge";
+import { kindLabel } from "@/lib/trails/pure/vocabulary";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
 import { listParkTrails } from "@/lib/trails/queries";
@@ -79,13 +80,13 @@ export default async function ParkTrailsPage({ params, searchParams }: Props) {
               {trails.map((t) => (
                 <tr key={t.id}>
                   <td className="px-1 py-2 sm:px-3">
-                    <DifficultyBadge difficulty={t.difficulty} wrap className="flex-col items-start gap-0.5 text-[11px] leading-tight sm:flex-row sm:items-center sm:text-sm" />
+                    <DifficultyBadge difficulty={t.difficulty} wrap className="flex-col items-start gap-0.5 text-xs leading-tight sm:flex-row sm:items-center sm:text-sm" />
                   </td>
                   <td className="px-1 py-2 sm:px-3">
                     <Link href={`/trails/${t.id}`} className="inline-flex min-h-tap items-center font-semibold text-moss-700 underline underline-offset-4">{t.name}</Link>
-                    <span className="block text-xs text-loam-600 sm:hidden">{t.kind}</span>
+                    <span className="block text-xs text-loam-600 sm:hidden">{kindLabel(t.kind)}</span>
                   </td>
-                  <td className="hidden px-3 py-2 sm:table-cell">{t.kind}</td>
+                  <td className="hidden px-3 py-2 sm:table-cell">{kindLabel(t.kind)}</td>
                   <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{formatDistance(t.lengthM, system)}</td>
                   <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{t.descentM === null ? "—" : formatHeight(t.descentM, system)}</td>
                   <td className="whitespace-nowrap px-1 py-2 text-right tabular-nums sm:px-3">{t.maxGradePct === null ? "—" : formatGrade(t.maxGradePct, 0)}</td>

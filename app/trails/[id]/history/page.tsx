@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { DifficultyMark } from "@/components/board/difficulty-mark";
+import { DifficultyBadge } from "@/components/difficulty-badge";
 import { HistoryTable } from "@/components/history/history-table";
 import { MonthGlance } from "@/components/history/month-glance";
 import { getActor } from "@/lib/server/auth/actor";
@@ -58,7 +58,7 @@ export default async function TrailHistoryPage({ params, searchParams }: Props) 
           </Link>
         </p>
         <h1 className="text-2xl font-bold">{trail.name}: report history</h1>
-        <DifficultyMark difficulty={trail.difficulty} />
+        <DifficultyBadge difficulty={trail.difficulty} />
       </header>
       <MonthGlance month={month} statusByDate={statusByDate} hrefForMonth={(m) => keep({ month: m })} today={today} />
       <section className="card space-y-3" aria-labelledby="reports-title">

@@ -1,4 +1,5 @@
 import type { DeliveryCounts } from "@/lib/notices/notice-queries";
+import { deliveryLine } from "@/lib/notices/pure/delivery-words";
 
 /** Small shared pieces of the notice pages. Status is always written out, never colour alone. */
 const KIND_STYLE: Record<string, string> = {
@@ -12,16 +13,11 @@ export function KindLabel({ kind }: { kind: string }) {
   return <span className={`rounded px-2 py-0.5 text-xs font-bold uppercase tracking-wide ${KIND_STYLE[kind] ?? ""}`}>{KIND_TEXT[kind] ?? kind}</span>;
 }
 
-export const STATE_TEXT: Record<string, string> = { queued: "queued", sending: "sending", retrying: "retrying", sent: "sent", failed: "failed" };
-
 export function DeliverySummary({ recipients, counts }: { recipients: number; counts: DeliveryCounts }) {
   if (recipients === 0) return <p className="text-sm text-loam-700">No subscribed riders matched; nothing was e-mailed.</p>;
-  const waiting = counts.queued + counts.sending + counts.retrying;
   return (
     <p className="text-sm text-loam-700">
-      {recipients} {recipients === 1 ? "rider" : "riders"}: <strong>{counts.sent} sent</strong>
-      {waiting > 0 && <>, {waiting} on the way</>}
-      {counts.failed > 0 && <>, <strong className="text-brick-600">{counts.failed} failed</strong></>}
+      {recipients} {recipients === 1 ? "rider" : "riders"}: <strong>{deliveryLine(counts)}</strong>
     </p>
   );
 }

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { DifficultyMark } from "@/components/board/difficulty-mark";
+import { DifficultyBadge } from "@/components/difficulty-badge";
 import { PrintButton } from "@/components/print/print-button";
 import { boardForPark } from "@/lib/conditions/board";
 import { absoluteUrl } from "@/lib/reach/links";
@@ -42,7 +42,7 @@ export default async function TrailLabelsPage({ params }: Props) {
             <img src={qr} alt={`QR code for ${trail.name}: ${url}`} width={160} height={160} className="mx-auto" />
             <p className="mt-1 text-lg font-bold leading-tight">{trail.name}</p>
             <div className="flex justify-center text-sm">
-              <DifficultyMark difficulty={trail.difficulty} />
+              <DifficultyBadge difficulty={trail.difficulty} />
             </div>
             <p className="text-xs">Scan for today&apos;s status · {board.park.name}</p>
           </li>

@@ -2,11 +2,13 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getActor } from "@/lib/server/auth/actor";
 import { can } from "@/lib/server/auth/permissions";
-import { DELIVERY_STATES, getNotice, listDeliveries } from "@/lib/notices/notice-queries";
+import { getNotice, listDeliveries } from "@/lib/notices/notice-queries";
 import { AppError } from "@/lib/shared/errors";
 import { formatClosedUntil } from "@/lib/notices/compose";
-import { parkLocalDate, parkLocalTime } from "@/lib/shared/park-clock";
-import { KindLabel, STATE_TEXT } from "../notice-bits";
+import { parkLocalDate, parkLocalTime, formatParkDateTime } from "@/lib/shared/park-clock";
+import { FollowDeliveries } from "@/components/notices/follow-deliveries";
+import { deliveryLine, deliveryWord, waitingCount } from "@/lib/notices/pure/delivery-words";
+import { KindLabel } from "../notice-bits";
 import { RetryFailedForm } from "./retry-form";
 
 export const metadata = { title: "Notice deliveries" };
@@ -24,11 +26,17 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
   if (notice.park.slug !== parkSlug) notFound();
   const deliveries = await listDeliveries(notice.id, SHOWN);
   const tz = notice.park.timeZone;
-  const when = (d: Date | null) => (d ? `${parkLocalDate(d, tz)} ${parkLocalTime(d, tz)}` : "");
+  const when = (d: Date | null) => (d ? formatParkDateTime(d, tz) : "");
+  const waiting = waitingCount(notice.deliveries);
   return (
     <section className="space-y-4">
       <p><Link href={`/staff/${parkSlug}/notices`} className="text-sm font-semibold text-moss-700 underline">← Notices</Link></p>
-      {sent && <p role="status" className="rounded-lg bg-moss-100 p-3 font-semibold text-moss-700">Notice queued for {notice.recipientCount} {notice.recipientCount === 1 ? "rider" : "riders"}. The mail worker sends it now; refresh to follow.</p>}
+      <FollowDeliveries waiting={waiting} />
+      {sent && waiting > 0 && (
+        <p role="status" className="rounded-lg bg-moss-100 p-3 font-semibold text-moss-700" data-testid="sending-banner">
+          Sending to {notice.recipientCount} {notice.recipientCount === 1 ? "rider" : "riders"}. This page follows the deliveries by itself.
+        </p>
+      )}
       <div className="card space-y-2">
         <p className="text-sm text-loam-600"><KindLabel kind={notice.kind} /> · {when(notice.createdAt)} · {notice.trails.length > 0 ? notice.trails.map((t) => t.name).join(", ") : "whole park"}</p>
         <h1 className="text-xl font-bold">{notice.subject}</h1>
@@ -41,14 +49,9 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
           <h2 className="text-lg font-bold">Deliveries</h2>
           <Link href={`/staff/${parkSlug}/notices/${notice.id}`} className="btn-quiet">Refresh</Link>
         </div>
-        <dl className="grid grid-cols-3 gap-2 text-center sm:grid-cols-5" data-testid="delivery-counts">
-          {DELIVERY_STATES.map((state) => (
-            <div key={state} className="rounded-lg bg-loam-50 p-2">
-              <dt className="text-xs font-semibold uppercase tracking-wide text-loam-600">{STATE_TEXT[state]}</dt>
-              <dd className="text-xl font-bold" data-state={state}>{notice.deliveries[state]}</dd>
-            </div>
-          ))}
-        </dl>
+        <p className="text-lg font-semibold" aria-live="polite" data-testid="delivery-summary">
+          {deliveryLine(notice.deliveries)}
+        </p>
         {notice.deliveries.failed > 0 && can(actor, "notice:send", { parkId: notice.park.id }) && <RetryFailedForm parkSlug={parkSlug} noticeId={notice.id} failed={notice.deliveries.failed} />}
         {deliveries.length === 0 ? (
           <p className="text-loam-700">Nobody matched this notice, so nothing was e-mailed.</p>
@@ -68,10 +71,10 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
                 {deliveries.map((d) => (
                   <tr key={d.id} className="border-b border-loam-100 align-top">
                     <td className="py-2 pr-2 break-all">{d.email}</td>
-                    <td className="py-2 pr-2 font-semibold">{STATE_TEXT[d.state]}</td>
+                    <td className="py-2 pr-2 font-semibold">{deliveryWord(d.state, d.nextAttemptAt, tz)}</td>
                     <td className="py-2 pr-2">{d.attempts}</td>
                     <td className="py-2 text-loam-700">
-                      {d.state === "sent" ? when(d.sentAt) : d.state === "retrying" ? `next try ${when(d.nextAttemptAt)}. ${d.lastError ?? ""}` : (d.lastError ?? "")}
+                      {d.state === "sent" ? when(d.sentAt) : (d.lastError ?? "")}
                     </td>
                   </tr>
                 ))}

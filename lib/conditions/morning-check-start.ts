@@ -4,7 +4,7 @@ import type { ReportInput } from "@/lib/conditions/pure/schemas";
 import { Trail, type Park } from "@/models";
 import { currentReportsByTrail, latestReportsBefore, parkToday } from "./park-today";
 
-export type SweepTrail = {
+export type CheckTrail = {
   id: string;
   name: string;
   difficulty: string;
@@ -17,10 +17,10 @@ export type SweepTrail = {
   startDate: string | null;
 };
 
-export type SweepStart = { date: string; trails: SweepTrail[] };
+export type MorningCheckStart = { date: string; trails: CheckTrail[] };
 
-/** Everything the sweep screen needs, in three queries whatever the number of trails. */
-export async function sweepStart(park: Park, now = new Date()): Promise<SweepStart> {
+/** Everything the morning-check screen needs, in three queries whatever the number of trails. */
+export async function morningCheckStart(park: Park, now = new Date()): Promise<MorningCheckStart> {
   const date = parkToday(park, now);
   const [trails, today, earlier] = await Promise.all([
     Trail.findAll({ where: { parkId: park.id, archivedAt: null }, attributes: ["id", "name", "difficulty", "kind"], order: [["name", "ASC"]] }),

@@ -1,7 +1,7 @@
 import "server-only";
 /**
- * The morning sweep: every trail a ranger marked, saved in ONE transaction. Either all of it
- * is written or none: one invalid trail or one stale revision refuses the whole sweep, and
+ * The morning check: every trail a ranger marked, saved in ONE transaction. Either all of it
+ * is written or none: one invalid trail or one stale revision refuses the whole check, and
  * the refusal lists every trail that needs attention.
  */
 import { UniqueConstraintError } from "sequelize";
@@ -9,18 +9,19 @@ import type { ZodError } from "zod";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { parkLocalDate } from "@/lib/shared/park-clock";
-import { sweepSchema, type SweepInput } from "@/lib/conditions/pure/schemas";
+import { morningCheckSchema, type MorningCheckInput } from "@/lib/conditions/pure/schemas";
 import { Trail, sequelize, type Park } from "@/models";
-import { closureNoticeHref } from "./pure/notice-link";
+import { offeredNotices, type OfferedNoticeKind, type StatusChange } from "./pure/notice-link";
 import { reportView, type ReportView } from "./report-view";
 import { currentReportView, saveRevision } from "./write-report";
 
-export type SweepProblem = { trailId: string | null; field: string; message: string };
-export type SweepConflict = { trailId: string; trailName: string; current: ReportView | null };
-export type SweepResult = { date: string; saved: ReportView[]; closureNoticeHref: string | null };
+export type CheckProblem = { trailId: string | null; field: string; message: string };
+export type CheckConflict = { trailId: string; trailName: string; current: ReportView | null };
+/** `notices`: a prefilled notice link per kind, offered only for trails this save newly closed or reopened. */
+export type CheckResult = { date: string; saved: ReportView[]; notices: Record<OfferedNoticeKind, string | null> };
 
 /** Zod issues regrouped per trail: "entries.3.report.reason" → trail 3's reason. */
-function problemsFrom(error: ZodError, body: unknown): SweepProblem[] {
+function problemsFrom(error: ZodError, body: unknown): CheckProblem[] {
   const entries = (body as { entries?: { trailId?: unknown }[] })?.entries;
   return error.issues.map((issue) => {
     const [head, index, ...rest] = issue.path;
@@ -32,20 +33,20 @@ function problemsFrom(error: ZodError, body: unknown): SweepProblem[] {
   });
 }
 
-function refuseProblems(problems: SweepProblem[]): never {
+function refuseProblems(problems: CheckProblem[]): never {
   const trails = new Set(problems.map((p) => p.trailId).filter(Boolean)).size;
   const message = trails > 0 ? `${trails} trail${trails === 1 ? "" : "s"} need${trails === 1 ? "s" : ""} attention. Nothing was saved.` : `${problems[0].message} Nothing was saved.`;
   const first = problems[0];
   throw new AppError(400, message, first.field, { problems });
 }
 
-function refuseConflicts(conflicts: SweepConflict[]): never {
+function refuseConflicts(conflicts: CheckConflict[]): never {
   if (!conflicts.length) throw new AppError(409, "Another save reached these trails at the same moment. Nothing was saved; reload and save again.", "baseRevision", { conflicts });
   const names = conflicts.map((c) => c.trailName).join(", ");
-  throw new AppError(409, `Someone else saved ${names} since you opened the sweep. Nothing was saved; check their values and save again.`, "baseRevision", { conflicts });
+  throw new AppError(409, `Someone else saved ${names} since you opened the morning check. Nothing was saved; check their values and save again.`, "baseRevision", { conflicts });
 }
 
-async function loadTrails(park: Park, input: SweepInput): Promise<Map<string, Trail>> {
+async function loadTrails(park: Park, input: MorningCheckInput): Promise<Map<string, Trail>> {
   const ids = input.entries.map((e) => e.trailId);
   const trails = await Trail.findAll({ where: { id: ids, parkId: park.id, archivedAt: null } });
   const byId = new Map(trails.map((t) => [t.id, t]));
@@ -54,40 +55,40 @@ async function loadTrails(park: Park, input: SweepInput): Promise<Map<string, Tr
   return byId;
 }
 
-/** POST /api/parks/{slug}/sweep. */
-export async function saveSweep(actor: Actor | null, park: Park, body: unknown, options: { now?: Date } = {}): Promise<SweepResult> {
+/** POST /api/parks/{slug}/morning-check. */
+export async function saveMorningCheck(actor: Actor | null, park: Park, body: unknown, options: { now?: Date } = {}): Promise<CheckResult> {
   authorize(actor, "report:write", { parkId: park.id });
-  const parsed = sweepSchema.safeParse(body);
+  const parsed = morningCheckSchema.safeParse(body);
   if (!parsed.success) refuseProblems(problemsFrom(parsed.error, body));
   const input = parsed.data;
   const now = options.now ?? new Date();
   const date = parkLocalDate(now, park.timeZone);
   if (input.date && input.date !== date) {
-    throw new AppError(409, `The sweep was for ${input.date}, but it is now ${date} at the park. Reload to start today's sweep; nothing was saved.`, "date");
+    throw new AppError(409, `The morning check was for ${input.date}, but it is now ${date} at the park. Reload to start today's check; nothing was saved.`, "date");
   }
   const trails = await loadTrails(park, input);
-  // A fixed locking order (by trail id) so two overlapping sweeps cannot deadlock.
+  // A fixed locking order (by trail id) so two overlapping checks cannot deadlock.
   const entries = [...input.entries].sort((a, b) => a.trailId.localeCompare(b.trailId));
 
-  let saved: ReportView[];
+  let saved: { report: ReportView; from: StatusChange["from"] }[];
   try {
     saved = await sequelize.transaction(async (transaction) => {
-      const reports: ReportView[] = [];
-      const conflicts: SweepConflict[] = [];
-      const problems: SweepProblem[] = [];
+      const reports: typeof saved = [];
+      const conflicts: CheckConflict[] = [];
+      const problems: CheckProblem[] = [];
       for (const entry of entries) {
         const trail = trails.get(entry.trailId)!;
         const values = entry.unchanged ? ("unchanged" as const) : entry.report!;
         try {
           const result = await saveRevision({ trail, park, actorId: actor.id, date, baseRevision: entry.baseRevision, values, now }, transaction);
-          if (result.ok) reports.push(reportView(result.report));
+          if (result.ok) reports.push({ report: reportView(result.report), from: result.previousStatus });
           else conflicts.push({ trailId: trail.id, trailName: trail.name, current: result.current });
         } catch (error) {
           if (!(error instanceof AppError)) throw error;
           problems.push({ trailId: trail.id, field: error.field ?? "entry", message: error.message });
         }
       }
-      // Throwing inside the callback rolls every revision of this sweep back.
+      // Throwing inside the callback rolls every revision of this check back.
       if (conflicts.length) refuseConflicts(conflicts);
       if (problems.length) refuseProblems(problems);
       return reports;
@@ -95,7 +96,7 @@ export async function saveSweep(actor: Actor | null, park: Park, body: unknown, 
   } catch (error) {
     if (!(error instanceof UniqueConstraintError)) throw error;
     // Another writer inserted a first revision at the same moment: report who is now ahead.
-    const conflicts: SweepConflict[] = [];
+    const conflicts: CheckConflict[] = [];
     for (const entry of entries) {
       const current = await currentReportView(entry.trailId, date);
       if ((current?.revision ?? 0) !== entry.baseRevision) conflicts.push({ trailId: entry.trailId, trailName: trails.get(entry.trailId)!.name, current });
@@ -103,6 +104,6 @@ export async function saveSweep(actor: Actor | null, park: Park, body: unknown, 
     refuseConflicts(conflicts);
   }
 
-  const closed = saved.filter((r) => r.status === "closed").map((r) => ({ id: r.trailId, name: trails.get(r.trailId)!.name, reason: r.reason }));
-  return { date, saved, closureNoticeHref: closed.length ? closureNoticeHref(park.slug, park.name, closed) : null };
+  const changes = saved.map(({ report, from }) => ({ id: report.trailId, name: trails.get(report.trailId)!.name, reason: report.reason, from, to: report.status }));
+  return { date, saved: saved.map((s) => s.report), notices: offeredNotices(park.slug, park.name, changes) };
 }
