@@ -65,7 +65,7 @@ function ReasonRows({ reasons, unit }: { reasons: PressureAnswer["reasons"]; uni
         <tr key={r.id} className="border-t border-loam-200 align-top" data-reason={r.id}>
           <td className="py-2 pr-2 text-loam-900">
             {reasonWords(r.text)}{" "}
-            <a href={`/pressure/how-it-works#rule-${r.id}`} className="whitespace-nowrap text-sm font-semibold text-loam-800 underline" aria-label={`How this rule works: ${reasonWords(r.text).slice(0, 60)}`}>
+            <a href={`/pressure/how-it-works#rule-${r.id}`} className="whitespace-nowrap text-sm font-semibold text-loam-800 underline" aria-label={`How this rule works (${r.id.replace(/-/g, " ")})`}>
               how?
             </a>
           </td>

@@ -44,7 +44,9 @@ export function PressureForm(props: Props) {
   const [errors, setErrors] = useState<DraftErrors>({});
   const [message, setMessage] = useState<string | null>(null);
   const [answer, setAnswer] = useState<PressureAnswer | null>(null);
+  /** A rider's own submit in flight (the button says so and waits); a band computed at once never touches the button. */
   const [busy, setBusy] = useState(false);
+  const [computing, setComputing] = useState(false);
   const resultHeading = useRef<HTMLHeadingElement>(null);
   const formRef = useRef<HTMLFormElement>(null);
   /** Only a rider's own submit moves focus to the band; a band computed at once leaves focus where it is. */
@@ -122,7 +124,7 @@ export function PressureForm(props: Props) {
       return;
     }
     setErrors({});
-    setBusy(true);
+    (byRider ? setBusy : setComputing)(true);
     try {
       const response = await fetch("/api/pressure", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(built.body) });
       const body = await response.json();
@@ -138,7 +140,7 @@ export function PressureForm(props: Props) {
     } catch {
       setMessage("No connection. Nothing you typed was lost; try again.");
     } finally {
-      setBusy(false);
+      (byRider ? setBusy : setComputing)(false);
     }
   }
 
@@ -188,7 +190,7 @@ export function PressureForm(props: Props) {
       </form>
       {/* After the form in reading and Tab order; shown first on a phone once there is a band, beside the form on a desktop. */}
       <div aria-live="polite" className={`${answer ? "order-first" : ""} lg:order-none lg:sticky lg:top-4`}>
-        {answer ? <BandResult ref={resultHeading} answer={answer} /> : busy && setupId ? <p className="card font-semibold">Working out today&apos;s band…</p> : <Cautions cautions={STANDARD_CAUTIONS} />}
+        {answer ? <BandResult ref={resultHeading} answer={answer} /> : computing ? <p className="card font-semibold">Working out today&apos;s band…</p> : <Cautions cautions={STANDARD_CAUTIONS} />}
       </div>
     </div>
   );

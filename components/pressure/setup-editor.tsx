@@ -1,10 +1,12 @@
 "use client";
 /**
  * Create or edit a setup. The shared schema checks it here (live once the rider has tried to
- * save) and again in the route handler; whatever was typed stays put on any error.
+ * save) and again in the route handler; whatever was typed stays put on any error, and focus
+ * moves to the first field in error. "Setup saved" is shown where the rider is: beside the save
+ * button after a save, at the top of the page just after a new setup opens.
  */
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { MassUnit, PressureUnit } from "@/lib/shared/units";
 import { draftErrors, draftFromSetup, emptySetupDraft, parseSetupDraft, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
 import type { SetupInput } from "@/lib/setups/pure/setup-schema";
@@ -24,6 +26,14 @@ export function SetupEditor({ setup, units, justSaved }: Props) {
   const [lockVersion, setLockVersion] = useState(setup?.lockVersion ?? 0);
   const [busy, setBusy] = useState(false);
   const [confirmDelete, setConfirmDelete] = useState(false);
+  const [statusAtTop, setStatusAtTop] = useState(Boolean(justSaved));
+  const formRef = useRef<HTMLFormElement>(null);
+
+  /** Bumped on each refused save: focus moves then, never while live re-checks run as the rider types. */
+  const [refusals, setRefusals] = useState(0);
+  useEffect(() => {
+    if (refusals > 0) formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus();
+  }, [refusals]);
 
   function change(next: SetupDraft) {
     setDraft(next);
@@ -47,10 +57,12 @@ export function SetupEditor({ setup, units, justSaved }: Props) {
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
     setTried(true);
+    setStatusAtTop(false);
     const result = parseSetupDraft(draft);
     if (!result.ok) {
       setErrors(result.errors);
       setStatus({ kind: "error", text: "Check the highlighted fields. Nothing was saved yet." });
+      setRefusals((n) => n + 1);
       return;
     }
     setErrors({});
@@ -66,7 +78,10 @@ export function SetupEditor({ setup, units, justSaved }: Props) {
         return;
       }
       const field = data?.error?.field as string | undefined;
-      if (field && field !== "lockVersion") setErrors(draftErrors([{ path: field.split("."), message: data.error.message }], draft));
+      if (field && field !== "lockVersion") {
+        setErrors(draftErrors([{ path: field.split("."), message: data.error.message }], draft));
+        setRefusals((n) => n + 1);
+      }
       setStatus({ kind: "error", text: data?.error?.message ?? "Not saved. Try again.", reload: response.status === 409 });
     } catch {
       setStatus({ kind: "error", text: "No connection: not saved. What you typed is still here." });
@@ -84,21 +99,26 @@ export function SetupEditor({ setup, units, justSaved }: Props) {
     }
   }
 
+  const statusBox = (
+    <div role={status?.kind === "error" ? "alert" : "status"} aria-live="polite" className={status ? `rounded-lg p-3 font-semibold ${status.kind === "ok" ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}` : "sr-only"}>
+      {status?.text ?? ""}
+      {status?.reload && (
+        <button type="button" className="btn-quiet ml-2" onClick={() => window.location.reload()}>
+          Reload the saved version
+        </button>
+      )}
+    </div>
+  );
+
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label={setup ? `Edit ${setup.name}` : "New setup"}>
+    <form ref={formRef} onSubmit={onSubmit} noValidate className="space-y-4" aria-label={setup ? `Edit ${setup.name}` : "New setup"}>
+      {statusAtTop && statusBox}
       <div className="card">
         <TextInput id="setup-name" label="Name" value={draft.name} onChange={(name) => change({ ...draft, name })} error={errors.name} inputMode="text" hint="For example “Trail bike, winter tyres”." />
       </div>
       <SetupFields idPrefix="setup" draft={draft} errors={errors} onChange={change} />
       <SuspensionFields draft={draft} errors={errors} onChange={change} />
-      <div role={status?.kind === "error" ? "alert" : "status"} aria-live="polite" className={status ? `rounded-lg p-3 font-semibold ${status.kind === "ok" ? "bg-moss-100 text-moss-700" : "bg-brick-100 text-brick-600"}` : "sr-only"}>
-        {status?.text ?? ""}
-        {status?.reload && (
-          <button type="button" className="btn-quiet ml-2" onClick={() => window.location.reload()}>
-            Reload the saved version
-          </button>
-        )}
-      </div>
+      {!statusAtTop && statusBox}
       <button type="submit" className="btn-primary w-full text-lg" disabled={busy}>
         {busy ? "Saving…" : setup ? "Save changes" : "Save setup"}
       </button>

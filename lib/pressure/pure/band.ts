@@ -11,6 +11,7 @@ import { floorAboveMaxCaution, floorCaution, maxCaution } from "./cautions";
 import { pressureAtDropKpa } from "./estimate";
 import {
   ABSOLUTE_FLOOR_KPA,
+  FLOOR_DROP_HARD_HIT_CUT,
   FLOOR_DROP_INSERT_BONUS,
   FLOOR_DROP_TUBELESS,
   FLOOR_DROP_TUBES,
@@ -23,13 +24,13 @@ export type WheelLimits = { floorKpa: number; maxKpa: number };
 /** The lower of the tyre's and the rim's printed maximum. */
 export const ceilingKpa = (wheel: WheelSetup) => Math.min(wheel.maxKpa, wheel.rimMaxKpa ?? Infinity);
 
-/** Drop (fraction of section height) past which rim strikes and burps become likely. */
-export const floorDrop = (wheel: WheelSetup) =>
-  (wheel.tubeless ? FLOOR_DROP_TUBELESS : FLOOR_DROP_TUBES) + (wheel.insert ? FLOOR_DROP_INSERT_BONUS : 0);
+/** Drop (fraction of section height) past which rim strikes and burps become likely; less on a day of square hits. */
+export const floorDrop = (wheel: WheelSetup, hardHits = false) =>
+  (wheel.tubeless ? FLOOR_DROP_TUBELESS : FLOOR_DROP_TUBES) + (wheel.insert ? FLOOR_DROP_INSERT_BONUS : 0) - (hardHits ? FLOOR_DROP_HARD_HIT_CUT : 0);
 
-/** Pressure below which rim strikes and burps become likely for this load and tyre. */
-export function floorKpa(totalMassKg: number, position: WheelPosition, wheel: WheelSetup): number {
-  return Math.max(minimumKpa(wheel), pressureAtDropKpa(totalMassKg, position, wheel, floorDrop(wheel)));
+/** Pressure below which rim strikes and burps become likely for this load and tyre (and the day's worst hits). */
+export function floorKpa(totalMassKg: number, position: WheelPosition, wheel: WheelSetup, hardHits = false): number {
+  return Math.max(minimumKpa(wheel), pressureAtDropKpa(totalMassKg, position, wheel, floorDrop(wheel, hardHits)));
 }
 
 /**
@@ -40,8 +41,8 @@ export function floorKpa(totalMassKg: number, position: WheelPosition, wheel: Wh
 export const minimumKpa = (wheel: WheelSetup) =>
   Math.max(ABSOLUTE_FLOOR_KPA, WHEEL_FLOOR_KPA[wheel.bsdMm] ?? ABSOLUTE_FLOOR_KPA, wheel.minKpa ?? 0);
 
-export const wheelLimits = (totalMassKg: number, position: WheelPosition, wheel: WheelSetup): WheelLimits => ({
-  floorKpa: floorKpa(totalMassKg, position, wheel),
+export const wheelLimits = (totalMassKg: number, position: WheelPosition, wheel: WheelSetup, hardHits = false): WheelLimits => ({
+  floorKpa: floorKpa(totalMassKg, position, wheel, hardHits),
   maxKpa: ceilingKpa(wheel),
 });
 

@@ -18,7 +18,7 @@ import { estimatePressures } from "./estimate";
 import { isNegligible, pairText, wheelsText } from "./format";
 import { pumpConditions, pumpPlan, pumpReasons, type PumpPlan } from "./pump";
 import { todaysTweak } from "./rules";
-import type { PressureResult, Reason, WheelBand, WheelPosition } from "./types";
+import type { PlannedDay, PlannedTrail, PressureResult, Reason, WheelBand, WheelPosition } from "./types";
 
 export type { PressureResult, Reason, WheelBand } from "./types";
 export { PUMP_REASON_PREFIX } from "./types";
@@ -90,8 +90,10 @@ export function computePressureBand(raw: PressureInput | PressureInputRaw): Pres
   };
   // The gauge reads more where the air is thinner: hold the target so the top of the day stays under the maximum.
   const summitRiseKpa = standardPressureKpa(conditions.rideElevationM) - standardPressureKpa(spread.highestElevationM);
+  // The floor takes the worst planned trail: a drop or a rock garden anywhere in the plan lifts it.
+  const hardHit = day.trails.find((t) => t.features.includes("drop") || t.features.includes("rock-garden"));
   const limit = (position: WheelPosition, requested: number) => {
-    const limits = wheelLimits(mass, position, input[position]);
+    const limits = wheelLimits(mass, position, input[position], Boolean(hardHit));
     const held = { ...limits, maxKpa: limits.maxKpa - summitRiseKpa };
     const parts = uncertaintyParts(Math.min(Math.max(requested, held.floorKpa), held.maxKpa), base.kind, spread, base.ridesHalfKpa?.[position]);
     return { ...limitWheel(requested, held, halfWidthKpa(parts), position, unit), parts, printedMaxKpa: limits.maxKpa };
@@ -103,7 +105,7 @@ export function computePressureBand(raw: PressureInput | PressureInputRaw): Pres
   const rearPump = pumpPlan(rear.target.targetKpa, conditions, rear.printedMaxKpa);
 
   const reasons: Reason[] = [
-    ...foldSmall([...base.reasons, ...tweak.reasons, ...limitReasons(front, rear, summitRiseKpa, spread.highestElevationM, unit)], "small-adjustments", unit),
+    ...foldSmall([...base.reasons, ...tweak.reasons, ...limitReasons(front, rear, { summitRiseKpa, highestM: spread.highestElevationM, hardHit: hardHit && hitText(day, hardHit) }, unit)], "small-adjustments", unit),
     ...foldSmall(pumpReasons(frontPump, rearPump, conditions, unit), "pump-small", unit),
   ];
   const cautions = [
@@ -161,12 +163,19 @@ function wheelBand(wheel: LimitedWheel, basisKpa: number, pumpToKpa: number): Wh
   };
 }
 
-function limitReasons(front: LimitedWheel, rear: LimitedWheel, summitRiseKpa: number, highestM: number, unit: PressureUnit): Reason[] {
+/** "the drop on Quarry Drop", or "today's drops" for whole-day conditions. */
+const hitText = (day: PlannedDay, trail: PlannedTrail) =>
+  `${trail.features.includes("drop") ? "drop" : "rock garden"}${day.scope === "day" ? " planned today" : ` on ${trail.name}`}`;
+
+type LimitContext = { summitRiseKpa: number; highestM: number; hardHit: string | false | undefined };
+
+function limitReasons(front: LimitedWheel, rear: LimitedWheel, { summitRiseKpa, highestM, hardHit }: LimitContext, unit: PressureUnit): Reason[] {
   const top = summitRiseKpa > 0.05 ? `, so the gauge stays under it at the top of the day (${Math.round(highestM)} m)` : "";
+  const hit = hardHit ? ` (higher for the ${hardHit})` : "";
   const up = (w: LimitedWheel) => Math.max(0, w.target.adjustmentKpa);
   const down = (w: LimitedWheel) => Math.min(0, w.target.adjustmentKpa);
   const items = [
-    { id: "limit-floor", label: "Held at the floor for rim strikes and burping", f: up(front), r: up(rear) },
+    { id: "limit-floor", label: `Held at the floor for rim strikes and burping${hit}`, f: up(front), r: up(rear) },
     { id: "limit-max", label: `Held at the printed maximum (tyre or rim, whichever is lower)${top}`, f: down(front), r: down(rear) },
   ];
   return items

@@ -37,6 +37,11 @@ export const PACE_FACTOR: Record<Pace, number> = { easy: 0.92, steady: 1, hard: 
 export const FLOOR_DROP_TUBELESS = 0.2;
 export const FLOOR_DROP_TUBES = 0.19;
 export const FLOOR_DROP_INSERT_BONUS = 0.03;
+/**
+ * A planned drop or rock garden lands in square hits: the floor's drop limit comes down by this
+ * share of the tyre's height for the whole day (the worst planned trail counts). Common practice.
+ */
+export const FLOOR_DROP_HARD_HIT_CUT = 0.02;
 /** No tyre is run below this, whatever the model says (≈ 5 psi). Common practice. */
 export const ABSOLUTE_FLOOR_KPA = 35;
 /**

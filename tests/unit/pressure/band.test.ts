@@ -30,6 +30,19 @@ describe("limits", () => {
     expect(floorKpa(3, "front", { ...trailWheel29, minKpa: 150 })).toBe(150);
   });
 
+  it("the floor takes the worst planned trail: a rock garden lifts it, and flow trails beside it do not lower it", () => {
+    const low = { frontKpa: psiToKpa(6), rearKpa: psiToKpa(23), surfaces: ["dry" as const] };
+    const flow = ["A", "B", "C", "D", "E"].map((name) => ({ name, surfaces: ["dry" as const], features: [] }));
+    const rock = { name: "Basalt Chute", surfaces: ["dry" as const], features: ["rock-garden" as const] };
+    const plain = computePressureBand(withBaseline({ baseline: low, today: { trails: flow } }));
+    const alone = computePressureBand(withBaseline({ baseline: low, today: { trails: [rock] } }));
+    const mixed = computePressureBand(withBaseline({ baseline: low, today: { trails: [rock, ...flow] } }));
+    expect(alone.front.targetKpa).toBeGreaterThan(plain.front.targetKpa);
+    expect(mixed.front.targetKpa).toBeCloseTo(alone.front.targetKpa, 6);
+    expect(mixed.reasons.find((r) => r.id === "limit-floor")?.text).toContain("(higher for the rock garden on Basalt Chute)");
+    expect(floorKpa(85, "front", trailWheel29, true)).toBeGreaterThan(floorKpa(85, "front", trailWheel29));
+  });
+
   it("limitTarget reports which limit binds, and the max always wins", () => {
     expect(limitTarget(150, { floorKpa: 100, maxKpa: 200 })).toEqual({ targetKpa: 150, adjustmentKpa: 0, binding: "none" });
     expect(limitTarget(90, { floorKpa: 100, maxKpa: 200 })).toMatchObject({ targetKpa: 100, adjustmentKpa: 10, binding: "floor" });
