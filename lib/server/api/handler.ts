@@ -4,6 +4,7 @@ import type { Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { env } from "@/lib/server/env";
 import { errorResponse } from "./errors";
+import { AuditEvent } from "@/models";
 
 type Context<P> = { params: Promise<P> };
 export type HandlerArgs<P> = { request: Request; params: P; actor: Actor | null };
@@ -34,15 +35,27 @@ export function assertSameOrigin(request: Request) {
  */
 export function handler<P = Record<string, never>>(fn: (args: HandlerArgs<P>) => Promise<Response>) {
   return async (request: Request, context: Context<P>): Promise<Response> => {
+    let actor: Actor | null = null;
     try {
       assertSameOrigin(request);
       const params = context?.params ? await context.params : ({} as P);
-      const actor = await getActor();
+      actor = await getActor();
       return await fn({ request, params, actor });
     } catch (error) {
+      if (error instanceof AppError && error.status === 403) await recordRefusal(request, actor, error.message);
       return errorResponse(error);
     }
   };
+}
+
+/** A refused authorisation or cross-site request goes to the audit log (ASVS v5.0.0 16.3.2); logging never changes the answer. */
+async function recordRefusal(request: Request, actor: Actor | null, reason: string) {
+  try {
+    const data = { method: request.method, path: new URL(request.url).pathname.slice(0, 200), reason };
+    await AuditEvent.create({ parkId: null, actorId: actor?.id ?? null, action: "auth.refused", subjectType: "request", subjectId: null, data });
+  } catch (error) {
+    console.error("[audit] refusal not recorded:", (error as Error).message);
+  }
 }
 
 /** Reads a JSON body, refusing anything that is not JSON or too large. */
