@@ -28,7 +28,9 @@ export function proxy(request: NextRequest) {
     headers.set("content-security-policy", csp);
     response = NextResponse.next({ request: { headers } });
   }
-  response.headers.set("Content-Security-Policy", csp);
+  // A photo carries its own stricter policy (default-src 'none'; sandbox, lib/photos/serve-photo.ts):
+  // setting the page policy here would replace it.
+  if (!pathname.startsWith("/api/photos/")) response.headers.set("Content-Security-Policy", csp);
   const production = (process.env.APP_URL ?? "").startsWith("https://");
   for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) response.headers.set(name, value);
   return response;
