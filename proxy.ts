@@ -36,7 +36,9 @@ export function proxy(request: NextRequest) {
   const production = (process.env.APP_URL ?? "").startsWith("https://");
   // The embeddable card sends its own CSP with the park's frame-ancestors, and no X-Frame-Options.
   const selfFramed = SELF_FRAMED_PATHS.some((p) => pathname.startsWith(p));
-  if (!selfFramed) response.headers.set("Content-Security-Policy", csp);
+  // A photo carries its own stricter policy (default-src 'none'; sandbox, lib/photos/serve-photo.ts),
+  // and the embeddable card its own frame-ancestors: setting the page policy here would replace them.
+  if (!selfFramed && !pathname.startsWith("/api/photos/")) response.headers.set("Content-Security-Policy", csp);
   for (const [name, value] of Object.entries(staticSecurityHeaders({ production }))) {
     if (!(selfFramed && name === "X-Frame-Options")) response.headers.set(name, value);
   }

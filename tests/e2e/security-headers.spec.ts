@@ -35,3 +35,12 @@ test("the session cookie is HttpOnly and SameSite=Lax", async ({ page, context }
   expect(cookie!.httpOnly).toBe(true);
   expect(cookie!.sameSite).toBe("Lax");
 });
+
+test("a photo keeps its own sandboxing CSP; the proxy does not replace it (issue #12 finding 7, ASVS v5.0.0 3.2.1)", async ({ request }) => {
+  const board = await (await request.get("/api/parks/harrow-ridge/board")).json();
+  const photoId = board.trails.flatMap((t: { hazards: { photoIds: string[] }[] }) => t.hazards).find((h: { photoIds: string[] }) => h.photoIds.length > 0).photoIds[0];
+  const photo = await request.get(`/api/photos/${photoId}?size=thumb`);
+  expect(photo.status()).toBe(200);
+  expect(photo.headers()["content-security-policy"]).toBe("default-src 'none'; sandbox");
+  expect(photo.headers()["x-content-type-options"]).toBe("nosniff");
+});
