@@ -43,6 +43,7 @@ export class MatrixFixtures {
   noticeId = "";
   confirmToken = "";
   center = { lon: 0, lat: 0 };
+  private landmarks: Json[] = [];
   private made = { hazards: [] as string[], features: [] as string[], trails: [] as string[], setups: [] as [Caller, string][], subscriptions: [] as [Caller, string][] };
 
   constructor(readonly as: Record<Caller, APIRequestContext>) {}
@@ -61,6 +62,8 @@ export class MatrixFixtures {
     const notice = { kind: "advisory", trailIds: [this.trailId], message: "Matrix check: the authorization matrix is running." };
     this.noticeId = (await okJson(await as.manager.post(`/api/parks/${PARK}/notices`, { data: notice }), "notice")).id;
     this.confirmToken = await this.subscribeAndReadConfirmation();
+    const layers = await okJson(await as.anonymous.get(`/api/parks/${PARK}/park-layers.geojson`), "park layers");
+    this.landmarks = layers.features.filter((f: Json) => f.properties.layer === "landmark");
   }
 
   /** The rider subscribes to the other park afresh and the token is read from the e-mailed link. */
@@ -133,11 +136,34 @@ export class MatrixFixtures {
     return (await okJson(await this.as.manager.get(`/api/parks/${PARK}`), "park settings")).park.lockVersion;
   }
 
-  /** The park's landmarks as they are, as a layer file: uploading it changes nothing a rider sees. */
-  async landmarksFile() {
-    const layers = await okJson(await this.as.anonymous.get(`/api/parks/${PARK}/park-layers.geojson`), "park layers");
-    const features = layers.features.filter((f: Json) => f.properties.layer === "landmark");
-    return { name: "landmarks.geojson", mimeType: "application/geo+json", buffer: Buffer.from(JSON.stringify({ type: "FeatureCollection", features })) };
+  /**
+   * The park's landmarks as they were when the matrix started, as a layer file: the clearing row
+   * empties the layer, the upload row (and cleanUp) put the same shapes back.
+   */
+  landmarksFile() {
+    return { name: "landmarks.geojson", mimeType: "application/geo+json", buffer: Buffer.from(JSON.stringify({ type: "FeatureCollection", features: this.landmarks })) };
+  }
+
+  /**
+   * A new ranger of the park, for the row that removes one: invited by the manager and joined
+   * through the invitation page's server action, posted as the browser posts it (the action id
+   * from the build's server-reference manifest; tests/e2e/server-actions-http.spec.ts shows the encoding).
+   */
+  async freshMember(): Promise<string> {
+    const email = `${unique("matrix-member")}@tests.loamcast.test`;
+    await okJson(await this.as.manager.post(`/api/parks/${PARK}/invitations`, { data: { email, role: "ranger" } }), "invitation");
+    const token = /\/invitations\/([A-Za-z0-9_-]{20,})/.exec((await mailTo(email)).at(-1) ?? "")?.[1];
+    if (!token) throw new Error(`No invitation link in the mail to ${email}`);
+    const manifest = JSON.parse(readFileSync(".next/server/server-reference-manifest.json", "utf8")).node as Record<string, { exportedName: string }>;
+    const [actionId] = Object.entries(manifest).find(([, e]) => e.exportedName === "acceptInvitationAction")!;
+    const multipart = new FormData();
+    for (const [name, value] of Object.entries({ token, name: "Matrix Member", password: "matrix-member-joins-42" })) multipart.append(`_1_${name}`, value);
+    multipart.append("0", JSON.stringify([{ ok: false }, "$K1"]));
+    await this.as.anonymous.post(`/invitations/${token}`, { multipart, headers: { "Next-Action": actionId, Accept: "text/x-component" }, maxRedirects: 0 });
+    const { members } = await okJson(await this.as.manager.get(`/api/parks/${PARK}/staff`), "team");
+    const member = members.find((m: Json) => m.email === email);
+    if (!member) throw new Error(`${email} did not join the team`);
+    return member.userId;
   }
 
   async memberId(caller: Caller): Promise<string> {
@@ -181,6 +207,7 @@ export class MatrixFixtures {
     const rider = (await okJson(await as.rider.get("/api/me/subscriptions"), "subscriptions")).subscriptions as Json[];
     for (const sub of rider.filter((s) => s.park.slug === OTHER_PARK)) await attempt("rider's subscription", () => as.rider.delete(`/api/me/subscriptions/${sub.id}`));
     await attempt("park state", () => as.manager.delete(`/api/parks/${PARK}/state`));
+    if (this.landmarks.length) await attempt("landmarks", () => as.manager.put(`/api/parks/${PARK}/layers/landmarks`, { multipart: { file: this.landmarksFile() } }));
     return failures;
   }
 }
