@@ -92,7 +92,14 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
             latitude={pin.lat}
             offset={offsets[pin.key] ?? [0, 0]}
             draggable
-            onDragEnd={(event: MarkerDragEvent) => onMove(pin.key, event.lngLat.lng, event.lngLat.lat, "drag")}
+            onDragEnd={(event: MarkerDragEvent) => {
+              // MapLibre moves the ground point under the pin's anchor; a spread pin is drawn off
+              // its anchor, so where the finger let go is the anchor plus that offset.
+              const [dx, dy] = offsets[pin.key] ?? [0, 0];
+              const map = mapRef.current;
+              const dropped = map ? map.unproject([map.project(event.lngLat).x + dx, map.project(event.lngLat).y + dy]) : event.lngLat;
+              onMove(pin.key, dropped.lng, dropped.lat, "drag");
+            }}
           >
             {/* The touch target is 44 × 44 px (WCAG 2.2, 2.5.5) whatever the size of the dot drawn inside it. */}
             <button

@@ -57,7 +57,7 @@ test("the park day: upload, invite, check with a closure and a hazard, board and
   await shot(manager, "park-day-1-upload-preview");
   await manager.getByRole("button", { name: "Save trail" }).click();
   await expect(manager).toHaveURL(/\/trails\/[0-9a-f-]{36}$/);
-  await expect(manager.getByRole("heading", { name: trailName })).toBeVisible();
+  await expect(manager.getByRole("heading", { level: 1, name: trailName })).toBeVisible();
   const trailId = manager.url().split("/").at(-1)!;
 
   await manager.goto(`/staff/${PARK}`);

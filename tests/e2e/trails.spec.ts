@@ -28,7 +28,7 @@ test("a manager uploads a GPX, checks the preview, saves it and finds it in the 
   await page.getByRole("button", { name: "Save trail" }).click();
 
   await expect(page).toHaveURL(/\/trails\/[0-9a-f-]{36}$/);
-  await expect(page.getByRole("heading", { name })).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
   await expect(page.getByTestId("elevation-profile")).toBeVisible();
   await expect(page.getByTestId("figure-descent")).toContainText(/\d+ m/);
   await expect(page.getByText("Version 1")).toBeVisible();
