@@ -1,10 +1,15 @@
 // GET /serwist/{path}: the service worker (sw.js) and its source map, bundled at build time by Serwist from lib/client/service-worker.ts (public).
 import { createSerwistRoute } from "@serwist/turbopack";
 
-export const { dynamic, dynamicParams, revalidate, generateStaticParams, GET } = createSerwistRoute({
+const serwist = createSerwistRoute({
   swSrc: "lib/client/service-worker.ts",
   // The native esbuild that tsx already installs; no WebAssembly copy needed.
   useNativeEsbuild: true,
-  // Build files and public/ are precached, except what only staff pages or the seed use.
-  globIgnores: ["public/demo/**"],
 });
+
+// Segment config as literals (Next reads them without running the module); the values Serwist's route uses.
+export const dynamic = "force-static";
+export const dynamicParams = false;
+export const revalidate = false;
+export const generateStaticParams = serwist.generateStaticParams;
+export const GET = serwist.GET;
