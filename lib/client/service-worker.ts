@@ -19,8 +19,8 @@ declare const self: ServiceWorkerGlobalScope;
 const PARK_PAGE = /^\/parks\/[^/]+(\/map)?\/?$/;
 /** The data those pages read: the board, the map style and its GeoJSON sources. */
 const PARK_DATA = /^\/api\/parks\/[^/]+\/(board|map-style\.json|[a-z-]+\.geojson)$/;
-/** Files that never change under the same name. */
-const FIXED_FILES = /^\/(vendor|map\/fonts|icons)\//;
+/** Files that never change under the same name (build files carry a content hash). */
+const FIXED_FILES = /^\/(_next\/static|vendor|map\/fonts|icons)\//;
 
 const days = (n: number) => n * 86_400;
 
@@ -41,7 +41,7 @@ const serwist = new Serwist({
     },
     {
       matcher: ({ url, sameOrigin }) => sameOrigin && FIXED_FILES.test(url.pathname),
-      handler: new CacheFirst({ cacheName: "fixed-files", plugins: [new ExpirationPlugin({ maxEntries: 60, maxAgeSeconds: days(60) })] }),
+      handler: new CacheFirst({ cacheName: "fixed-files", plugins: [new ExpirationPlugin({ maxEntries: 200, maxAgeSeconds: days(60) })] }),
     },
   ],
 });

@@ -29,7 +29,11 @@ test.describe("offline", () => {
     await expect(trails).toHaveCount(count);
     await shot(page, "offline-board");
 
+    // Back online, the page refreshes itself to the current board.
+    const refreshed = page.waitForEvent("framenavigated");
     await context.setOffline(false);
+    await refreshed;
+    await expect(page.getByTestId("offline-note")).toHaveCount(0);
     await page.goto(`/parks/${PARK}/map`);
     await expect(page.locator("canvas.maplibregl-canvas")).toBeVisible({ timeout: 30_000 });
     await cachedByServiceWorker(page, "park-pages", `/parks/${PARK}/map`);
