@@ -38,7 +38,9 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
   // Pins that would overlap at this zoom are drawn apart, each its own 44 px target.
   const [offsets, setOffsets] = useState<Record<string, [number, number]>>({});
   const latestPins = useRef(pins);
-  latestPins.current = pins;
+  useEffect(() => {
+    latestPins.current = pins;
+  });
   const respread = useCallback(() => {
     const map = mapRef.current;
     if (!map) return;

@@ -5,7 +5,6 @@ import { HazardForm } from "@/components/hazards/hazard-form";
 import { ResolveHazardButton } from "@/components/hazards/resolve-button";
 import { openHazards, trailChoices } from "@/lib/hazards/hazard-queries";
 import { requireParkAccess } from "@/lib/parks/queries";
-import { Park } from "@/models";
 import { formatParkDateTime } from "@/lib/shared/park-clock";
 import { formatDistance } from "@/lib/trails/pure/geo";
 import { boundsAround } from "@/lib/map/pure/bounds";

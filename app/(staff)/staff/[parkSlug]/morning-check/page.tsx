@@ -7,7 +7,6 @@ import { getActor } from "@/lib/server/auth/actor";
 import { activeParkState } from "@/lib/conditions/park-state";
 import { requireParkAccess } from "@/lib/parks/queries";
 import { morningCheckStart } from "@/lib/conditions/morning-check-start";
-import { Park } from "@/models";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Morning check" };
