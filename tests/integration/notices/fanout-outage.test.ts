@@ -1,20 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { drainDue, processBatch } from "@/lib/notices/delivery-worker";
 import { sendNotice } from "@/lib/notices/send-notice";
-import { NoticeDelivery, sequelize } from "@/models";
-import { createSubscribers, fastWorker, messageIdOf, parkWithStaff, pause, privateSmtp, removeCreatedParks, stateCounts } from "./fixtures";
+import { NoticeDelivery } from "@/models";
+import { createSubscribers, fastWorker, messageIdOf, parkWithStaff, pause, privateSmtpForFile, stateCounts } from "./fixtures";
 
 // Faults: stop the mail server during a notice and start it again; every subscriber gets
 // exactly one e-mail (security.md, "Reliability practice"). Counting is by Message-ID at the server.
-let smtp: Awaited<ReturnType<typeof privateSmtp>>;
-beforeAll(async () => {
-  smtp = await privateSmtp();
-});
-afterAll(async () => {
-  await removeCreatedParks();
-  await smtp.server.close();
-  await sequelize.close();
-});
+const smtp = privateSmtpForFile();
 
 const messagesOf = (noticeId: string) => smtp.server.messages.filter((m) => messageIdOf(m.raw)?.startsWith(`<notice-${noticeId}.`));
 

@@ -1,10 +1,11 @@
+import { afterAll, beforeAll } from "vitest";
 import net from "node:net";
 import { randomUUID } from "node:crypto";
 import { loadActor } from "@/lib/server/auth/actor";
 import { startFakeSmtp } from "@/scripts/fakes/smtp-server";
 import { workerDefaults, type WorkerOptions } from "@/lib/notices/delivery-worker";
 import { createNoticeTransport } from "@/lib/notices/notice-transport";
-import { NoticeDelivery, Park, Subscription, Trail, User } from "@/models";
+import { NoticeDelivery, Park, Subscription, Trail, User, sequelize } from "@/models";
 import { addStaff, createPark, createUser } from "../helpers";
 
 /** Shared set-up for the notice tests: parks with staff, many subscribers, a private fake SMTP server. */
@@ -26,6 +27,35 @@ export async function privateSmtp() {
   const server = await startFakeSmtp({ smtpPort, controlPort });
   const smtpUrl = `smtp://127.0.0.1:${smtpPort}`;
   return { server, smtpUrl, controlUrl: `http://127.0.0.1:${controlPort}`, transport: (maxConnections = 4) => createNoticeTransport({ smtpUrl, maxConnections }) };
+}
+
+type PrivateSmtp = Awaited<ReturnType<typeof privateSmtp>>;
+
+/**
+ * One notice test file's own fake SMTP server: started before its tests, stopped after them with
+ * the file's parks removed and the pool closed. Read through getters, so `smtp.server` is the
+ * running server inside any test.
+ */
+export function privateSmtpForFile(): PrivateSmtp {
+  let smtp: PrivateSmtp | undefined;
+  beforeAll(async () => {
+    smtp = await privateSmtp();
+  });
+  afterAll(async () => {
+    await removeCreatedParks();
+    await smtp?.server.close();
+    await sequelize.close();
+  });
+  const running = () => {
+    if (!smtp) throw new Error("The fake SMTP server starts in beforeAll: read it inside a test.");
+    return smtp;
+  };
+  return {
+    get server() { return running().server; },
+    get smtpUrl() { return running().smtpUrl; },
+    get controlUrl() { return running().controlUrl; },
+    transport: (maxConnections?: number) => running().transport(maxConnections),
+  };
 }
 
 export const messageIdOf = (raw: string) => /^Message-ID:\s*(<[^>\r\n]+>)/im.exec(raw)?.[1] ?? null;

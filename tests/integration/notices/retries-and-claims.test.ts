@@ -1,21 +1,13 @@
 import { spawn } from "node:child_process";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { getNotice, listDeliveries } from "@/lib/notices/notice-queries";
 import { drainDue, processBatch } from "@/lib/notices/delivery-worker";
 import { retryFailedDeliveries, sendNotice } from "@/lib/notices/send-notice";
 import { AppError } from "@/lib/shared/errors";
-import { NoticeDelivery, sequelize } from "@/models";
-import { createSubscribers, fastWorker, messageIdOf, parkWithStaff, pause, privateSmtp, removeCreatedParks, stateCounts } from "./fixtures";
+import { NoticeDelivery } from "@/models";
+import { createSubscribers, fastWorker, messageIdOf, parkWithStaff, pause, privateSmtpForFile, stateCounts } from "./fixtures";
 
-let smtp: Awaited<ReturnType<typeof privateSmtp>>;
-beforeAll(async () => {
-  smtp = await privateSmtp();
-});
-afterAll(async () => {
-  await removeCreatedParks();
-  await smtp.server.close();
-  await sequelize.close();
-});
+const smtp = privateSmtpForFile();
 
 const messagesOf = (noticeId: string) => smtp.server.messages.filter((m) => messageIdOf(m.raw)?.startsWith(`<notice-${noticeId}.`));
 

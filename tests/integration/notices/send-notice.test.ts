@@ -1,22 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { loadActor } from "@/lib/server/auth/actor";
 import { AppError } from "@/lib/shared/errors";
 import { drainDue } from "@/lib/notices/delivery-worker";
 import { NOTICES_PER_PARK_PER_HOUR, previewNotice, sendNotice } from "@/lib/notices/send-notice";
-import { AuditEvent, Notice, NoticeDelivery, Park, User, sequelize } from "@/models";
+import { AuditEvent, Notice, NoticeDelivery, Park, User } from "@/models";
 import { createUser } from "../helpers";
-import { createSubscribers, createTrail, fastWorker, messageIdOf, parkWithStaff, privateSmtp, removeCreatedParks } from "./fixtures";
+import { createSubscribers, createTrail, fastWorker, messageIdOf, parkWithStaff, privateSmtpForFile } from "./fixtures";
 
-let smtp: Awaited<ReturnType<typeof privateSmtp>>;
-beforeAll(async () => {
-  smtp = await privateSmtp();
-});
-afterAll(async () => {
-  await removeCreatedParks();
-  await smtp.server.close();
-  await sequelize.close();
-});
+const smtp = privateSmtpForFile();
 
 const closure = { kind: "closure", message: "Closed after last night's rain. We will look again at noon." };
 const errorOf = (promise: Promise<unknown>) => promise.then(() => null, (e) => e);

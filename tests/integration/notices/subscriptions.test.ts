@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { loadActor } from "@/lib/server/auth/actor";
 import { signToken } from "@/lib/server/auth/tokens";
 import { AppError } from "@/lib/shared/errors";
@@ -6,19 +6,11 @@ import { drainDue } from "@/lib/notices/delivery-worker";
 import { confirmToken, unsubscribeToken } from "@/lib/notices/link-tokens";
 import { sendNotice } from "@/lib/notices/send-notice";
 import { confirmSubscription, describeUnsubscribe, listSubscriptions, removeSubscription, saveSubscription, unsubscribeByToken } from "@/lib/notices/subscriptions";
-import { Subscription, sequelize } from "@/models";
+import { Subscription } from "@/models";
 import { capturedMessages, createUser } from "../helpers";
-import { createTrail, fastWorker, linkIn, messageIdOf, parkWithStaff, privateSmtp, removeCreatedParks, tokenOf } from "./fixtures";
+import { createTrail, fastWorker, linkIn, messageIdOf, parkWithStaff, privateSmtpForFile, tokenOf } from "./fixtures";
 
-let smtp: Awaited<ReturnType<typeof privateSmtp>>;
-beforeAll(async () => {
-  smtp = await privateSmtp();
-});
-afterAll(async () => {
-  await removeCreatedParks();
-  await smtp.server.close();
-  await sequelize.close();
-});
+const smtp = privateSmtpForFile();
 
 async function newRider() {
   return (await loadActor((await createUser()).id))!;
