@@ -126,3 +126,24 @@ build_if_needed() {
     node_modules/.bin/next build
   fi
 }
+
+# The first half of `npm start` and `npm run dev`: packages, environment, PostgreSQL migrated and
+# seeded, the fakes and the notice worker. Everything started is stopped on exit, Ctrl-C or SIGTERM.
+start_local_services() {
+  ensure_node_modules
+  load_env dev
+  port_free_or_die "$PORT" "the web app (set PORT to use another)"
+  cleanup() {
+    trap - EXIT INT TERM
+    say "› Stopping…"
+    stop_children
+    pg_stop dev
+    say "› Stopped. Your data is kept for the next start."
+  }
+  trap cleanup EXIT INT TERM
+  pg_start dev "$PG_PORT" "$PG_PASSWORD"
+  node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
+  start_fake_smtp
+  start_fake_s3
+  if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
+}
