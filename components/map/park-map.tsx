@@ -7,7 +7,7 @@ import { LAYER_IDS, SOURCE_IDS } from "@/lib/map/pure/layer-ids";
 import { nearestTrail } from "@/lib/map/pure/nearest-trail";
 import type { TrailMapProperties } from "@/lib/map/pure/schemas";
 import { LayerToggles } from "./layer-toggles";
-import { exposeMapForTests, maplibregl } from "./maplibre-setup";
+import { baseMapProps, exposeMapForTests } from "./maplibre-setup";
 import { HazardCard, TrailCard } from "./trail-card";
 import { useMapState } from "./use-map-state";
 
@@ -61,10 +61,7 @@ export default function ParkMap({ styleUrl, bounds, timeZone, trails, hazards }:
       <div className="relative h-[62vh] min-h-80 overflow-hidden rounded-xl border border-loam-300" data-testid="park-map" data-map-state={state}>
         <Map
           ref={mapRef}
-          mapLib={maplibregl}
-          mapStyle={styleUrl}
-          initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
-          style={{ width: "100%", height: "100%" }}
+          {...baseMapProps(styleUrl, bounds)}
           interactiveLayerIds={INTERACTIVE}
           cursor={cursor}
           onMouseEnter={() => setCursor("pointer")}
@@ -73,9 +70,6 @@ export default function ParkMap({ styleUrl, bounds, timeZone, trails, hazards }:
           onLoad={(event) => exposeMapForTests(event.target)}
           onIdle={onIdle}
           onError={onError}
-          dragRotate={false}
-          pitchWithRotate={false}
-          touchPitch={false}
         >
           <NavigationControl position="top-right" showCompass={false} />
           <GeolocateControl position="top-right" trackUserLocation showAccuracyCircle />

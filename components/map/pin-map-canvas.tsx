@@ -3,7 +3,7 @@ import { useCallback, useEffect, useRef, useState, type KeyboardEvent } from "re
 import Map, { Marker, NavigationControl, type MapLayerMouseEvent, type MapRef, type MarkerDragEvent } from "react-map-gl/maplibre";
 import { spreadOffsets } from "@/lib/map/pure/spread-pins";
 import type { Bounds } from "@/lib/map/pure/bounds";
-import { exposeMapForTests, maplibregl } from "./maplibre-setup";
+import { baseMapProps, exposeMapForTests } from "./maplibre-setup";
 import { useMapState } from "./use-map-state";
 
 export type CanvasPin = { key: string; lon: number; lat: number; label: string; look: "feature" | "hazard" | "pick" };
@@ -70,10 +70,7 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
     <div className="relative h-[60vh] min-h-80 overflow-hidden rounded-xl border border-loam-300" data-testid="pin-map" data-map-state={state} aria-label={label} role="group">
       <Map
         ref={mapRef}
-        mapLib={maplibregl}
-        mapStyle={styleUrl}
-        initialViewState={{ bounds, fitBoundsOptions: { padding: 28 } }}
-        style={{ width: "100%", height: "100%" }}
+        {...baseMapProps(styleUrl, bounds)}
         onClick={onMapClick}
         onLoad={(event) => {
           for (const id of hideLayers) if (event.target.getLayer(id)) event.target.setLayoutProperty(id, "visibility", "none");
@@ -83,8 +80,6 @@ export default function PinMapCanvas({ styleUrl, bounds, pins, selectedKey, onSe
         onMoveEnd={respread}
         onIdle={onIdle}
         onError={onError}
-        dragRotate={false}
-        touchPitch={false}
       >
         <NavigationControl position="top-right" showCompass={false} />
         {pins.map((pin) => (
