@@ -4,7 +4,7 @@ import { DifficultyBadge } from "@/components/difficulty-badge";
 import { StatusLabel } from "@/components/board/status-label";
 import { describeFeatures, FEATURE_LABELS, FEATURE_STATE_LABELS, STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
 import { applyChange, draftFromStart, type DraftChange, type CheckDraft } from "@/lib/conditions/pure/check-draft";
-import { FEATURE_STATES, STATUSES, SURFACES, type FeatureKind, type ReportStatus, type Surface } from "@/lib/conditions/pure/vocabulary";
+import { FEATURE_STATES, STATUSES, SURFACES, type FeatureGroup, type ReportStatus, type Surface } from "@/lib/conditions/pure/vocabulary";
 import type { CheckTrail } from "@/lib/conditions/morning-check-start";
 import { formatCalendarDate } from "@/lib/shared/park-clock";
 import { ToggleGroup } from "./toggle-group";
@@ -140,7 +140,7 @@ export function CheckTrailRow(props: {
               Berms, jumps, wooden features{describeFeatures(draft.features) ? <span className="font-normal text-loam-700">: {describeFeatures(draft.features)}</span> : null}
             </summary>
             <div className="mt-2 space-y-3">
-              {(Object.keys(FEATURE_STATES) as FeatureKind[]).map((kind) => (
+              {(Object.keys(FEATURE_STATES) as FeatureGroup[]).map((kind) => (
                 <ToggleGroup
                   key={kind}
                   name={`${id}-${kind}`}

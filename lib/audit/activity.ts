@@ -3,7 +3,7 @@ import { Op } from "sequelize";
 import { AuditEvent, User } from "@/models";
 import { describeSetupEvent, SETUP_ACTIONS } from "./pure/describe-setup";
 
-export type StatusChange = {
+export type StatusChangeEntry = {
   id: number;
   at: string;
   actorName: string | null;
@@ -18,7 +18,7 @@ export type StatusChange = {
 export const ACTIVITY_PAGE_SIZE = 100;
 
 /** The audit log of trail status changes for one park, newest first, in pages (before = an event id). */
-export async function statusChanges(parkId: string, options: { before?: number } = {}): Promise<{ changes: StatusChange[]; olderBefore: number | null }> {
+export async function statusChanges(parkId: string, options: { before?: number } = {}): Promise<{ changes: StatusChangeEntry[]; olderBefore: number | null }> {
   const rows = await AuditEvent.findAll({
     where: { parkId, action: "report.status-change", ...(options.before ? { id: { [Op.lt]: options.before } } : {}) },
     order: [["id", "DESC"]],

@@ -2,7 +2,7 @@
  * the morning-check screen's working state for one trail, and the request entry it becomes.
  * Pure and zod-free: the screen imports it, unit tests check it.
  */
-import type { FeatureKind, FeatureStates, ReportStatus, Surface } from "./vocabulary";
+import type { FeatureGroup, FeatureStates, ReportStatus, Surface } from "./vocabulary";
 
 export type DraftMode = "untouched" | "unchanged" | "edited";
 export type CheckDraft = {
@@ -34,7 +34,7 @@ export type DraftChange =
   | { type: "status"; status: ReportStatus }
   | { type: "reason"; reason: string }
   | { type: "surface"; surface: Surface; on: boolean }
-  | { type: "feature"; feature: FeatureKind; state: string | null }
+  | { type: "feature"; feature: FeatureGroup; state: string | null }
   | { type: "note"; note: string };
 
 /** Any control touched makes the trail "edited"; moving to open clears the reason. */

@@ -15,6 +15,7 @@ export const PARK_STATES = ["closed", "delayed", "advisory"] as const;
 
 export type ReportStatus = (typeof STATUSES)[number];
 export type Surface = (typeof SURFACES)[number];
-export type FeatureKind = keyof typeof FEATURE_STATES;
-export type FeatureStates = { [K in FeatureKind]?: (typeof FEATURE_STATES)[K][number] };
+/** The built features a morning check reports a state for (berms, jumps, wood), not the kinds of a trail's features. */
+export type FeatureGroup = keyof typeof FEATURE_STATES;
+export type FeatureStates = { [K in FeatureGroup]?: (typeof FEATURE_STATES)[K][number] };
 export type ParkStateKind = (typeof PARK_STATES)[number];
