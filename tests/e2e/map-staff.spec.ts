@@ -22,8 +22,18 @@ test("a ranger drags a feature on the staff map, it snaps onto its trail, and Un
   await page.goto(`/staff/${PARK}/map`);
   await openMap(page, `/staff/${PARK}/map`, "pin-map");
   const before = await features(page.request);
-  const pin = page.locator('[data-pin^="feature:"]').first();
-  const id = (await pin.getAttribute("data-pin"))!.split(":")[1];
+  // A pin the finger can reach: where pins crowd at park zoom, another pin's 44 px target may lie on
+  // top of this one's centre, and the drag would move that one instead.
+  const key = await page.evaluate(() => {
+    for (const el of document.querySelectorAll<HTMLElement>('[data-pin^="feature:"]')) {
+      const r = el.getBoundingClientRect();
+      if (document.elementFromPoint(r.x + r.width / 2, r.y + r.height / 2)?.closest("[data-pin]") === el) return el.dataset.pin!;
+    }
+    return null;
+  });
+  expect(key, "a feature pin that is not covered by another").not.toBeNull();
+  const pin = page.locator(`[data-pin="${key}"]`);
+  const id = key!.split(":")[1];
   const original = before.find((f) => f.properties.id === id)!;
 
   // Drag the pin along its trail (a drag straight across the line would snap back to where it was):
