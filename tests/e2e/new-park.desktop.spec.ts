@@ -139,12 +139,13 @@ test.describe.serial("a park of our own", () => {
   test("4. the rangers join; one posts the first morning check", async ({ browser }) => {
     ranger = await join(browser, email("ranger"), "Rafe Loamsworth", parkName);
     leaver = await join(browser, email("leaver"), "Lio Seasonal", parkName);
-    await ranger.goto(`/staff/${slug}/sweep`);
-    const card = ranger.getByTestId("sweep-trail").first();
+    await ranger.goto(`/staff/${slug}/morning-check`);
+    const card = ranger.getByTestId("check-trail").first();
+    await card.getByRole("button", { name: "Change", exact: true }).click();
     await card.getByRole("radio", { name: "Open" }).click();
     await card.getByRole("checkbox", { name: "tacky", exact: true }).check();
     await ranger.getByRole("button", { name: "Save 1 trail" }).click();
-    await expect(ranger.getByTestId("sweep-outcome")).toContainText("Saved 1 trail.");
+    await expect(ranger.getByTestId("check-outcome")).toContainText("Saved 1 trail.");
     await shot(ranger, "new-park-4-first-check");
   });
 

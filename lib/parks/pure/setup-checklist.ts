@@ -20,7 +20,7 @@ export function setupChecklist(slug: string, f: SetupFacts): SetupItem[] {
     { key: "ground", label: "Draw the park's ground", done: f.groundLayers > 0, href: `${staff}/settings#ground-heading`, hint: "Boundary, lifts, roads and landmarks as GeoJSON." },
     { key: "trail", label: "Upload the first trail", done: f.trails > 0, href: `${staff}/trails/new`, hint: "A GPX or GeoJSON line from a ride or a survey." },
     { key: "team", label: "Invite the team", done: f.members > 1, href: `${staff}/team`, hint: "Rangers post the morning check; managers run the park." },
-    { key: "check", label: "Post the first morning check", done: f.reports > 0, href: `${staff}/sweep`, hint: "Open, caution or close each trail for the day." },
+    { key: "check", label: "Post the first morning check", done: f.reports > 0, href: `${staff}/morning-check`, hint: "Open, caution or close each trail for the day." },
     { key: "subscriber", label: "Welcome the first subscriber", done: f.subscribers > 0, href: `/parks/${slug}`, hint: "Share the board's link: riders sign up there for closure e-mails." },
   ];
 }
