@@ -66,8 +66,14 @@ test("the demo rider picks a saved setup and today's trails, and sees band, reas
   await page.getByRole("button", { name: "None" }).click();
   await page.getByLabel("Tumblewire").check();
   await page.getByLabel("Gnarlroot").check();
-  // …and follows the day as the trails change.
-  await expect(page.getByTestId("band-result")).toContainText("Harrow Ridge Bike Park, 2 trails. Ground: tacky on 2.");
+  // …and follows the day as the trails change: the ground line names today's reported surfaces of
+  // those two trails (other journeys report on them earlier in the run, so read them from the board).
+  await expect(page.getByTestId("band-result")).toContainText("Harrow Ridge Bike Park, 2 trails. Ground:");
+  const board = (await (await page.request.get("/api/parks/harrow-ridge/board")).json()) as { trails: { name: string; inspectedToday: boolean; surfaces: string[] }[] };
+  const planned = board.trails.filter((t) => (t.name === "Tumblewire" || t.name === "Gnarlroot") && t.inspectedToday);
+  const surfaces = new Set(planned.flatMap((t) => t.surfaces));
+  expect(surfaces.size).toBeGreaterThan(0);
+  for (const surface of surfaces) await expect(page.getByTestId("band-result")).toContainText(`${surface} on `);
   const reasons = page.getByTestId("reasons");
   const ridesRow = reasons.locator("tr[data-reason^=basis-rides]");
   await expect(ridesRow).toContainText(/From \d+ of your rides on this setup/);
