@@ -65,6 +65,7 @@ export function CheckTrailRow(props: {
       data-testid="check-trail"
       data-trail-name={trail.name}
       data-mode={draft.mode}
+      data-last-state={trail.start ? "known" : "none"}
     >
       <div className="flex items-start justify-between gap-2">
         <div className="min-w-0">
