@@ -1,7 +1,7 @@
 import path from "node:path";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { demo, shot, signInAs } from "./helpers";
-import { linkIn, mailTo, readable } from "./mail-helpers";
+import { linkIn, mailTo, readable, signUpAndProve } from "./mail-helpers";
 
 /**
  * A new park starts on Loamcast, on a phone and a desktop: the admin creates it and invites its
@@ -178,8 +178,7 @@ test.describe.serial("a park of our own", () => {
 
   test("6. a rider subscribes, and the map shows the ground and the trail", async ({ page }) => {
     const riderEmail = email("rider");
-    const signup = await page.request.post("/api/account", { data: { name: "Runa Brakeless", email: riderEmail, password: PASSWORD } });
-    expect(signup.status()).toBe(201);
+    await signUpAndProve(page, { name: "Runa Brakeless", email: riderEmail, password: PASSWORD });
     await signInAs(page, riderEmail, PASSWORD);
     await page.goto(`/me/subscriptions?park=${slug}`);
     await page.getByRole("button", { name: "Send me these e-mails" }).click();
