@@ -29,21 +29,43 @@ DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/tsx --conditions=reac
 start_fake_smtp
 rm -rf .local/test-results && mkdir -p .local/test-results
 
+# `npm test -- tests/unit/x.test.ts tests/e2e/y.spec.ts` runs only the stages those paths belong to, on
+# those files (browser paths also build). With no paths, everything runs.
+UNIT_FILES=(); INTEGRATION_FILES=(); E2E_FILES=()
+for path in "$@"; do
+  case "$path" in
+    tests/unit*) UNIT_FILES+=("$path") ;;
+    tests/integration*) INTEGRATION_FILES+=("$path") ;;
+    tests/e2e*) E2E_FILES+=("$path") ;;
+    *) echo "✗ $path is not under tests/unit, tests/integration or tests/e2e" >&2; exit 2 ;;
+  esac
+done
+SELECTED=$#
+
 declare -A RESULT
 run_step() {
   local name="$1"; shift
+  if [ "$SELECTED" -gt 0 ] && ! wanted "$name"; then RESULT[$name]=skipped; return; fi
   say "━━ $name"
   if "$@"; then RESULT[$name]=pass; else RESULT[$name]=FAIL; fi
+}
+wanted() {
+  case "$1" in
+    unit) [ ${#UNIT_FILES[@]} -gt 0 ] ;;
+    integration) [ ${#INTEGRATION_FILES[@]} -gt 0 ] ;;
+    build|browser) [ ${#E2E_FILES[@]} -gt 0 ] ;;
+    *) return 1 ;;
+  esac
 }
 
 run_step lint node scripts/lint/run.mjs --report .local/test-results/lint.json
 run_step typecheck node_modules/.bin/tsc --noEmit
-run_step unit node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile=.local/test-results/unit.json
+run_step unit node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile=.local/test-results/unit.json "${UNIT_FILES[@]}"
 # Integration tests get a database of their own, so what they create never shows in the browser tests.
-run_step integration env DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile=.local/test-results/integration.json
+run_step integration env DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile=.local/test-results/integration.json "${INTEGRATION_FILES[@]}"
 run_step build node_modules/.bin/next build
-if [ "${RESULT[build]}" = pass ]; then
-  run_step browser node_modules/.bin/playwright test
+if [ "${RESULT[build]}" != FAIL ]; then
+  run_step browser node_modules/.bin/playwright test "${E2E_FILES[@]}"
 else
   RESULT[browser]=FAIL
 fi
@@ -63,6 +85,6 @@ node scripts/test-summary.mjs
 status=0
 for step in lint typecheck unit integration build browser s3; do
   printf '  %-12s %s\n' "$step" "${RESULT[$step]}"
-  [ "${RESULT[$step]}" = pass ] || status=1
+  [ "${RESULT[$step]}" = pass ] || [ "${RESULT[$step]}" = skipped ] || status=1
 done
 exit $status
