@@ -11,6 +11,7 @@ import { ParkLayerVersion } from "./park-layer-version";
 import { ParkMembership } from "./park-membership";
 import { ParkState } from "./park-state";
 import { Photo } from "./photo";
+import { PushSubscription } from "./push-subscription";
 import { RequestCount } from "./request-count";
 import { RideLog } from "./ride-log";
 import { Setup } from "./setup";
@@ -52,6 +53,8 @@ RideLog.belongsTo(Setup, { foreignKey: "setupId", as: "setup" });
 User.hasMany(Subscription, { foreignKey: "userId", as: "subscriptions" });
 Subscription.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Subscription.belongsTo(User, { foreignKey: "userId", as: "user" });
+User.hasMany(PushSubscription, { foreignKey: "userId", as: "pushSubscriptions" });
+PushSubscription.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Notice.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Notice.hasMany(NoticeDelivery, { foreignKey: "noticeId", as: "deliveries" });
 NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
@@ -70,6 +73,7 @@ export {
   ParkMembership,
   ParkState,
   Photo,
+  PushSubscription,
   RequestCount,
   RideLog,
   Setup,

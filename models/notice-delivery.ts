@@ -2,13 +2,20 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from "@/models/db";
 
 export type DeliveryState = "queued" | "sending" | "sent" | "retrying" | "failed";
+export type DeliveryChannel = "email" | "push";
 
-/** One notice to one rider. Unique per (notice, user); claimed before each send so it goes out once. */
+/**
+ * One notice to one rider by one channel: an e-mail (unique per notice and rider) or a push to one
+ * browser (unique per notice and push subscription). Claimed before each send so it goes out once.
+ */
 export class NoticeDelivery extends Model<InferAttributes<NoticeDelivery>, InferCreationAttributes<NoticeDelivery>> {
   declare id: CreationOptional<string>;
   declare noticeId: string;
   declare userId: string;
   declare email: string;
+  declare channel: CreationOptional<DeliveryChannel>;
+  /** The browser a push goes to; null for e-mail, and once the push service said it is gone. */
+  declare pushSubscriptionId: CreationOptional<string | null>;
   declare state: CreationOptional<DeliveryState>;
   declare attempts: CreationOptional<number>;
   declare lastError: CreationOptional<string | null>;
@@ -27,6 +34,8 @@ NoticeDelivery.init(
     noticeId: { type: DataTypes.UUID, allowNull: false },
     userId: { type: DataTypes.UUID, allowNull: false },
     email: { type: DataTypes.STRING(254), allowNull: false },
+    channel: { type: DataTypes.STRING(8), allowNull: false, defaultValue: "email" },
+    pushSubscriptionId: { type: DataTypes.UUID, allowNull: true },
     state: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "queued" },
     attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     lastError: { type: DataTypes.STRING(500), allowNull: true },

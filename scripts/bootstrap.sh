@@ -33,6 +33,16 @@ ensure_secrets() {
     } > .local/secrets.env
     chmod 600 .local/secrets.env
   fi
+  # Web Push (VAPID, RFC 8292): a P-256 key pair, base64url. Appended, so a secrets.env from before
+  # push alerts keeps its other secrets (changing them would end every session).
+  if ! grep -q '^GENERATED_VAPID_PRIVATE_KEY=' .local/secrets.env; then
+    node -e '
+      const { generateKeyPairSync } = require("crypto");
+      const jwk = generateKeyPairSync("ec", { namedCurve: "prime256v1" }).privateKey.export({ format: "jwk" });
+      const raw = Buffer.concat([Buffer.from([4]), Buffer.from(jwk.x, "base64url"), Buffer.from(jwk.y, "base64url")]);
+      console.log("GENERATED_VAPID_PUBLIC_KEY=" + raw.toString("base64url") + "\nGENERATED_VAPID_PRIVATE_KEY=" + jwk.d);
+    ' >> .local/secrets.env
+  fi
   # shellcheck disable=SC1091
   . .local/secrets.env
 }
@@ -42,16 +52,16 @@ load_env() {
   local purpose="$1"
   if [ -f .env ]; then set -a; . ./.env; set +a; fi
   ensure_secrets
-  local pg_port smtp_port control_port db app_port s3_port
+  local pg_port smtp_port control_port db app_port s3_port push_port
   # LOAMCAST_PORT_OFFSET moves every port at once, so several clones can test side by side.
   local off=${LOAMCAST_PORT_OFFSET:-0}
   if [ "$purpose" = "test" ]; then
-    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}; s3_port=$((4567 + off))
+    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}; s3_port=$((4567 + off)); push_port=$((4701 + off))
   elif [ "$purpose" = "bench" ]; then
     # Its own cluster and database, so `npm run bench` never meets a test run's data (or its pg_stop).
-    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off)); s3_port=$((4568 + off))
+    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off)); s3_port=$((4568 + off)); push_port=$((4702 + off))
   else
-    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}; s3_port=$((4566 + off))
+    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}; s3_port=$((4566 + off)); push_port=$((4700 + off))
   fi
   export LOAMCAST_PURPOSE="$purpose" PG_PORT="$pg_port" PORT="$app_port"
   export PG_PASSWORD="${PG_PASSWORD:-$GENERATED_PG_PASSWORD}"
@@ -64,6 +74,9 @@ load_env() {
   if [ -z "${SMTP_URL:-}" ]; then
     export SMTP_URL="smtp://127.0.0.1:${smtp_port}" FAKE_SMTP_CONTROL_URL="http://127.0.0.1:${control_port}"
   fi
+  export VAPID_PUBLIC_KEY="${VAPID_PUBLIC_KEY:-$GENERATED_VAPID_PUBLIC_KEY}" VAPID_PRIVATE_KEY="${VAPID_PRIVATE_KEY:-$GENERATED_VAPID_PRIVATE_KEY}"
+  # The local fake push service runs unless FAKE_PUSH_URL is set empty (then only real push services are reached).
+  [ -n "${FAKE_PUSH_URL+set}" ] || export FAKE_PUSH_URL="http://127.0.0.1:${push_port}"
   export PHOTO_STORAGE_DIR="${PHOTO_STORAGE_DIR:-.local/photos-${purpose}}"
   # PHOTO_STORAGE=s3 without an S3_ENDPOINT of your own: the local fake S3 server (s3rver) is started and used.
   S3_FAKE_PORT="$s3_port"
@@ -98,6 +111,18 @@ start_fake_smtp() {
     sleep 0.2
   done
   echo "✗ The fake SMTP server did not start" >&2; exit 1
+}
+
+start_fake_push() {
+  [ -n "${FAKE_PUSH_URL:-}" ] || return 0
+  port_free_or_die "$(node -e 'console.log(new URL(process.env.FAKE_PUSH_URL).port)')" "fake push service"
+  node --conditions=react-server --import tsx scripts/fake-push.ts &
+  CHILD_PIDS+=($!)
+  for _ in $(seq 1 50); do
+    node -e 'fetch(process.env.FAKE_PUSH_URL + "/control/received").then(r => process.exit(r.ok ? 0 : 1), () => process.exit(1))' && return 0
+    sleep 0.2
+  done
+  echo "✗ The fake push service did not start" >&2; exit 1
 }
 
 start_fake_s3() {
@@ -144,6 +169,7 @@ start_local_services() {
   pg_start dev "$PG_PORT" "$PG_PASSWORD"
   node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
   start_fake_smtp
+  start_fake_push
   start_fake_s3
   if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 }

@@ -96,3 +96,18 @@ ${until ? `<p><strong>Closed until:</strong> ${e(until)}</p>` : ""}
   };
   return { subject, text, html, headers };
 }
+
+/** A phone shows a few lines of an alert; the whole message is on the board it opens. */
+export const PUSH_BODY_MAX = 300;
+
+/** What the service worker receives and shows (lib/client/service-worker.ts reads these fields). */
+export type NoticePushPayload = { title: string; body: string; url: string; tag: string };
+
+/** The push alert for a notice: far under the 4,096 bytes every push service must accept (RFC 8030 §7.2). */
+export function composeNoticePush(input: Pick<NoticeEmailInput, "park" | "subject" | "message" | "closedUntil" | "appUrl"> & { noticeId: string }): NoticePushPayload {
+  const message = input.message.replace(/\s+/g, " ").trim();
+  const until = input.closedUntil ? ` Closed until ${formatClosedUntil(input.closedUntil, input.park.timeZone)}.` : "";
+  const room = PUSH_BODY_MAX - until.length;
+  const body = (message.length <= room ? message : `${message.slice(0, room - 1).trimEnd()}…`) + until;
+  return { title: headerSafe(input.subject), body, url: `${input.appUrl}/parks/${encodeURIComponent(input.park.slug)}`, tag: `notice-${input.noticeId}` };
+}

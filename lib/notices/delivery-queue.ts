@@ -8,7 +8,17 @@ import { sequelize } from "@/models";
  * hold the same row. Every state change checks the claim, so a worker whose claim was
  * taken over (it stalled past the stale timeout) cannot overwrite the new owner's result.
  */
-export type ClaimedDelivery = { id: string; noticeId: string; userId: string; email: string; attempts: number; messageId: string };
+export type ClaimedDelivery = {
+  id: string;
+  noticeId: string;
+  userId: string;
+  email: string;
+  attempts: number;
+  messageId: string;
+  channel: "email" | "push";
+  /** Push only: the browser's subscription, null once it was removed. */
+  pushSubscriptionId: string | null;
+};
 
 /**
  * Claims up to `limit` due rows: queued or retrying rows whose time has come, and rows left
@@ -26,7 +36,8 @@ export async function claimDue(workerId: string, limit: number, staleMs: number,
          ORDER BY next_attempt_at
          LIMIT $2
          FOR UPDATE SKIP LOCKED)
-      RETURNING d.id, d.notice_id AS "noticeId", d.user_id AS "userId", d.email, d.attempts, d.message_id AS "messageId"`,
+      RETURNING d.id, d.notice_id AS "noticeId", d.user_id AS "userId", d.email, d.attempts, d.message_id AS "messageId",
+                d.channel, d.push_subscription_id AS "pushSubscriptionId"`,
     { bind: [workerId, limit, staleMs, maxAttempts], type: QueryTypes.SELECT },
   );
 }

@@ -3,11 +3,12 @@ import { hostname } from "node:os";
 import { randomBytes } from "node:crypto";
 import type { Transporter } from "nodemailer";
 import { env } from "@/lib/server/env";
-import { Notice, Park } from "@/models";
-import { composeNoticeEmail } from "./compose";
+import { Notice, Park, PushSubscription } from "@/models";
+import { composeNoticeEmail, composeNoticePush } from "./compose";
 import { claimDue, failExhaustedStaleClaims, markFailed, markRetrying, markSent, type ClaimedDelivery } from "./delivery-queue";
 import { subscriptionLinks, unsubscribeToken } from "./link-tokens";
-import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, type RetryPolicy } from "./pure/retry-policy";
+import { afterFailure, classifyPushError, classifySendError, DEFAULT_RETRY_POLICY, type RetryPolicy } from "./pure/retry-policy";
+import { createPushSender, vapidFromEnv, type PushSender } from "./push-sender";
 
 /**
  * Sends queued notice deliveries: claim a batch, send each (a few at a time), settle each
@@ -16,6 +17,8 @@ import { afterFailure, classifySendError, DEFAULT_RETRY_POLICY, type RetryPolicy
 export type WorkerOptions = {
   workerId: string;
   transport: Transporter;
+  /** Sends push deliveries; by default signed with the VAPID keys of the environment. */
+  push?: PushSender;
   batchSize: number;
   /** Messages in flight; the transport's pool holds those waiting for a connection. */
   concurrency: number;
@@ -51,7 +54,7 @@ async function loadContexts(noticeIds: string[]): Promise<Map<string, NoticeCont
   return new Map(noticeIds.flatMap((id) => (contextCache.has(id) ? [[id, contextCache.get(id)!] as const] : [])));
 }
 
-async function sendOne(row: ClaimedDelivery, context: NoticeContext, options: WorkerOptions) {
+async function sendEmail(row: ClaimedDelivery, context: NoticeContext, options: WorkerOptions) {
   const appUrl = options.appUrl ?? env().APP_URL;
   const links = subscriptionLinks(appUrl);
   const token = unsubscribeToken(row.userId, context.park.id);
@@ -75,6 +78,31 @@ async function sendOne(row: ClaimedDelivery, context: NoticeContext, options: Wo
   });
 }
 
+let pushFromEnv: PushSender | undefined;
+function defaultPushSender(): PushSender {
+  const vapid = vapidFromEnv();
+  if (!vapid) throw Object.assign(new Error("Push alerts are not set up on this server (no VAPID keys)."), { statusCode: 500 });
+  return (pushFromEnv ??= createPushSender(vapid));
+}
+
+/** A subscription removed before its push went out counts as gone (404): nothing left to send to. */
+const subscriptionGone = () => Object.assign(new Error("This browser's alerts were turned off before the push went out."), { statusCode: 404 });
+
+async function sendPush(row: ClaimedDelivery, context: NoticeContext, target: PushSubscription | undefined, options: WorkerOptions) {
+  if (!target) throw subscriptionGone();
+  const { notice, park } = context;
+  const payload = composeNoticePush({ park, subject: notice.subject, message: notice.message, closedUntil: notice.closedUntil, appUrl: options.appUrl ?? env().APP_URL, noticeId: notice.id });
+  await (options.push ?? defaultPushSender())(target, JSON.stringify(payload));
+}
+
+/** The browsers of the push rows in a batch, by subscription id (a removed one is simply absent). */
+async function loadPushTargets(rows: ClaimedDelivery[]): Promise<Map<string, PushSubscription>> {
+  const ids = rows.flatMap((r) => (r.channel === "push" && r.pushSubscriptionId ? [r.pushSubscriptionId] : []));
+  if (ids.length === 0) return new Map();
+  const subs = await PushSubscription.findAll({ where: { id: ids }, useMaster: true });
+  return new Map(subs.map((s) => [s.id, s]));
+}
+
 /** Runs `work` over `items` with at most `limit` in flight; rethrows the first error once all lanes stop. */
 async function eachLimited<T>(items: T[], limit: number, work: (item: T) => Promise<void>) {
   let next = 0;
@@ -93,14 +121,15 @@ export async function processBatch(options: WorkerOptions): Promise<BatchResult>
   const rows = await claimDue(options.workerId, options.batchSize, options.staleClaimMs, options.retry.maxAttempts);
   result.claimed = rows.length;
   if (rows.length === 0) return result;
-  const contexts = await loadContexts([...new Set(rows.map((r) => r.noticeId))]);
+  const [contexts, pushTargets] = await Promise.all([loadContexts([...new Set(rows.map((r) => r.noticeId))]), loadPushTargets(rows)]);
 
   await eachLimited(rows, options.concurrency, async (row) => {
     const context = contexts.get(row.noticeId);
     let sendError: unknown = null;
     try {
-      if (!context) throw Object.assign(new Error("The notice no longer exists."), { responseCode: 550 });
-      await sendOne(row, context, options);
+      if (!context) throw Object.assign(new Error("The notice no longer exists."), { responseCode: 550, statusCode: 404 });
+      if (row.channel === "push") await sendPush(row, context, pushTargets.get(row.pushSubscriptionId ?? ""), options);
+      else await sendEmail(row, context, options);
     } catch (error) {
       sendError = error ?? new Error("unknown send error");
     }
@@ -111,7 +140,11 @@ export async function processBatch(options: WorkerOptions): Promise<BatchResult>
       else result.lost++;
       return;
     }
-    const outcome = afterFailure(row.attempts, classifySendError(sendError), options.retry, new Date(), options.random);
+    const failure = row.channel === "push" ? classifyPushError(sendError) : classifySendError(sendError);
+    // 404/410: the browser unsubscribed or its subscription expired (RFC 8030 §7.3); forget it, so
+    // no later notice tries it again. Its deliveries stay, failed, for staff to see.
+    if (failure.gone && row.pushSubscriptionId) await PushSubscription.destroy({ where: { id: row.pushSubscriptionId } });
+    const outcome = afterFailure(row.attempts, failure, options.retry, new Date(), options.random);
     const settled =
       outcome.state === "failed"
         ? await markFailed(row.id, options.workerId, outcome.lastError)

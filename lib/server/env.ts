@@ -27,6 +27,12 @@ const envSchema = z.object({
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("false"),
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** Web Push (RFC 8292): the application server's P-256 key pair, base64url, and a contact for push services. */
+  VAPID_PUBLIC_KEY: z.string().regex(/^[A-Za-z0-9_-]{87}$/, "an uncompressed P-256 public key, base64url").optional(),
+  VAPID_PRIVATE_KEY: z.string().regex(/^[A-Za-z0-9_-]{43}$/, "a P-256 private key, base64url").optional(),
+  VAPID_SUBJECT: z.string().regex(/^(mailto:|https:)/, "a mailto: or https: contact").default("mailto:no-reply@loamcast.test"),
+  /** The local fake push service (npm start and npm test run it); browsers' endpoints here may be plain http. */
+  FAKE_PUSH_URL: z.string().url().optional(),
   MAP_STYLE_URL: z.string().url().optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SECURE_COOKIES: z.enum(["true", "false"]).optional(),

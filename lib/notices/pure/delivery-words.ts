@@ -28,3 +28,8 @@ export function deliveryLine(c: Counts): string {
   const shown = parts.filter(([n]) => n > 0).map(([n, word]) => `${n} ${word}`);
   return shown.length ? shown.join(" · ") : "nothing to deliver";
 }
+
+export type DeliveryChannelName = "email" | "push";
+
+/** How a delivery travels, in the words beside each row on the staff page. */
+export const CHANNEL_WORDS: Record<DeliveryChannelName, string> = { email: "e-mail", push: "alert on a browser" };

@@ -24,7 +24,8 @@ export function retryDelayMs(attempt: number, policy: RetryPolicy, random: () =>
   return Math.round(step / 2 + (step / 2) * random());
 }
 
-export type SendFailure = { permanent: boolean; summary: string };
+/** `gone`: the push service says the browser's subscription no longer exists (remove it). */
+export type SendFailure = { permanent: boolean; summary: string; gone?: boolean };
 
 /**
  * SMTP replies 5xx are permanent (the address or message is refused: retrying will not help);
@@ -36,6 +37,21 @@ export function classifySendError(error: unknown): SendFailure {
   const text = String(e.message ?? error ?? "unknown error").replace(/\s+/g, " ").trim();
   const summary = [code ? `SMTP ${code}` : e.code, text].filter(Boolean).join(": ").slice(0, 500);
   return { permanent: code !== undefined && code >= 500 && code < 600, summary };
+}
+
+/**
+ * A push service's answer (RFC 8030 §5, §7.3; RFC 8292 §4): 404 or 410, the subscription is gone
+ * (we remove it); 429 (too many requests) and 5xx are temporary; any other 4xx (a refused VAPID
+ * token, a payload too large) is permanent. No status: a network error, temporary.
+ */
+export function classifyPushError(error: unknown): SendFailure {
+  const e = (error ?? {}) as { statusCode?: number; code?: string; message?: string; cause?: { code?: string } };
+  const status = typeof e.statusCode === "number" ? e.statusCode : undefined;
+  const text = String(e.message ?? error ?? "unknown error").replace(/\s+/g, " ").trim();
+  const summary = [status ? `Push ${status}` : (e.code ?? e.cause?.code), text].filter(Boolean).join(": ").slice(0, 500);
+  if (status === 404 || status === 410) return { permanent: true, gone: true, summary: `${summary.slice(0, 400)} (this browser's alerts have ended; it was removed)` };
+  const temporary = status === undefined || status === 429 || status >= 500;
+  return { permanent: !temporary, summary };
 }
 
 export type AfterFailure = { state: "retrying"; nextAttemptAt: Date; lastError: string } | { state: "failed"; lastError: string };

@@ -56,3 +56,28 @@ export type SubscriptionFields = z.infer<typeof subscriptionFields>;
 
 /** Signed link tokens arrive in a query string; anything else is refused before verifying. */
 export const linkToken = z.string().trim().min(20, "This link is incomplete.").max(1000, "This link is not valid.");
+
+/** base64url text of exactly `bytes` bytes (no padding), as browsers give push keys (RFC 8291 §3). */
+const base64urlOf = (bytes: number, what: string) =>
+  z.string().regex(/^[A-Za-z0-9_-]+$/, `${what} is not base64url.`).length(Math.ceil((bytes * 4) / 3), `${what} must be ${bytes} bytes.`);
+
+/** What PushSubscription.toJSON() gives in a browser: endpoint and the two keys. */
+export const browserPushSubscription = z.object({
+  endpoint: z.url({ message: "The browser gave no usable push address." }).max(1000, "The browser's push address is too long."),
+  keys: z.strictObject({
+    // An uncompressed P-256 point (65 bytes) and a 16-byte auth secret (RFC 8291 §3.1, §3.2).
+    p256dh: base64urlOf(65, "The browser's push key"),
+    auth: base64urlOf(16, "The browser's push secret"),
+  }),
+  // Browsers add this; we do not use it.
+  expirationTime: z.number().nullable().optional(),
+});
+
+/** Subscribe one browser: the park and its choice of trails and kinds, as for e-mail. */
+export const pushSubscriptionFields = z.strictObject({
+  parkSlug: subscriptionFields.shape.parkSlug,
+  trailIds: trailIds.default(null),
+  kinds: subscriptionFields.shape.kinds,
+  subscription: browserPushSubscription,
+});
+export type PushSubscriptionFields = z.infer<typeof pushSubscriptionFields>;
