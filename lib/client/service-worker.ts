@@ -4,9 +4,11 @@
  * needs at breakfast with one bar of signal: the app shell (precached build files), the boards and
  * maps of the parks they opened, and each map's style, GeoJSON and worker. Everything it serves
  * from a cache is a GET a rider could read anyway; it never touches staff or account pages, and
- * never queues a write (POSTs go to the network, and fail visibly offline).
+ * never queues a write (POSTs go to the network, and fail visibly offline). It also shows the
+ * push alerts of the parks a rider asked for (push, notificationclick).
  */
 import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry, type SerwistGlobalConfig } from "serwist";
+import { readPushAlert, sameOriginUrl } from "@/lib/notices/pure/push-alert";
 
 declare global {
   interface WorkerGlobalScope extends SerwistGlobalConfig {
@@ -47,3 +49,25 @@ const serwist = new Serwist({
 });
 
 serwist.addEventListeners();
+
+// A push must always show a notification (browsers require it of userVisibleOnly subscriptions).
+self.addEventListener("push", (event) => {
+  const alert = readPushAlert(event.data?.text(), self.location.origin);
+  event.waitUntil(
+    self.registration.showNotification(alert.title, { body: alert.body, tag: alert.tag, data: { url: alert.url }, icon: "/icons/icon-192.png", badge: "/icons/icon-192.png" }),
+  );
+});
+
+// A tap opens the park's board: an open tab of it is focused rather than a second one opened.
+self.addEventListener("notificationclick", (event) => {
+  event.notification.close();
+  const url = sameOriginUrl(event.notification.data?.url, self.location.origin);
+  event.waitUntil(
+    (async () => {
+      const windows = await self.clients.matchAll({ type: "window", includeUncontrolled: true });
+      const open = windows.find((w) => w.url === url);
+      if (open) return open.focus();
+      return self.clients.openWindow(url);
+    })(),
+  );
+});

@@ -2,6 +2,7 @@ import "server-only";
 import { headerSafe } from "@/lib/server/mail/transport";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
 import { escapeHtml } from "@/lib/shared/text";
+import type { PushAlert } from "@/lib/notices/pure/push-alert";
 
 /**
  * The notice e-mail, built from parts only: the subject is ours (park and trail names,
@@ -100,11 +101,9 @@ ${until ? `<p><strong>Closed until:</strong> ${e(until)}</p>` : ""}
 /** A phone shows a few lines of an alert; the whole message is on the board it opens. */
 export const PUSH_BODY_MAX = 300;
 
-/** What the service worker receives and shows (lib/client/service-worker.ts reads these fields). */
-export type NoticePushPayload = { title: string; body: string; url: string; tag: string };
 
-/** The push alert for a notice: far under the 4,096 bytes every push service must accept (RFC 8030 §7.2). */
-export function composeNoticePush(input: Pick<NoticeEmailInput, "park" | "subject" | "message" | "closedUntil" | "appUrl"> & { noticeId: string }): NoticePushPayload {
+/** The push alert for a notice (read by the service worker, lib/notices/pure/push-alert.ts): far under the 4,096 bytes every push service must accept (RFC 8030 §7.2). */
+export function composeNoticePush(input: Pick<NoticeEmailInput, "park" | "subject" | "message" | "closedUntil" | "appUrl"> & { noticeId: string }): PushAlert {
   const message = input.message.replace(/\s+/g, " ").trim();
   const until = input.closedUntil ? ` Closed until ${formatClosedUntil(input.closedUntil, input.park.timeZone)}.` : "";
   const room = PUSH_BODY_MAX - until.length;

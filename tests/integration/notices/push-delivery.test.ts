@@ -5,7 +5,8 @@ import { sendNotice } from "@/lib/notices/send-notice";
 import { NoticeDelivery, PushSubscription } from "@/models";
 import { vapidProblem } from "@/scripts/fakes/push-server";
 import { createSubscribers, fastWorker, parkWithStaff, pause, privateSmtpForFile, stateCounts } from "./fixtures";
-import { decryptPush, privatePushForFile, pushesTo, pushSenderFor, subscribeBrowser, testVapid } from "./push-fixtures";
+import { decryptPush } from "@/scripts/fakes/push-browser";
+import { privatePushForFile, pushesTo, pushSenderFor, subscribeBrowser, testVapid } from "./push-fixtures";
 
 // Push alerts through the same queue as e-mail: one delivery per notice and browser, retried
 // through an outage of the push service, never sent twice, and a 410 removes the browser.
