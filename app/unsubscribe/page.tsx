@@ -15,7 +15,7 @@ export default async function UnsubscribePage({ searchParams }: { searchParams: 
     return (
       <section className="card space-y-2" data-testid="unsubscribe-invalid">
         <h1 className="text-2xl font-bold">This link does not work</h1>
-        <p>It is incomplete, altered or too old. Sign in and choose your e-mails on <Link href="/me/subscriptions" className="underline">Trail notices by e-mail</Link>.</p>
+        <p>It is incomplete, altered or too old. Sign in and choose your e-mails on <Link href="/me/subscriptions" className="underline">Trail notices</Link>.</p>
       </section>
     );
   }

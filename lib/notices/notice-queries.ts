@@ -3,7 +3,7 @@ import { QueryTypes } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
 import { isUuid } from "@/lib/shared/ids";
-import type { DeliveryState } from "@/models/notice-delivery";
+import type { DeliveryChannel, DeliveryState } from "@/models/notice-delivery";
 import { Notice, NoticeDelivery, Park, Trail, sequelize } from "@/models";
 
 /** Reads for the notice pages and API, each checking the caller for the notice's park. */
@@ -68,7 +68,7 @@ export async function listDeliveries(noticeId: string, limit = 200) {
     ],
     limit,
   });
-  return rows.map((d) => ({ id: d.id, email: d.email, state: d.state, attempts: d.attempts, lastError: d.lastError, sentAt: d.sentAt, nextAttemptAt: d.nextAttemptAt }));
+  return rows.map((d) => ({ id: d.id, email: d.email, channel: d.channel as DeliveryChannel, state: d.state, attempts: d.attempts, lastError: d.lastError, sentAt: d.sentAt, nextAttemptAt: d.nextAttemptAt }));
 }
 
 /** The park's trails (not archived), for choosing in forms. */

@@ -1,3 +1,4 @@
+import { randomBytes, randomUUID } from "node:crypto";
 import { readFileSync } from "node:fs";
 import type { APIRequestContext, APIResponse } from "@playwright/test";
 import { CALLER_EMAIL, type Caller } from "./api-callers";
@@ -44,7 +45,7 @@ export class MatrixFixtures {
   confirmToken = "";
   center = { lon: 0, lat: 0 };
   private landmarks: Json[] = [];
-  private made = { hazards: [] as string[], features: [] as string[], trails: [] as string[], setups: [] as [Caller, string][], subscriptions: [] as [Caller, string][] };
+  private made = { hazards: [] as string[], features: [] as string[], trails: [] as string[], setups: [] as [Caller, string][], subscriptions: [] as [Caller, string][], pushSubscriptions: [] as [Caller, string][] };
 
   constructor(readonly as: Record<Caller, APIRequestContext>) {}
 
@@ -115,6 +116,17 @@ export class MatrixFixtures {
   }
 
   /** The rider's subscription to the other park (created again after each delete). */
+  /** A browser's push subscription as the browser gives it, its endpoint at the local fake push service. */
+  pushSubscriptionBody() {
+    const endpoint = `${process.env.FAKE_PUSH_URL}/push/matrix-${randomUUID()}`;
+    return { parkSlug: OTHER_PARK, trailIds: null, kinds: ["closure"], subscription: { endpoint, expirationTime: null, keys: { p256dh: Buffer.concat([Buffer.from([4]), randomBytes(64)]).toString("base64url"), auth: randomBytes(16).toString("base64url") } } };
+  }
+
+  async freshPushSubscription(): Promise<string> {
+    const saved = await okJson(await this.as.rider.post("/api/me/push-subscriptions", { data: this.pushSubscriptionBody() }), "push subscribe");
+    return saved.subscription.id;
+  }
+
   async freshSubscription(): Promise<string> {
     const saved = await okJson(await this.as.rider.post("/api/me/subscriptions", { data: { parkSlug: OTHER_PARK, trailIds: null, kinds: ["advisory"] } }), "subscribe");
     return saved.subscription.id;
@@ -181,7 +193,7 @@ export class MatrixFixtures {
     this.made[`${kind}s`].push(id);
   }
 
-  trackOwn(kind: "setup" | "subscription", caller: Caller, id: string) {
+  trackOwn(kind: "setup" | "subscription" | "pushSubscription", caller: Caller, id: string) {
     this.made[`${kind}s`].push([caller, id]);
   }
 
@@ -204,6 +216,7 @@ export class MatrixFixtures {
     for (const id of this.made.trails) await attempt(`trail ${id}`, () => as.manager.delete(`/api/trails/${id}`));
     for (const [caller, id] of this.made.setups) await attempt(`setup ${id}`, () => as[caller].delete(`/api/me/setups/${id}`));
     for (const [caller, id] of this.made.subscriptions) await attempt(`subscription ${id}`, () => as[caller].delete(`/api/me/subscriptions/${id}`));
+    for (const [caller, id] of this.made.pushSubscriptions) await attempt(`push subscription ${id}`, () => as[caller].delete(`/api/me/push-subscriptions/${id}`));
     const rider = (await okJson(await as.rider.get("/api/me/subscriptions"), "subscriptions")).subscriptions as Json[];
     for (const sub of rider.filter((s) => s.park.slug === OTHER_PARK)) await attempt("rider's subscription", () => as.rider.delete(`/api/me/subscriptions/${sub.id}`));
     await attempt("park state", () => as.manager.delete(`/api/parks/${PARK}/state`));

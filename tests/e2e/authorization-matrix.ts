@@ -142,6 +142,15 @@ export const MATRIX: MatrixRow[] = [
     made: (fx, c, body) => fx.trackOwn("subscription", c, body.subscription.id),
   },
   { method: "DELETE", route: "/api/me/subscriptions/[subscriptionId]", expect: ownerOnly(204), call: async (fx) => ({ path: `/api/me/subscriptions/${await fx.freshSubscription()}` }) },
+  { method: "GET", route: "/api/me/push-subscriptions", expect: signedIn(200), call: () => ({ path: "/api/me/push-subscriptions" }) },
+  {
+    method: "POST",
+    route: "/api/me/push-subscriptions",
+    expect: signedIn(201),
+    call: (fx) => ({ path: "/api/me/push-subscriptions", data: fx.pushSubscriptionBody() }),
+    made: (fx, c, body) => fx.trackOwn("pushSubscription", c, body.subscription.id),
+  },
+  { method: "DELETE", route: "/api/me/push-subscriptions/[pushSubscriptionId]", expect: ownerOnly(204), call: async (fx) => ({ path: `/api/me/push-subscriptions/${await fx.freshPushSubscription()}` }) },
 
   // Trails: staff of the park write.
   { method: "POST", route: "/api/parks/[parkSlug]/trails/preview", expect: parkStaff(200), call: () => ({ path: `/api/parks/${PARK}/trails/preview`, multipart: { file: gpxFile() } }) },

@@ -13,6 +13,9 @@ const NOT_A_UUID = "0123456789abcdef0123456789abcdef0123"; // 36 characters of h
 const FAKE_UUIDS = (n: number) => Array.from({ length: n }, (_, i) => `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`);
 const valid = setupBody("Hostile check");
 const notice = { kind: "advisory", trailIds: null, message: "Hostile input check" };
+// A browser's push subscription with its endpoint replaced: the worker would POST to it.
+const pushKeys = { p256dh: `B${"A".repeat(86)}`, auth: "A".repeat(22) };
+const pushBody = (endpoint: string, keys: Record<string, string> = pushKeys) => ({ parkSlug: "harrow-ridge", trailIds: null, kinds: ["closure"], subscription: { endpoint, keys } });
 const hazardFields = { kind: "other", lon: "-121.94", lat: "47.3" };
 /** A FormData keeps a field named "__proto__" (an object literal would set the prototype instead). */
 function formOf(fields: Record<string, string>): FormData {
@@ -92,12 +95,23 @@ export const BODY_CASES: HostileCase[] = [
   { name: "a malformed notice id to retry", as: "manager", method: "POST", path: () => `/api/notices/${NOT_A_UUID}/retry`, expect: 404 },
   { name: "a malformed hazard id", as: "parkRanger", method: "PATCH", path: () => `/api/hazards/${NOT_A_UUID}`, json: () => ({ lockVersion: 0, resolved: true }), expect: 404 },
   { name: "a malformed subscription id", as: "rider", method: "DELETE", path: () => `/api/me/subscriptions/${NOT_A_UUID}`, expect: 404 },
+  { name: "a malformed push subscription id", as: "rider", method: "DELETE", path: () => `/api/me/push-subscriptions/${NOT_A_UUID}`, expect: 404 },
+
+  // Push endpoints the worker must never POST to: our own network, plain http, credentials, not a URL.
+  { name: "a push endpoint at the cloud metadata address", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("http://169.254.169.254/latest/meta-data"), expect: 422, field: "subscription.endpoint" },
+  { name: "a push endpoint on an https IP literal", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://10.0.0.5/push/x"), expect: 422, field: "subscription.endpoint" },
+  { name: "a push endpoint at localhost", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://localhost:5432/"), expect: 422, field: "subscription.endpoint" },
+  { name: "a push endpoint with credentials", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://user:pw@push.example-service.test/x"), expect: 422, field: "subscription.endpoint" },
+  { name: "a push endpoint that is not a URL", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("not a url"), expect: 400, field: "subscription.endpoint" },
+  { name: "a push key of the wrong length", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://push.example-service.test/x", { ...pushKeys, p256dh: "AAAA" }), expect: 400, field: "subscription.keys.p256dh" },
+  { name: "a push subscription without keys", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => ({ ...pushBody("https://push.example-service.test/x"), subscription: { endpoint: "https://push.example-service.test/x" } }), expect: 400, field: "subscription.keys" },
   { name: "a malformed trail id for reports", as: "anonymous", method: "GET", path: () => `/api/trails/${"-".repeat(36)}/reports`, expect: 404 },
   { name: "a malformed trail id for a new report", as: "parkRanger", method: "POST", path: () => `/api/trails/${NOT_A_UUID}/reports`, json: () => ({ status: "open" }), expect: 404 },
   { name: "a malformed trail id for a hazard", as: "parkRanger", method: "POST", path: () => `/api/trails/${NOT_A_UUID}/hazards`, multipart: () => hazardFields, expect: 404 },
   { name: "a malformed photo id", as: "anonymous", method: "GET", path: () => `/api/photos/${NOT_A_UUID}`, expect: 404 },
 
   // Huge arrays.
+  { name: "10,000 trail ids for browser alerts", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => ({ ...pushBody("https://push.example-service.test/x"), trailIds: FAKE_UUIDS(10_000) }), expect: 413 },
   { name: "10,000 trail ids in a subscription", as: "rider", method: "POST", path: () => "/api/me/subscriptions", json: () => ({ parkSlug: "harrow-ridge", trailIds: FAKE_UUIDS(10_000), kinds: ["closure"] }), expect: 413 },
   { name: "10,000 trail ids for today's pressure", as: "anonymous", method: "POST", path: () => "/api/pressure", json: () => ({ ...valid, name: undefined, today: { parkSlug: "harrow-ridge", trailIds: FAKE_UUIDS(10_000) } }), expect: 413 },
   { name: "2,000 trails in one check (500 at most)", as: "parkRanger", method: "POST", path: () => "/api/parks/harrow-ridge/morning-check", json: () => ({ entries: FAKE_UUIDS(2_000).map((trailId) => ({ trailId, unchanged: true })) }), expect: 400 },

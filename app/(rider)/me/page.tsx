@@ -9,7 +9,7 @@ export const dynamic = "force-dynamic";
 const MY_LINKS = [
   { href: "/me/setups", label: "My setups", text: "Bikes, tyres, baselines and sag." },
   { href: "/me/rides", label: "My rides", text: "Log how it felt; get one change for next time." },
-  { href: "/me/subscriptions", label: "My notices", text: "E-mails when trails close or reopen." },
+  { href: "/me/subscriptions", label: "My notices", text: "E-mails or browser alerts when trails close or reopen." },
   { href: "/pressure", label: "Today's pressure", text: "The band per wheel for today's trails." },
   { href: "/me/account", label: "Account and sign-in", text: "Password, e-mail, sign out everywhere, your data." },
 ];

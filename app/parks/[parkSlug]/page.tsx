@@ -58,7 +58,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
             Today&apos;s tyre pressure
           </Link>
           <Link href={`/me/subscriptions?park=${board.park.slug}`} className="btn-quiet shrink-0">
-            Get trail notices by e-mail
+            Get trail notices
           </Link>
           {/* webcal:// asks the rider's calendar app to subscribe, so later changes arrive by themselves. */}
           <a href={webcalUrl(`/api/parks/${board.park.slug}/closures.ics`)} className="btn-quiet">

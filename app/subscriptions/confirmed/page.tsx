@@ -12,7 +12,7 @@ export default async function ConfirmedPage({ searchParams }: { searchParams: Pr
     return (
       <section className="card space-y-2" data-testid="confirm-invalid">
         <h1 className="text-2xl font-bold">This confirmation link does not work</h1>
-        <p>It is altered, too old (links last 7 days) or the subscription was changed since. Ask for a new link on <Link href="/me/subscriptions" className="underline">Trail notices by e-mail</Link>.</p>
+        <p>It is altered, too old (links last 7 days) or the subscription was changed since. Ask for a new link on <Link href="/me/subscriptions" className="underline">Trail notices</Link>.</p>
       </section>
     );
   }

@@ -1,9 +1,10 @@
 "use client";
-import { useActionState, useState } from "react";
+import { startTransition, useActionState, useState, type FormEvent } from "react";
 import { FormMessage } from "@/components/form-bits";
 import { initialFormState } from "@/lib/shared/form-state";
 import { saveSubscriptionAction } from "@/lib/notices/subscription-actions";
 import { NOTICE_KINDS, type NoticeKind } from "@/lib/notices/pure/schemas";
+import { PushAlerts } from "./push-alerts";
 
 export type ParkChoice = {
   slug: string;
@@ -19,7 +20,7 @@ const KIND_TEXT: Record<NoticeKind, string> = {
   advisory: "Advisories (works, events, lift changes)",
 };
 
-export function SubscriptionForm({ parks, initialSlug }: { parks: ParkChoice[]; initialSlug: string }) {
+export function SubscriptionForm({ parks, initialSlug, vapidPublicKey }: { parks: ParkChoice[]; initialSlug: string; vapidPublicKey: string | null }) {
   const [state, action, pending] = useActionState(saveSubscriptionAction, initialFormState);
   const [slug, setSlug] = useState(initialSlug);
   const park = parks.find((p) => p.slug === slug) ?? parks[0];
@@ -36,11 +37,18 @@ export function SubscriptionForm({ parks, initialSlug }: { parks: ParkChoice[]; 
     setKinds(chosen.current?.kinds ?? ["closure", "reopening"]);
   };
   const toggle = <T,>(list: T[], item: T) => (list.includes(item) ? list.filter((x) => x !== item) : [...list, item]);
+  // React resets a form after its action runs, which put the park list back on its first park while
+  // the rest of the form still showed the rider's choice. Submitting here keeps every field as chosen.
+  const submit = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    const data = new FormData(event.currentTarget);
+    startTransition(() => action(data));
+  };
   const error = (name: string) => state.fieldErrors?.[name] ?? Object.entries(state.fieldErrors ?? {}).find(([k]) => k.startsWith(`${name}.`))?.[1] ?? "";
 
   return (
-    <form action={action} className="card space-y-4">
-      <h2 className="text-lg font-bold">{park.current ? "Change what you get" : "Get notices by e-mail"}</h2>
+    <form action={action} onSubmit={submit} className="card space-y-4">
+      <h2 className="text-lg font-bold">{park.current ? "Change what you get" : "Get trail notices"}</h2>
       <FormMessage state={state} />
       <div>
         <label htmlFor="sub-park" className="label">Park</label>
@@ -92,6 +100,7 @@ export function SubscriptionForm({ parks, initialSlug }: { parks: ParkChoice[]; 
       <button type="submit" className="btn-primary w-full" disabled={pending}>
         {pending ? "Saving…" : park.current ? "Save changes" : "Send me these e-mails"}
       </button>
+      <PushAlerts publicKey={vapidPublicKey} choice={{ parkSlug: park.slug, parkName: park.name, trailIds: scope === "trails" ? trailIds : null, kinds }} />
     </form>
   );
 }

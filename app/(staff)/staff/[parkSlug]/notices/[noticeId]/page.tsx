@@ -7,7 +7,7 @@ import { AppError } from "@/lib/shared/errors";
 import { formatClosedUntil } from "@/lib/notices/compose";
 import { parkLocalDate, parkLocalTime, formatParkDateTime } from "@/lib/shared/park-clock";
 import { FollowDeliveries } from "@/components/notices/follow-deliveries";
-import { deliveryLine, deliveryWord, waitingCount } from "@/lib/notices/pure/delivery-words";
+import { CHANNEL_WORDS, deliveryLine, deliveryWord, waitingCount } from "@/lib/notices/pure/delivery-words";
 import { KindLabel } from "../notice-bits";
 import { RetryFailedForm } from "./retry-form";
 
@@ -54,7 +54,7 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
         </p>
         {notice.deliveries.failed > 0 && can(actor, "notice:send", { parkId: notice.park.id }) && <RetryFailedForm parkSlug={parkSlug} noticeId={notice.id} failed={notice.deliveries.failed} />}
         {deliveries.length === 0 ? (
-          <p className="text-loam-700">Nobody matched this notice, so nothing was e-mailed.</p>
+          <p className="text-loam-700">Nobody matched this notice, so nothing was sent.</p>
         ) : (
           <div className="overflow-x-auto">
             <table className="w-full text-left text-sm">
@@ -62,6 +62,7 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
               <thead>
                 <tr className="border-b border-loam-200">
                   <th scope="col" className="py-2 pr-2">Rider</th>
+                  <th scope="col" className="py-2 pr-2">By</th>
                   <th scope="col" className="py-2 pr-2">State</th>
                   <th scope="col" className="py-2 pr-2">Tries</th>
                   <th scope="col" className="py-2">Detail</th>
@@ -71,6 +72,7 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
                 {deliveries.map((d) => (
                   <tr key={d.id} className="border-b border-loam-100 align-top">
                     <td className="py-2 pr-2 break-all">{d.email}</td>
+                    <td className="py-2 pr-2">{CHANNEL_WORDS[d.channel]}</td>
                     <td className="py-2 pr-2 font-semibold">{deliveryWord(d.state, d.nextAttemptAt, tz)}</td>
                     <td className="py-2 pr-2">{d.attempts}</td>
                     <td className="py-2 text-loam-700">
