@@ -24,7 +24,8 @@ function missingSupport(): string | null {
 }
 
 async function browserSubscription(publicKey: string): Promise<PushSubscription> {
-  const registration = await navigator.serviceWorker.register(SERVICE_WORKER_URL);
+  // The same registration as the park pages make (components/offline/service-worker.tsx): the whole site.
+  const registration = await navigator.serviceWorker.register(SERVICE_WORKER_URL, { scope: "/" });
   await navigator.serviceWorker.ready;
   const existing = await registration.pushManager.getSubscription();
   if (existing) return existing;
