@@ -6,7 +6,7 @@ import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { hashPassword, passwordSchema, verifyPassword } from "@/lib/server/auth/password";
 import { endAllSessions } from "@/lib/server/auth/sessions";
 import { AppError } from "@/lib/shared/errors";
-import { Park, ParkMembership, RideLog, Setup, Subscription, User, sequelize } from "@/models";
+import { Park, ParkMembership, PushSubscription, RideLog, Setup, Subscription, User, sequelize } from "@/models";
 import { changeEmailFields, changePasswordFields, passwordOnlyFields, tokenFields } from "./pure/schemas";
 
 /**
@@ -76,11 +76,13 @@ export async function confirmEmailChange(input: unknown) {
 export async function exportMyData(actor: Actor | null) {
   authorize(actor, "own:account", { ownerId: actor?.id });
   const where = { userId: actor.id };
-  const [user, setups, rideLogs, subscriptions, memberships] = await Promise.all([
+  const [user, setups, rideLogs, subscriptions, browserAlerts, memberships] = await Promise.all([
     User.findByPk(actor.id, { attributes: ["id", "email", "name", "siteRole", "units", "emailVerifiedAt", "createdAt", "updatedAt"] }),
     Setup.findAll({ where, order: [["createdAt", "ASC"]] }),
     RideLog.findAll({ where, order: [["createdAt", "ASC"]] }),
     Subscription.findAll({ where, include: [{ model: Park, as: "park", attributes: ["slug", "name"] }], order: [["createdAt", "ASC"]] }),
+    // The browser's keys are left out: they are its secret with the push service, of no use elsewhere.
+    PushSubscription.findAll({ where, attributes: ["id", "parkId", "endpoint", "trailIds", "kinds", "createdAt"], order: [["createdAt", "ASC"]] }),
     ParkMembership.findAll({ where, attributes: ["parkId", "role", "createdAt"] }),
   ]);
   return {
@@ -90,11 +92,12 @@ export async function exportMyData(actor: Actor | null) {
     setups: setups.map((s) => s.toJSON()),
     rideLogs: rideLogs.map((r) => r.toJSON()),
     subscriptions: subscriptions.map((s) => s.toJSON()),
+    browserAlerts: browserAlerts.map((b) => b.toJSON()),
   };
 }
 
 /**
- * Deletes the account: setups, ride logs, subscriptions and memberships go with it (foreign keys
+ * Deletes the account: setups, ride logs, subscriptions, browser alerts and memberships go with it (foreign keys
  * cascade); reports and audit entries written as staff stay, their author shown as a former staff
  * member. The last manager of a park must hand over first (409).
  */

@@ -4,7 +4,7 @@ import { confirmPasswordReset, requestPasswordReset, RESET_REQUEST_ANSWER } from
 import { loadActor } from "@/lib/server/auth/actor";
 import { verifyPassword } from "@/lib/server/auth/password";
 import { AppError } from "@/lib/shared/errors";
-import { AccountLink, AuditEvent, ParkMembership, Setup, Subscription, TrailReport, User, sequelize } from "@/models";
+import { AccountLink, AuditEvent, ParkMembership, PushSubscription, Setup, Subscription, TrailReport, User, sequelize } from "@/models";
 import { createTrail, reportToday, riderWithSetup } from "../pressure/fixtures";
 import { addStaff, capturedMessages, createPark, createUser, tokenMailedTo, uniqueEmail } from "../helpers";
 
@@ -95,9 +95,14 @@ describe("the account page's actions", () => {
     expect((await User.findByPk(user.id))!.email).toBe(next);
   });
 
-  it("download my data holds the account, setups, ride logs and subscriptions, and never the password hash", async () => {
+  it("download my data holds the account, setups, ride logs, subscriptions and browser alerts, and never the password hash or a browser's keys", async () => {
     const { actor, setup } = await riderWithSetup();
+    const park = await createPark();
+    const secret = "S".repeat(22);
+    await PushSubscription.create({ userId: actor.id, parkId: park.id, endpoint: "https://push.example-service.test/x", p256dh: `B${"K".repeat(86)}`, auth: secret, trailIds: null, kinds: ["closure"] });
     const data = await exportMyData(actor);
+    expect(data.browserAlerts).toEqual([expect.objectContaining({ parkId: park.id, endpoint: "https://push.example-service.test/x", kinds: ["closure"] })]);
+    expect(JSON.stringify(data)).not.toContain(secret);
     expect(data.account).toMatchObject({ id: actor.id, email: actor.email });
     expect(data.setups.map((s) => (s as { id: string }).id)).toEqual([setup.id]);
     expect(Object.keys(data)).toEqual(expect.arrayContaining(["rideLogs", "subscriptions"]));
