@@ -21,14 +21,27 @@ export class PushRefused extends Error {
   }
 }
 
-export function createPushSender(vapid: VapidKeys, timeoutMs = 10_000): PushSender {
-  return async (target, payload) => {
-    const details = webpush.generateRequestDetails({ endpoint: target.endpoint, keys: { p256dh: target.p256dh, auth: target.auth } }, payload, {
+/** Nothing was sent: the push could not be built (a browser key no encryption accepts). Retrying will not help. */
+export class PushUnsendable extends Error {
+  readonly permanent = true;
+}
+
+function requestFor(target: PushTarget, payload: string, vapid: VapidKeys) {
+  try {
+    return webpush.generateRequestDetails({ endpoint: target.endpoint, keys: { p256dh: target.p256dh, auth: target.auth } }, payload, {
       vapidDetails: vapid,
       TTL: TTL_SECONDS,
       urgency: "high",
       contentEncoding: "aes128gcm",
     });
+  } catch (error) {
+    throw new PushUnsendable(`could not encrypt to this browser: ${(error as Error).message}`.slice(0, 300));
+  }
+}
+
+export function createPushSender(vapid: VapidKeys, timeoutMs = 10_000): PushSender {
+  return async (target, payload) => {
+    const details = requestFor(target, payload, vapid);
     // fetch sets Content-Length itself from the body.
     const headers = Object.fromEntries(Object.entries(details.headers).filter(([name]) => name.toLowerCase() !== "content-length").map(([k, v]) => [k, String(v)]));
     const response = await fetch(details.endpoint, { method: "POST", headers, body: details.body ? new Uint8Array(details.body) : undefined, signal: AbortSignal.timeout(timeoutMs), redirect: "error" });

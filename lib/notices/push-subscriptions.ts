@@ -1,4 +1,5 @@
 import "server-only";
+import { ECDH } from "node:crypto";
 import { UniqueConstraintError } from "sequelize";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
 import { env } from "@/lib/server/env";
@@ -37,11 +38,21 @@ function checkEndpoint(endpoint: string) {
   }
 }
 
+/** The browser's key must be a point of P-256, or no push could ever be encrypted to it (RFC 8291 §3.1). */
+function checkBrowserKey(p256dh: string) {
+  try {
+    ECDH.convertKey(Buffer.from(p256dh, "base64url"), "prime256v1");
+  } catch {
+    throw new AppError(422, "This browser's push key is not usable. Turn alerts off and on again in the browser.", "subscription.keys.p256dh");
+  }
+}
+
 /** Creates or changes one browser's alerts for a park. The same browser again updates its row. */
 export async function savePushSubscription(actor: Actor | null, input: unknown) {
   authorize(actor, "own:subscriptions", { ownerId: actor?.id });
   const fields = pushSubscriptionFields.parse(input);
   checkEndpoint(fields.subscription.endpoint);
+  checkBrowserKey(fields.subscription.keys.p256dh);
   const park = await Park.findOne({ where: { slug: fields.parkSlug } });
   if (!park) throw new AppError(422, "Choose a park from the list.", "parkSlug");
   if (fields.trailIds) {

@@ -1,4 +1,4 @@
-import { randomBytes, randomUUID } from "node:crypto";
+import { createECDH, randomBytes, randomUUID } from "node:crypto";
 import { readFileSync } from "node:fs";
 import type { APIRequestContext, APIResponse } from "@playwright/test";
 import { CALLER_EMAIL, type Caller } from "./api-callers";
@@ -119,7 +119,9 @@ export class MatrixFixtures {
   /** A browser's push subscription as the browser gives it, its endpoint at the local fake push service. */
   pushSubscriptionBody() {
     const endpoint = `${process.env.FAKE_PUSH_URL}/push/matrix-${randomUUID()}`;
-    return { parkSlug: OTHER_PARK, trailIds: null, kinds: ["closure"], subscription: { endpoint, expirationTime: null, keys: { p256dh: Buffer.concat([Buffer.from([4]), randomBytes(64)]).toString("base64url"), auth: randomBytes(16).toString("base64url") } } };
+    const browserKey = createECDH("prime256v1");
+    browserKey.generateKeys();
+    return { parkSlug: OTHER_PARK, trailIds: null, kinds: ["closure"], subscription: { endpoint, expirationTime: null, keys: { p256dh: browserKey.getPublicKey().toString("base64url"), auth: randomBytes(16).toString("base64url") } } };
   }
 
   async freshPushSubscription(): Promise<string> {
@@ -219,6 +221,9 @@ export class MatrixFixtures {
     for (const [caller, id] of this.made.pushSubscriptions) await attempt(`push subscription ${id}`, () => as[caller].delete(`/api/me/push-subscriptions/${id}`));
     const rider = (await okJson(await as.rider.get("/api/me/subscriptions"), "subscriptions")).subscriptions as Json[];
     for (const sub of rider.filter((s) => s.park.slug === OTHER_PARK)) await attempt("rider's subscription", () => as.rider.delete(`/api/me/subscriptions/${sub.id}`));
+    // The DELETE row makes one of the rider's browsers for every caller; only the rider's own call removes it.
+    const browsers = (await okJson(await as.rider.get("/api/me/push-subscriptions"), "push subscriptions")).pushSubscriptions as Json[];
+    for (const sub of browsers.filter((s) => s.park.slug === OTHER_PARK)) await attempt("rider's browser alerts", () => as.rider.delete(`/api/me/push-subscriptions/${sub.id}`));
     await attempt("park state", () => as.manager.delete(`/api/parks/${PARK}/state`));
     if (this.landmarks.length) await attempt("landmarks", () => as.manager.put(`/api/parks/${PARK}/layers/landmarks`, { multipart: { file: this.landmarksFile() } }));
     return failures;

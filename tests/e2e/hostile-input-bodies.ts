@@ -13,8 +13,9 @@ const NOT_A_UUID = "0123456789abcdef0123456789abcdef0123"; // 36 characters of h
 const FAKE_UUIDS = (n: number) => Array.from({ length: n }, (_, i) => `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`);
 const valid = setupBody("Hostile check");
 const notice = { kind: "advisory", trailIds: null, message: "Hostile input check" };
-// A browser's push subscription with its endpoint replaced: the worker would POST to it.
-const pushKeys = { p256dh: `B${"A".repeat(86)}`, auth: "A".repeat(22) };
+// A browser's push subscription with its endpoint replaced: the worker would POST to it. The key is
+// the right size but no point of P-256 (0x04 then 64 bytes of 0xFF).
+const pushKeys = { p256dh: Buffer.concat([Buffer.from([4]), Buffer.alloc(64, 0xff)]).toString("base64url"), auth: "A".repeat(22) };
 const pushBody = (endpoint: string, keys: Record<string, string> = pushKeys) => ({ parkSlug: "harrow-ridge", trailIds: null, kinds: ["closure"], subscription: { endpoint, keys } });
 const hazardFields = { kind: "other", lon: "-121.94", lat: "47.3" };
 /** A FormData keeps a field named "__proto__" (an object literal would set the prototype instead). */
@@ -104,6 +105,7 @@ export const BODY_CASES: HostileCase[] = [
   { name: "a push endpoint with credentials", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://user:pw@push.example-service.test/x"), expect: 422, field: "subscription.endpoint" },
   { name: "a push endpoint that is not a URL", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("not a url"), expect: 400, field: "subscription.endpoint" },
   { name: "a push key of the wrong length", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody("https://push.example-service.test/x", { ...pushKeys, p256dh: "AAAA" }), expect: 400, field: "subscription.keys.p256dh" },
+  { name: "a push key that is not a point of P-256", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => pushBody(`${process.env.FAKE_PUSH_URL}/push/hostile`), expect: 422, field: "subscription.keys.p256dh" },
   { name: "a push subscription without keys", as: "rider", method: "POST", path: () => "/api/me/push-subscriptions", json: () => ({ ...pushBody("https://push.example-service.test/x"), subscription: { endpoint: "https://push.example-service.test/x" } }), expect: 400, field: "subscription.keys" },
   { name: "a malformed trail id for reports", as: "anonymous", method: "GET", path: () => `/api/trails/${"-".repeat(36)}/reports`, expect: 404 },
   { name: "a malformed trail id for a new report", as: "parkRanger", method: "POST", path: () => `/api/trails/${NOT_A_UUID}/reports`, json: () => ({ status: "open" }), expect: 404 },

@@ -42,13 +42,15 @@ export function classifySendError(error: unknown): SendFailure {
 /**
  * A push service's answer (RFC 8030 §5, §7.3; RFC 8292 §4): 404 or 410, the subscription is gone
  * (we remove it); 429 (too many requests) and 5xx are temporary; any other 4xx (a refused VAPID
- * token, a payload too large) is permanent. No status: a network error, temporary.
+ * token, a payload too large) is permanent, as is a push that could not be built (`permanent`).
+ * No status: a network error, temporary.
  */
 export function classifyPushError(error: unknown): SendFailure {
-  const e = (error ?? {}) as { statusCode?: number; code?: string; message?: string; cause?: { code?: string } };
+  const e = (error ?? {}) as { statusCode?: number; code?: string; message?: string; cause?: { code?: string }; permanent?: boolean };
   const status = typeof e.statusCode === "number" ? e.statusCode : undefined;
   const text = String(e.message ?? error ?? "unknown error").replace(/\s+/g, " ").trim();
   const summary = [status ? `Push ${status}` : (e.code ?? e.cause?.code), text].filter(Boolean).join(": ").slice(0, 500);
+  if (e.permanent === true) return { permanent: true, summary };
   if (status === 404 || status === 410) return { permanent: true, gone: true, summary: `${summary.slice(0, 400)} (this browser's alerts have ended; it was removed)` };
   const temporary = status === undefined || status === 429 || status >= 500;
   return { permanent: !temporary, summary };

@@ -51,6 +51,7 @@ describe("a push service's answers (RFC 8030 §5, §7.3; RFC 8292 §4)", () => {
     expect(classifyPushError(refused(503)).permanent).toBe(false);
     expect(classifyPushError(refused(403))).toEqual({ permanent: true, summary: "Push 403: refused" });
     expect(classifyPushError(refused(413)).permanent).toBe(true);
+    expect(classifyPushError(Object.assign(new Error("could not encrypt to this browser"), { permanent: true })).permanent).toBe(true);
     expect(classifyPushError(Object.assign(new TypeError("fetch failed"), { cause: { code: "ECONNREFUSED" } }))).toEqual({ permanent: false, summary: "ECONNREFUSED: fetch failed" });
   });
 });

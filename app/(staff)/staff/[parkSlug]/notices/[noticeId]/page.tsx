@@ -61,8 +61,7 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
               <caption className="sr-only">Deliveries, failed first</caption>
               <thead>
                 <tr className="border-b border-loam-200">
-                  <th scope="col" className="py-2 pr-2">Rider</th>
-                  <th scope="col" className="py-2 pr-2">By</th>
+                  <th scope="col" className="py-2 pr-2">Rider, by</th>
                   <th scope="col" className="py-2 pr-2">State</th>
                   <th scope="col" className="py-2 pr-2">Tries</th>
                   <th scope="col" className="py-2">Detail</th>
@@ -71,8 +70,10 @@ export default async function NoticePage({ params, searchParams }: { params: Pro
               <tbody>
                 {deliveries.map((d) => (
                   <tr key={d.id} className="border-b border-loam-100 align-top">
-                    <td className="py-2 pr-2 break-all">{d.email}</td>
-                    <td className="py-2 pr-2">{CHANNEL_WORDS[d.channel]}</td>
+                    <td className="py-2 pr-2">
+                      <span className="break-all">{d.email}</span>
+                      <span className="block text-loam-600">{CHANNEL_WORDS[d.channel]}</span>
+                    </td>
                     <td className="py-2 pr-2 font-semibold">{deliveryWord(d.state, d.nextAttemptAt, tz)}</td>
                     <td className="py-2 pr-2">{d.attempts}</td>
                     <td className="py-2 text-loam-700">
