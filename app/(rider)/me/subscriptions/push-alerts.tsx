@@ -5,7 +5,7 @@
  * Pushes arrive even with every tab closed; the service worker shows them.
  */
 import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
+import { useState, useSyncExternalStore } from "react";
 import { sendJson } from "@/lib/client/api-request";
 import { applicationServerKey } from "@/lib/notices/pure/push-alert";
 import type { NoticeKind } from "@/lib/notices/pure/schemas";
@@ -15,13 +15,12 @@ type Outcome = { tone: "ok" | "error" | "working"; text: string } | null;
 
 const SERVICE_WORKER_URL = "/serwist/sw.js";
 
-/** Why this browser cannot take alerts, or null when it can. */
-function missingSupport(): string | null {
-  if (!("serviceWorker" in navigator) || !("PushManager" in window) || !("Notification" in window)) {
-    return "This browser cannot show alerts from a website. On an iPhone or iPad, add Loamcast to the home screen (Share, then Add to Home Screen) and open it from there.";
-  }
-  return null;
-}
+const NO_SUPPORT = "This browser cannot show alerts from a website. On an iPhone or iPad, add Loamcast to the home screen (Share, then Add to Home Screen) and open it from there.";
+const NOT_SET_UP = "Alerts are not set up on this Loamcast server.";
+
+/** Why this browser cannot take alerts, or null when it can (known only in the browser). */
+const missingSupport = () => ("serviceWorker" in navigator && "PushManager" in window && "Notification" in window ? null : NO_SUPPORT);
+const neverChanges = () => () => {};
 
 async function browserSubscription(publicKey: string): Promise<PushSubscription> {
   // The same registration as the park pages make (components/offline/service-worker.tsx): the whole site.
@@ -35,8 +34,8 @@ async function browserSubscription(publicKey: string): Promise<PushSubscription>
 export function PushAlerts({ publicKey, choice }: { publicKey: string | null; choice: PushChoice }) {
   const router = useRouter();
   const [outcome, setOutcome] = useState<Outcome>(null);
-  const [unsupported, setUnsupported] = useState<string | null>(null);
-  useEffect(() => setUnsupported(publicKey ? missingSupport() : "Alerts are not set up on this Loamcast server."), [publicKey]);
+  const browserGap = useSyncExternalStore(neverChanges, missingSupport, () => null);
+  const unsupported = publicKey ? browserGap : NOT_SET_UP;
 
   async function turnOn() {
     if (!publicKey) return;
