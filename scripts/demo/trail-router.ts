@@ -11,7 +11,7 @@ import { seededRandom } from "@/scripts/demo/synthetic-trails";
  *   with a gentle meander (a fall-line descent);
  * - where it is steeper, it traverses across the slope at the trail's grade, and at the lane's
  *   edge turns back through the fall line on a tight radius: a switchback, legs tens of metres;
- * - a climb keeps its grade at most 45 % of the side slope (IMBA's half rule, with a margin).
+ * - a climb keeps its grade at most 40 % of the side slope (IMBA's half rule, with a margin).
  * Elevations are the terrain's, smoothed over a few metres as a graded tread is, so the
  * contours drawn from the same model agree with the trails. Deterministic for a seed.
  */
@@ -40,11 +40,10 @@ export type RouteSpec = {
   steepestPct: number;
 };
 
-export type RoutedTrail = { line: Position[]; /** Distance along the line of each switchback or bermed turn's apex, metres. */ turnsAtM: number[] };
 
 type Vec = [number, number];
 const STEP_M = 1;
-const HALF_RULE = 0.45;
+const HALF_RULE = 0.4;
 
 const add = (a: Vec, b: Vec, k = 1): Vec => [a[0] + b[0] * k, a[1] + b[1] * k];
 const dot = (a: Vec, b: Vec) => a[0] * b[0] + a[1] * b[1];
@@ -78,7 +77,7 @@ function denseLane(points: Vec[]) {
   return { points: out, at, length: at[at.length - 1] };
 }
 
-export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrail {
+export function routeTrail(spec: RouteSpec, terrain: ElevationModel): Position[] {
   const random = seededRandom(spec.seed);
   const plane = planeAround(spec.lane[0]);
   const z = (p: Vec) => terrain(...plane.toLonLat(p));
@@ -94,10 +93,9 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrai
   let side = random() < 0.5 ? 1 : -1;
   let turning = false;
   let turnDirection = 1;
+  let legReach = 1;
   let laneIndex = 0;
   const path: Vec[] = [p];
-  const turnsAt: number[] = [];
-  let turnStartM = 0;
   let travelled = 0;
 
   while (Math.hypot(end[0] - p[0], end[1] - p[1]) > 2) {
@@ -115,7 +113,9 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrai
     const normal: Vec = [-tangent[1], tangent[0]];
     const offset = dot(add(p, lane.points[best], -1), normal);
     // The lane narrows near its ends so the trail leaves its start and reaches its end directly.
-    const halfWidth = Math.max(2.5 * spec.turnRadiusM, spec.halfWidthM * Math.min(1, toEnd / (3 * spec.halfWidthM), lane.at[best] / (2 * spec.halfWidthM) + 0.3));
+    // It also swells and narrows along the way, as benches and cliffs leave room for longer or shorter legs.
+    const room = 0.8 + 0.2 * Math.sin(2 * Math.PI * 3 * progress + phase2);
+    const halfWidth = Math.max(2.5 * spec.turnRadiusM, room * spec.halfWidthM * Math.min(1, toEnd / (3 * spec.halfWidthM), lane.at[best] / (2 * spec.halfWidthM) + 0.3));
 
     const gradient = uphill(p);
     const slope = Math.hypot(...gradient);
@@ -131,10 +131,10 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrai
     if (toEnd < 25) desired = unit(add(end, p, -1));
     else if (gradeAlong(desired) > grade) {
       // Too steep: traverse at the trail's grade towards the current side; at the edge, switch back.
-      if (side * offset > halfWidth && !turning) {
+      if (side * offset > halfWidth * legReach && !turning) {
         side = -side;
+        legReach = 0.45 + 0.55 * random(); // legs of uneven length, as the ground dictates where a turn fits
         turning = true;
-        turnStartM = travelled;
         // A switchback swings through the fall line (downhill for a descent, uphill for a climb), as a built turn does.
         turnDirection = Math.sign(angleBetween(heading, unit([sign * gradient[0], sign * gradient[1]]))) || 1;
       }
@@ -153,10 +153,10 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrai
     if (turning) {
       // Swing the chosen way round; a wanted heading just behind the swing means it is already reached.
       const overshot = Math.sign(change) !== turnDirection && Math.abs(change) < 1;
-      if (Math.sign(change) !== turnDirection && !overshot) change = turnDirection * (2 * Math.PI - Math.abs(change));
+      // …unless that way round is a loop: then the short way.
+      if (Math.sign(change) !== turnDirection && !overshot && 2 * Math.PI - Math.abs(change) < 3.5) change = turnDirection * (2 * Math.PI - Math.abs(change));
       if (overshot || Math.abs(change) < 0.08) {
         turning = false;
-        turnsAt.push((turnStartM + travelled) / 2);
       }
     }
     // The last few metres run straight in, whatever the heading (a trail's end is where it joins the base).
@@ -167,29 +167,31 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): RoutedTrai
     path.push(p);
   }
   path.push(end);
-  return { line: recorded(path, z, spec, random), turnsAtM: turnsAt };
+  return recorded(path, z, (q) => Math.hypot(...uphill(q)), spec, random);
 }
 
 /**
  * The tread's height along the walked path: the ground, cut and filled so no step is steeper than
  * `steepestPct` (how a crew benches a switchback: the upper leg is cut down, the lower one built
  * up). The mean of a fill pass (from the top) and a cut pass (from the bottom): each holds the
- * limit, so their mean does too, and it strays from the ground half as far as either.
+ * limit, so their mean does too, and it strays from the ground half as far as either. A climb's
+ * limit is also the half rule's, its turns included.
  */
-export function gradedTread(ground: number[], stepM: number, steepestPct: number): number[] {
-  const rise = (steepestPct / 100) * stepM;
+function gradedTread(ground: number[], stepM: number, steepestPct: number[]): number[] {
+  const rise = steepestPct.map((pct) => (pct / 100) * stepM);
   const fill = [...ground];
-  for (let i = 1; i < fill.length; i++) fill[i] = Math.min(Math.max(fill[i], fill[i - 1] - rise), fill[i - 1] + rise);
+  for (let i = 1; i < fill.length; i++) fill[i] = Math.min(Math.max(fill[i], fill[i - 1] - rise[i]), fill[i - 1] + rise[i]);
   const cut = [...ground];
-  for (let i = cut.length - 2; i >= 0; i--) cut[i] = Math.min(Math.max(cut[i], cut[i + 1] - rise), cut[i + 1] + rise);
+  for (let i = cut.length - 2; i >= 0; i--) cut[i] = Math.min(Math.max(cut[i], cut[i + 1] - rise[i + 1]), cut[i + 1] + rise[i + 1]);
   return ground.map((_, i) => (fill[i] + cut[i]) / 2);
 }
 
 /** The walked path as a recording: the graded tread's height, points every few metres. */
-function recorded(path: Vec[], z: (p: Vec) => number, spec: RouteSpec, random: () => number): Position[] {
+function recorded(path: Vec[], z: (p: Vec) => number, slope: (p: Vec) => number, spec: RouteSpec, random: () => number): Position[] {
   const plane = planeAround(spec.lane[0]);
   const ground = path.map(z);
-  const tread = gradedTread(ground, STEP_M, spec.steepestPct);
+  const limits = path.map((p) => (spec.direction === "up" ? Math.min(spec.steepestPct, 100 * HALF_RULE * slope(p)) : spec.steepestPct));
+  const tread = gradedTread(ground, STEP_M, limits);
   const out: Position[] = [];
   for (let i = 0; ; i = Math.min(path.length - 1, i + Math.max(1, Math.round(spec.spacingM * (0.7 + 0.6 * random()))))) {
     const [lon, lat] = plane.toLonLat(path[i]);
@@ -218,13 +220,13 @@ export function bowedLane(from: [number, number], to: [number, number], bulgeM: 
  * at `averagePct`: switchbacks drop faster than the legs, so the aimed leg grade is corrected a few
  * times by the ratio of wanted to measured average.
  */
-export function routeToAverage(spec: Omit<RouteSpec, "gradePct">, averagePct: number, terrain: ElevationModel): RoutedTrail {
+export function routeToAverage(spec: Omit<RouteSpec, "gradePct">, averagePct: number, terrain: ElevationModel): Position[] {
   let gradePct = averagePct;
   let routed = routeTrail({ ...spec, gradePct }, terrain);
   for (let round = 0; round < 5; round++) {
-    const measured = computeTrailStats([routed.line]).avgGradePct ?? averagePct;
+    const measured = computeTrailStats([routed]).avgGradePct ?? averagePct;
     if (Math.abs(measured - averagePct) < 0.1) break;
-    gradePct = Math.min(1.5 * averagePct, Math.max(0.5 * averagePct, gradePct * (averagePct / measured)));
+    gradePct = Math.min(1.5 * averagePct, Math.max(0.4 * averagePct, gradePct * (averagePct / measured)));
     routed = routeTrail({ ...spec, gradePct }, terrain);
   }
   return routed;

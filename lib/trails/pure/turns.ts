@@ -27,7 +27,10 @@ export function tightTurns(segment: Position[], { minAngleDeg = 120, maxRadiusM 
   let run = { sign: 0, angle: 0, length: 0, from: 0, to: 0 };
   const close = () => {
     if ((run.angle * 180) / Math.PI >= minAngleDeg) {
-      turns.push({ atM: (along[run.from] + along[run.to]) / 2, angleDeg: (run.angle * 180) / Math.PI, radiusM: run.length / run.angle });
+      // Where a sampled arc meets straight legs, its end points turn by half a step each, so the arc
+      // from the first to the last turning point is the turn's length (one point alone: its share).
+      const arcM = run.to > run.from ? along[run.to] - along[run.from] : run.length;
+      turns.push({ atM: (along[run.from] + along[run.to]) / 2, angleDeg: (run.angle * 180) / Math.PI, radiusM: arcM / run.angle });
     }
     run = { sign: 0, angle: 0, length: 0, from: 0, to: 0 };
   };
