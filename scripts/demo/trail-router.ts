@@ -101,10 +101,10 @@ export function routeTrail(spec: RouteSpec, terrain: ElevationModel): Position[]
   while (Math.hypot(end[0] - p[0], end[1] - p[1]) > 2) {
     if (travelled > 60_000) throw new Error(`Trail ${spec.seed} did not reach its end: check its lane and grade.`);
     // Where the trail is along its lane (search near the last place: legs never jump far).
-    let best = laneIndex;
-    for (let i = Math.max(0, laneIndex - 150); i < Math.min(lane.points.length, laneIndex + 400); i++) {
-      const q = lane.points[i];
-      if (Math.hypot(q[0] - p[0], q[1] - p[1]) < Math.hypot(lane.points[best][0] - p[0], lane.points[best][1] - p[1])) best = i;
+    let [best, bestSquared] = [laneIndex, Infinity];
+    for (let i = Math.max(0, laneIndex - 60); i < Math.min(lane.points.length, laneIndex + 150); i++) {
+      const [dx, dy] = [lane.points[i][0] - p[0], lane.points[i][1] - p[1]];
+      if (dx * dx + dy * dy < bestSquared) [best, bestSquared] = [i, dx * dx + dy * dy];
     }
     laneIndex = best;
     const progress = lane.at[best] / lane.length;
@@ -223,7 +223,7 @@ export function bowedLane(from: [number, number], to: [number, number], bulgeM: 
 export function routeToAverage(spec: Omit<RouteSpec, "gradePct">, averagePct: number, terrain: ElevationModel): Position[] {
   let gradePct = averagePct;
   let routed = routeTrail({ ...spec, gradePct }, terrain);
-  for (let round = 0; round < 5; round++) {
+  for (let round = 0; round < 4; round++) {
     const measured = computeTrailStats([routed]).avgGradePct ?? averagePct;
     if (Math.abs(measured - averagePct) < 0.1) break;
     gradePct = Math.min(1.5 * averagePct, Math.max(0.4 * averagePct, gradePct * (averagePct / measured)));
