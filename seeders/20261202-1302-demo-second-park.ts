@@ -1,6 +1,7 @@
 /**
  * The second demo park, Cinder Hollow Shuttle Park (fictional), so it is not empty: three trails
- * from the shuttle drop to the car park, its ground (boundary, shuttle road, landmarks) and a week
+ * from the shuttle drop to the car park, its ground (boundary, shuttle road, landmarks, contours of
+ * the terrain the trails and road are laid on) and a week
  * of morning checks by its ranger. Lines are synthesised (scripts/demo) and go through the same
  * upload code as a real file; reports through the same write as the API, dated at the park.
  */
@@ -8,7 +9,7 @@ import { loadActor } from "@/lib/server/auth/actor";
 import { postTrailReport } from "@/lib/conditions/write-report";
 import { parkLocalInstant, parkLocalDate, shiftDate } from "@/lib/shared/park-clock";
 import { createTrailFromUpload } from "@/lib/trails/save-upload";
-import { DROP, LOT, SECOND_PARK_TRAILS, secondParkTrailFile } from "@/scripts/demo/second-park";
+import { DROP, LOT, SECOND_PARK_TRAILS, secondParkContours, secondParkRoad, secondParkTrailFile } from "@/scripts/demo/second-park";
 import { Park, Trail, TrailReport, User } from "@/models";
 import { WEEK, demoReport } from "./demo-conditions/scenario";
 
@@ -26,13 +27,15 @@ export async function up() {
   }
 
   const trails = await Trail.findAll({ where: { parkId: park.id }, order: [["name", "ASC"]] });
-  const lons = trails.flatMap((t) => [t.minLon, t.maxLon]);
-  const lats = trails.flatMap((t) => [t.minLat, t.maxLat]);
+  const road = secondParkRoad();
+  const lons = [...trails.flatMap((t) => [t.minLon, t.maxLon]), ...road.map((p) => p[0])];
+  const lats = [...trails.flatMap((t) => [t.minLat, t.maxLat]), ...road.map((p) => p[1])];
   const [w, e, s, n] = [Math.min(...lons) - 0.003, Math.max(...lons) + 0.003, Math.min(...lats) - 0.003, Math.max(...lats) + 0.003];
   await park.update({
     mapLayers: {
       boundary: collection(feature({ type: "Polygon", coordinates: [[[w, s], [e, s], [e, n], [w, n], [w, s]]] }, { name: "Cinder Hollow boundary (fictional)" })),
-      roads: collection(feature({ type: "LineString", coordinates: [[LOT.lon, LOT.lat], [-105.603, 39.019], [-105.615, 39.024], [DROP.lon + 0.001, DROP.lat]] }, { name: "Shuttle road" })),
+      roads: collection(feature({ type: "LineString", coordinates: road }, { name: "Shuttle road" })),
+      contours: secondParkContours([w, s, e, n]),
       landmarks: collection(
         feature({ type: "Point", coordinates: [DROP.lon, DROP.lat] }, { name: "Shuttle drop", elevationM: DROP.ele }),
         feature({ type: "Point", coordinates: [LOT.lon, LOT.lat] }, { name: "Car park and pick-up", elevationM: LOT.ele }),

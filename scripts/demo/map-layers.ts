@@ -3,6 +3,7 @@ import type { FeatureCollection, LineString, Position } from "geojson";
 import { METRES_PER_DEGREE } from "@/lib/trails/pure/limits";
 import { contourLines } from "@/lib/map/pure/contours";
 import { hillElevationModel } from "./terrain";
+import { bowedLane, routeTrail } from "./trail-router";
 
 /**
  * Contours and access roads for the FICTIONAL demo park, made from its park.json (boundary and
@@ -10,7 +11,7 @@ import { hillElevationModel } from "./terrain";
  * data/demo-park/ can be checked against a fresh run (tests/unit/map/contours.test.ts).
  */
 export type DemoParkFile = {
-  mapLayers: { boundary: FeatureCollection; landmarks: FeatureCollection };
+  mapLayers: { boundary?: FeatureCollection; landmarks: FeatureCollection };
 };
 
 export const DEMO_CONTOUR_SETTINGS = { cellSizeM: 40, intervalM: 20, indexEveryM: 100, floorM: 560, ridgeRatio: 0.62, gullyM: 28, seed: 4401 } as const;
@@ -29,6 +30,7 @@ export function demoElevationModel(park: DemoParkFile) {
 
 export function demoContours(park: DemoParkFile) {
   const s = DEMO_CONTOUR_SETTINGS;
+  if (!park.mapLayers.boundary) throw new Error("park.json has no boundary");
   const bbox = turfBbox(park.mapLayers.boundary) as [number, number, number, number];
   return contourLines({ bbox, cellSizeM: s.cellSizeM, intervalM: s.intervalM, indexEveryM: s.indexEveryM, elevationAt: demoElevationModel(park) });
 }
@@ -40,23 +42,20 @@ function offset(from: { lon: number; lat: number }, eastM: number, northM: numbe
   return [round(from.lon + eastM / (cosLat * METRES_PER_DEGREE)), round(from.lat + northM / METRES_PER_DEGREE)];
 }
 
-/** An access road to the base from the south-east, and a switchback service road to the summit. */
+/**
+ * An access road to the base from the south-east, and a service road climbing to the summit,
+ * laid on the terrain as the trails are: at most 10 % with hairpins of 12 m radius, on its own
+ * lane south-west of the chairlift.
+ */
 export function demoRoads(park: DemoParkFile): FeatureCollection<LineString> {
   const base = landmark(park, "Base area");
   const summit = landmark(park, "Summit");
   const access: Position[] = [offset(base, 950, -620), offset(base, 560, -330), offset(base, 230, -160), offset(base, 60, -40)];
-  // Service road: legs that swing 300 m either side of the base→summit line, seven times.
-  const legs = 7;
-  const service: Position[] = [offset(base, 60, -40)];
-  const cosLat = Math.cos((base.lat * Math.PI) / 180);
-  const [dx, dy] = [(summit.lon - base.lon) * cosLat * METRES_PER_DEGREE, (summit.lat - base.lat) * METRES_PER_DEGREE];
-  const length = Math.hypot(dx, dy);
-  for (let i = 1; i < legs; i++) {
-    const t = i / legs;
-    const side = (i % 2 === 0 ? 1 : -1) * 300;
-    service.push(offset(base, dx * t + (-dy / length) * side, dy * t + (dx / length) * side));
-  }
-  service.push(offset(summit, 40, -30));
+  const line = routeTrail(
+    { seed: 77, lane: bowedLane([base.lon, base.lat], [summit.lon, summit.lat], 660), direction: "up", gradePct: 9, gradeVariation: 0.15, halfWidthM: 110, turnRadiusM: 12, bendRadiusM: 40, meanderDeg: 4, spacingM: 25, noiseM: 0, steepestPct: 12 },
+    demoElevationModel(park),
+  );
+  const service = line.map(([lon, lat]) => [Math.round(lon * 1e5) / 1e5, Math.round(lat * 1e5) / 1e5]);
   return {
     type: "FeatureCollection",
     features: [

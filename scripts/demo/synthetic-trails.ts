@@ -2,8 +2,9 @@ import { METRES_PER_DEGREE } from "@/lib/trails/pure/limits";
 import type { Position } from "@/lib/trails/pure/types";
 
 /**
- * Synthetic but plausible trail lines for the demo park and the benchmark (invented data, never a
- * test oracle). Deterministic: the same spec and seed always give the same line.
+ * Synthetic lines winding between two points for the benchmark and unit tests (invented data, never a
+ * test oracle; the demo parks lay theirs on a terrain, trail-router.ts). Deterministic: the same
+ * spec and seed always give the same line.
  */
 
 /** Small seeded PRNG (mulberry32): uniform numbers in [0, 1). */
