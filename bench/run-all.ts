@@ -30,7 +30,7 @@ const BENCHES: Bench[] = [
   { file: "gpx-100k.ts", args: () => [QUICK ? "1" : "3"] },
   { file: "map-idle.ts", args: () => [QUICK ? "2" : "5"] },
   { file: "map-cold.ts", args: (base) => ["--url", base, "--rounds", QUICK ? "1" : "3"] },
-  { file: "hazard-photo.ts", args: () => [QUICK ? "3" : "5"] },
+  { file: "hazard-photo.ts", args: (base) => ["--url", base, "--runs", QUICK ? "3" : "5"] },
   { file: "notices-fanout.ts", args: () => [], env: { BENCH_SUBSCRIBERS: QUICK ? "2000" : "10000" } },
 ];
 
