@@ -28,6 +28,7 @@ const BENCHES: Bench[] = [
   { file: "page-js.ts", args: (base) => ["--url", base, "--loads", QUICK ? "1" : "2"] },
   { file: "board-api.ts", args: (base) => ["--url", base, "--duration", QUICK ? "3" : "10"] },
   { file: "gpx-100k.ts", args: () => [QUICK ? "1" : "3"] },
+  { file: "gpx-preview-http.ts", args: (base) => ["--url", base, "--runs", QUICK ? "1" : "3"] },
   { file: "map-idle.ts", args: () => [QUICK ? "2" : "5"] },
   { file: "map-cold.ts", args: (base) => ["--url", base, "--rounds", QUICK ? "1" : "3"] },
   { file: "hazard-photo.ts", args: (base) => ["--url", base, "--runs", QUICK ? "3" : "5"] },
