@@ -1,9 +1,11 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { REQUEST_ID_HEADER, requestIdFrom } from "@/lib/server/request-id";
-import { contentSecurityPolicy, SELF_FRAMED_PATHS, staticSecurityHeaders } from "@/lib/server/security-headers";
+import { contentSecurityPolicy, SELF_FRAMED_PATHS, servedOverHttps, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
- * Runs before every page and API request. Three jobs only:
+ * Runs before every page and API request but the busiest public reads (PROXY_FREE_API in
+ * lib/server/security-headers.ts, left out by the matcher below), which set their headers
+ * themselves. Three jobs only:
  * 1. security headers, with a per-request CSP nonce;
  * 2. an optimistic redirect to sign in for private pages without a session cookie;
  * 3. a request id (x-request-id) for the logs, passed on to the app and sent back in the response.
@@ -33,7 +35,7 @@ export function proxy(request: NextRequest) {
     response = NextResponse.next({ request: { headers } });
   }
   response.headers.set(REQUEST_ID_HEADER, requestId);
-  const production = (process.env.APP_URL ?? "").startsWith("https://");
+  const production = servedOverHttps();
   // The embeddable card sends its own CSP with the park's frame-ancestors, and no X-Frame-Options.
   const selfFramed = SELF_FRAMED_PATHS.some((p) => pathname.startsWith(p));
   // A photo carries its own stricter policy (default-src 'none'; sandbox, lib/photos/serve-photo.ts),
@@ -46,6 +48,7 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  // Everything but static build files and images.
-  matcher: [{ source: "/((?!_next/static|_next/image|favicon.ico|vendor/).*)" }],
+  // Everything but static build files, images, and the board and map GeoJSON of a park (the
+  // matcher must be a literal: keep it in step with PROXY_FREE_API; a unit test compares them).
+  matcher: [{ source: "/((?!_next/static|_next/image|favicon.ico|vendor/|api/parks/[^/]+/(?:board|trails\\.geojson|hazards\\.geojson)$).*)" }],
 };

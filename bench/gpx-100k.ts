@@ -10,45 +10,19 @@ import fs from "node:fs";
 import path from "node:path";
 import v8 from "node:v8";
 import vm from "node:vm";
-import { SaxesParser } from "saxes";
 import { computeTrailStats, elevationProfile, parseTrailFile, processTrailUpload, simplifyLine, snapFeatures, toGpx } from "@/lib/trails/pure";
-import { METRES_PER_DEGREE } from "@/lib/trails/pure/limits";
-import { seededRandom } from "@/scripts/demo/synthetic-trails";
-import type { Position, TrailWaypoint } from "@/lib/trails/pure/types";
+import { bareSaxesPass, PARK, syntheticRecording } from "./lib/gpx-file";
 import { emitResult } from "./lib/result";
 
 const POINTS = 100_000;
-const PARK = { lon: -121.94, lat: 47.3 };
 const RUNS = Number(process.argv[2] ?? 3);
 const FILE = path.join(process.cwd(), ".local/bench/gpx-100k.gpx");
-
-/** Laps of a 1.5 km-radius loop round the (fictional) demo park, a point every ~5 m, rolling elevation with jitter. */
-function syntheticRecording(): { segments: Position[][]; waypoints: TrailWaypoint[] } {
-  const random = seededRandom(2024);
-  const radiusM = 1500;
-  const stepRad = 5 / radiusM;
-  const cosLat = Math.cos((PARK.lat * Math.PI) / 180);
-  const line: Position[] = [];
-  for (let i = 0; i < POINTS; i++) {
-    const a = i * stepRad;
-    const lon = PARK.lon + (radiusM * Math.cos(a)) / (cosLat * METRES_PER_DEGREE);
-    const lat = PARK.lat + (radiusM * Math.sin(a)) / METRES_PER_DEGREE;
-    const ele = 900 + 120 * Math.sin(a) + 4 * Math.sin(a * 40) + (random() - 0.5);
-    line.push([+lon.toFixed(7), +lat.toFixed(7), +ele.toFixed(1)]);
-  }
-  const waypoints = Array.from({ length: 20 }, (_, k) => {
-    const [lon, lat] = line[k * 4000];
-    return { name: `Feature ${k}`, type: ["berm", "jump", "drop", "roots"][k % 4], lon, lat };
-  });
-  return { segments: [line], waypoints };
-}
 
 // A full collection before each timed run, so no phase pays for the previous one's garbage.
 // The flag is set here so `tsx` runs it as it is.
 v8.setFlagsFromString("--expose-gc");
 const collectGarbage = vm.runInNewContext("gc") as () => void;
 
-const bareSaxesPass = (text: string) => void new SaxesParser({ xmlns: true }).write(text).close();
 const ours = (bytes: Buffer) => processTrailUpload({ bytes, filename: "bench.gpx", parkCenter: PARK });
 
 /** Child mode: one run of `which` over the file; prints resident-memory growth (peak − before) in bytes. */
@@ -84,7 +58,7 @@ function time<T>(label: string, fn: () => T, runs = RUNS): { result: T; medianMs
 }
 
 function main() {
-  const recording = syntheticRecording();
+  const recording = syntheticRecording(POINTS);
   const text = toGpx({ name: "Bench laps", ...recording });
   const bytes = Buffer.from(text);
   fs.mkdirSync(path.dirname(FILE), { recursive: true });

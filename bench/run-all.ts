@@ -3,7 +3,8 @@
  * build): starts `next start` on a free loopback port, runs every benchmark in bench/ one after
  * the other as a child process (each prints its own figures, plus a `BENCH_RESULT` line), then
  * prints one table of ratios measured in this run and stops everything it started.
- * --quick shortens every benchmark (fewer rounds, shorter load, fewer subscribers).
+ * --quick shortens every benchmark (fewer rounds, shorter load, fewer subscribers); --only a.ts,b.ts
+ * runs just those.
  */
 import type { ChildProcess } from "node:child_process";
 import fs from "node:fs";
@@ -13,6 +14,11 @@ import { exitOnSignal, spawnTracked, startNext, stopChild, type Server } from ".
 import { formatMarkdownTable, formatTextTable, parseResultLines, type BenchRow } from "./lib/result";
 
 const QUICK = process.argv.includes("--quick");
+/** `--only board-api.ts,map-cold.ts` runs just those (the table then holds just their rows). */
+const ONLY = (() => {
+  const i = process.argv.indexOf("--only");
+  return i >= 0 ? new Set(process.argv[i + 1]?.split(",") ?? []) : null;
+})();
 const CHILD_TIMEOUT_MS = 15 * 60_000;
 
 type Bench = { file: string; args: (base: string) => string[]; env?: Record<string, string> };
@@ -22,8 +28,10 @@ const BENCHES: Bench[] = [
   { file: "page-js.ts", args: (base) => ["--url", base, "--loads", QUICK ? "1" : "2"] },
   { file: "board-api.ts", args: (base) => ["--url", base, "--duration", QUICK ? "3" : "10"] },
   { file: "gpx-100k.ts", args: () => [QUICK ? "1" : "3"] },
+  { file: "gpx-preview-http.ts", args: (base) => ["--url", base, "--runs", QUICK ? "1" : "3"] },
   { file: "map-idle.ts", args: () => [QUICK ? "2" : "5"] },
-  { file: "hazard-photo.ts", args: () => [QUICK ? "3" : "5"] },
+  { file: "map-cold.ts", args: (base) => ["--url", base, "--rounds", QUICK ? "1" : "3"] },
+  { file: "hazard-photo.ts", args: (base) => ["--url", base, "--runs", QUICK ? "3" : "5"] },
   { file: "notices-fanout.ts", args: () => [], env: { BENCH_SUBSCRIBERS: QUICK ? "2000" : "10000" } },
 ];
 
@@ -88,7 +96,7 @@ async function main() {
   try {
     app = await startNext();
     console.log(`next start on ${app.base}`);
-    for (const bench of BENCHES) {
+    for (const bench of BENCHES.filter((b) => !ONLY || ONLY.has(b.file))) {
       console.log(`\n━━ ${bench.file}`);
       const t0 = performance.now();
       try {
@@ -104,7 +112,7 @@ async function main() {
   }
 
   const minutes = ((Date.now() - started.getTime()) / 60_000).toFixed(1);
-  const header = `${started.toISOString().slice(0, 10)}, nproc ${m.cores}, CPU ${m.model}, ${m.memoryGb} GB RAM, Node ${m.node}${QUICK ? ", --quick" : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
+  const header = `${started.toISOString().slice(0, 10)}, nproc ${m.cores}, CPU ${m.model}, ${m.memoryGb} GB RAM, Node ${m.node}${QUICK ? ", --quick" : ""}${ONLY ? `, only ${[...ONLY].join(", ")}` : ""}; load average ${loadBefore} before, ${loadAverage()} after; ${minutes} min`;
   console.log(`\nRatios measured in this run (ratio = ours ÷ bare), ${header}\n`);
   console.log(formatTextTable(rows));
   const reportDir = path.join(process.cwd(), ".local/bench");

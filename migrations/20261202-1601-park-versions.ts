@@ -19,7 +19,7 @@ const WATCHED: Array<{ table: string; args: string; events: string }> = [
   { table: "trail_features", args: "'trail_id', 'trails'", events: "INSERT OR UPDATE OR DELETE" },
 ];
 
-const BUMP_FUNCTION = `
+export const BUMP_FUNCTION = `
 CREATE OR REPLACE FUNCTION loamcast_bump_park_version() RETURNS trigger LANGUAGE plpgsql AS $$
 DECLARE
   ref text;

@@ -60,6 +60,7 @@ Notice.hasMany(NoticeDelivery, { foreignKey: "noticeId", as: "deliveries" });
 NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
 
 export { primaryRows, sequelize } from "@/models/db";
+export { parkVersionListener, PARK_VERSIONS_CHANNEL, type ListenerMark } from "@/models/park-version-listener";
 export {
   AccountLink,
   AuditEvent,

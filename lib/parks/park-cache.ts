@@ -1,13 +1,17 @@
 import "server-only";
 import { QueryTypes } from "sequelize";
-import { primaryRows, sequelize } from "@/models";
+import { parkVersionListener, primaryRows, sequelize, type ListenerMark } from "@/models";
 
 /**
  * Answers computed per park (the board, the map's GeoJSON) kept in this process until the park
  * changes. "Changes" is decided by PostgreSQL, not by this process: triggers raise the park's
  * row in park_versions on every write to what these answers show (migrations/20261202-1601), and
  * each request reads that row from the primary, one indexed lookup, before using a cached answer.
- * So an answer cached by instance B is dropped the moment instance A's write commits. An answer
+ * So an answer cached by instance B is dropped the moment instance A's write commits. The same
+ * triggers NOTIFY every instance (models/park-version-listener.ts): while that connection is up,
+ * an answer whose park has had no notification since its version was read is served without
+ * asking the database at all; with the connection down or silent, every request reads the
+ * version row as before. An answer
  * also expires at the park's next midnight (its "today" rolls over) and when a scheduled park
  * state starts or ends, which happen without a write.
  * On a miss the answer is computed from the primary too: a replica that lags would otherwise
@@ -28,7 +32,7 @@ SELECT LEAST(
 ) AS valid_until
 FROM parks p WHERE p.id = $1`;
 
-type Entry<T> = { version: string; today: string; validUntil: number; value: Promise<T> };
+type Entry<T> = { parkId: string; version: string; today: string; validUntil: number; mark: ListenerMark; value: Promise<T> };
 
 /** Parks × answer kinds is small; the cap only guards against a flood of slugs. */
 const MAX_ENTRIES = 1_000;
@@ -54,13 +58,21 @@ async function validUntil(parkId: string, now: Date): Promise<number> {
  * is not kept.
  */
 export async function cachedForPark<T>(slug: string, kind: string, compute: (stamp: ParkStamp) => Promise<T>, now = new Date()): Promise<T | null> {
-  const stamp = await parkStamp(slug, now);
-  if (!stamp) return null;
   const key = `${kind}\u0000${slug}`;
   const known = entries.get(key) as Entry<T> | undefined;
-  if (known && known.version === stamp.version && known.today === stamp.today && now.getTime() < known.validUntil) return known.value;
+  const fresh = known && now.getTime() < known.validUntil;
+  if (fresh && parkVersionListener.unchangedSince(known.parkId, known.mark)) return known.value;
 
-  const entry: Entry<T> = { version: stamp.version, today: stamp.today, validUntil: Infinity, value: compute(stamp) };
+  const before = parkVersionListener.snapshot();
+  const stamp = await parkStamp(slug, now);
+  if (!stamp) return null;
+  const mark = parkVersionListener.markAfter(stamp.parkId, before);
+  if (fresh && known.parkId === stamp.parkId && known.version === stamp.version && known.today === stamp.today) {
+    known.mark = mark;
+    return known.value;
+  }
+
+  const entry: Entry<T> = { parkId: stamp.parkId, version: stamp.version, today: stamp.today, validUntil: Infinity, mark, value: compute(stamp) };
   entries.delete(key);
   if (entries.size >= MAX_ENTRIES) entries.delete(entries.keys().next().value!);
   entries.set(key, entry);

@@ -33,6 +33,24 @@ export function embedContentSecurityPolicy(frameAncestors: string): string {
   return ["default-src 'none'", "style-src 'unsafe-inline'", "img-src 'self' data:", "base-uri 'none'", "form-action 'none'", `frame-ancestors ${frameAncestors}`].join("; ");
 }
 
+/** Served over HTTPS (APP_URL), so browsers are told to keep to it (HSTS). */
+export const servedOverHttps = () => (process.env.APP_URL ?? "").startsWith("https://");
+
+/**
+ * Public read-only API answers that proxy.ts does not run for (its matcher leaves them out: the
+ * board and the map's GeoJSON are the busiest requests, and they need neither a nonce nor a
+ * redirect). Their answers carry these headers themselves (lib/server/api/etag.ts, errors.ts).
+ */
+export const PROXY_FREE_API = /^\/api\/parks\/[^/]+\/(board|trails\.geojson|hazards\.geojson)$/;
+
+/** A JSON or GeoJSON answer runs no script and is framed by nobody. */
+export const API_CONTENT_SECURITY_POLICY = "default-src 'none'; frame-ancestors 'none'";
+
+/** The headers an API answer sends when the proxy has not set them. */
+export function apiSecurityHeaders(): Record<string, string> {
+  return { ...staticSecurityHeaders({ production: servedOverHttps() }), "Content-Security-Policy": API_CONTENT_SECURITY_POLICY };
+}
+
 export function staticSecurityHeaders({ production }: { production: boolean }): Record<string, string> {
   return {
     "X-Content-Type-Options": "nosniff",

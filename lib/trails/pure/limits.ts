@@ -12,7 +12,7 @@ export const TRAIL_LIMITS = {
    * stopped at once, a test tap on a phone); the shortest real line in a park, one feature with its
    * run-in and landing, is longer. Common practice, no published source.
    */
-  minTrailLengthM: 20,
+  minTrailLengthM: 50,
   /** Longest believable step between consecutive points of one segment. */
   maxStepM: 500,
   /** A line whose nearest point is further than this from the park's centre is refused. */

@@ -107,7 +107,8 @@ describe("where the line lies", () => {
   });
 
   it("does not judge distance or swapping without the park's location", () => {
-    const far = JSON.stringify({ type: "LineString", coordinates: [[40, 20], [40.0002, 20.0001]] });
+    // About 235 m long: a real trail's length, above the 50 m minimum.
+    const far = JSON.stringify({ type: "LineString", coordinates: [[40, 20], [40.002, 20.001]] });
     expect(parseTrailFile({ bytes: bytes(far), filename: "t.geojson" }).segments).toHaveLength(1);
     expectAppError(() => parseTrailFile({ bytes: bytes(far), filename: "t.geojson", parkCenter: PARK }), 422, "km from the park");
   });
