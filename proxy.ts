@@ -1,14 +1,17 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { REQUEST_ID_HEADER, requestIdFrom } from "@/lib/server/request-id";
+import { isCrossOriginWrite } from "@/lib/shared/same-origin";
 import { contentSecurityPolicy, SELF_FRAMED_PATHS, servedOverHttps, staticSecurityHeaders } from "@/lib/server/security-headers";
 
 /**
  * Runs before every page and API request but the busiest public reads (PROXY_FREE_API in
  * lib/server/security-headers.ts, left out by the matcher below), which set their headers
- * themselves. Three jobs only:
+ * themselves. Four jobs only:
  * 1. security headers, with a per-request CSP nonce;
  * 2. an optimistic redirect to sign in for private pages without a session cookie;
- * 3. a request id (x-request-id) for the logs, passed on to the app and sent back in the response.
+ * 3. a request id (x-request-id) for the logs, passed on to the app and sent back in the response;
+ * 4. a server action (any POST to a page) from a foreign origin gets 403 here: Next.js itself
+ *    aborts it but answers 500 (docs/security.md).
  * Pages and handlers still do the real permission checks on the server.
  */
 const PRIVATE = ["/staff", "/admin", "/me"];
@@ -20,6 +23,12 @@ export function proxy(request: NextRequest) {
 
   let response: NextResponse;
   const requestId = requestIdFrom(request.headers);
+  if (!pathname.startsWith("/api/") && isCrossOriginWrite(request, process.env.APP_URL ?? request.nextUrl.origin)) {
+    response = new NextResponse("Cross-site request refused.", { status: 403, headers: { "content-type": "text/plain; charset=utf-8" } });
+    response.headers.set(REQUEST_ID_HEADER, requestId);
+    for (const [name, value] of Object.entries(staticSecurityHeaders({ production: servedOverHttps() }))) response.headers.set(name, value);
+    return response;
+  }
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const csp = contentSecurityPolicy(nonce, { dev: process.env.NODE_ENV === "development" });
   if (isPrivate && !hasSession) {

@@ -1,5 +1,5 @@
 import "server-only";
-import { fn, col, Op } from "sequelize";
+import { fn, col, literal, Op } from "sequelize";
 import { parkToday, currentReportsByTrail } from "@/lib/conditions/park-today";
 import { hazardsCollection, trailFeaturesCollection, trailsCollection, type TodayReport } from "@/lib/map/pure/geojson";
 import { parkLayersCollection } from "@/lib/map/pure/park-layers";
@@ -40,12 +40,16 @@ async function trailsOnDay(parkId: string, today: string, read: ReadFrom = {}) {
 /** The park's trails as GeoJSON, each with today's status. */
 export const parkTrailsGeoJson = (park: Park, now = new Date()) => trailsOnDay(park.id, parkToday(park, now));
 
-export async function openHazards(parkId: string, read: ReadFrom = {}) {
-  return Hazard.findAll({ where: { parkId, resolvedAt: null }, order: [["reportedAt", "DESC"]], ...read });
+/** A park's open hazards; the staff map keeps those of archived trails so they can still be resolved. */
+export async function openHazards(parkId: string, read: ReadFrom = {}, onlyLiveTrails = false) {
+  // Pinned off any trail, or on a trail not archived (the archive bumps park_versions, so cached layers follow).
+  const live = onlyLiveTrails ? { [Op.or]: [{ trailId: null }, { trailId: { [Op.in]: literal("(SELECT id FROM trails WHERE archived_at IS NULL)") } }] } : {};
+  return Hazard.findAll({ where: { parkId, resolvedAt: null, ...live }, order: [["reportedAt", "DESC"]], ...read });
 }
 
+/** The public hazard layer: an archived trail's open hazards leave it with the trail. */
 export async function parkHazardsGeoJson(parkId: string, read: ReadFrom = {}) {
-  return hazardsCollection((await openHazards(parkId, read)).map((h) => h.get({ plain: true })));
+  return hazardsCollection((await openHazards(parkId, read, true)).map((h) => h.get({ plain: true })));
 }
 
 /** trails.geojson, serialised, from the per-park cache (lib/parks/park-cache.ts); null when there is no such park. */

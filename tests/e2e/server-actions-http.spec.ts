@@ -48,13 +48,13 @@ const ANONYMOUS: Record<string, number | "public"> = {
   removeSubscriptionAction: 401,
 };
 
-async function postAction(context: APIRequestContext, id: string, page: string, fields: Record<string, string>, cookie?: string) {
+async function postAction(context: APIRequestContext, id: string, page: string, fields: Record<string, string>, cookie?: string, extraHeaders: Record<string, string> = {}) {
   // The form's fields first and the arguments last, in the order React's client sends them: the
   // server resolves "$K1" when it reads field "0" and takes the fields that arrived before it.
   const multipart = new FormData();
   for (const [name, value] of Object.entries(fields)) multipart.append(`_1_${name}`, value);
   multipart.append("0", JSON.stringify([{ ok: false }, "$K1"]));
-  const response = await context.post(page, { multipart, headers: { "Next-Action": id, Accept: "text/x-component", ...(cookie ? { cookie } : {}) }, maxRedirects: 0 });
+  const response = await context.post(page, { multipart, headers: { "Next-Action": id, Accept: "text/x-component", ...(cookie ? { cookie } : {}), ...extraHeaders }, maxRedirects: 0 });
   const text = await response.text();
   // The flight response holds the action's return value as one JSON line ("1:{...}").
   for (const line of text.split("\n")) {
@@ -93,5 +93,26 @@ test("a rider posting the staff's park-state action directly is refused, and the
   // The same request shape works for an action the rider may use, so the refusal above is the check, not the encoding.
   const [unitsId] = Object.entries(manifest()).find(([, e]) => e.exportedName === "updateUnitsAction")!;
   expect((await postAction(rider, unitsId, "/me", { pressure: "psi", mass: "kg", distance: "metric" })).state).toMatchObject({ ok: true });
+  await rider.dispose();
+});
+
+// OWASP ASVS v5.0.0 3.5.1–3.5.3 (cross-site request forgery): a server action posted with a
+// foreign Origin is refused with 403 by proxy.ts before it runs. Next.js 16 would abort it too,
+// but answer 500 (action-handler.js); the proxy makes the answer say what happened.
+test("a server action posted with a foreign Origin gets 403 and changes nothing; our own Origin works", async ({ baseURL }) => {
+  const rider = await callerContext(baseURL!, "rider");
+  const [id] = Object.entries(manifest()).find(([, e]) => e.exportedName === "updateUnitsAction")!;
+  const units = async () => ((await (await rider.get("/api/me/export")).json()) as { account: { units: unknown } }).account.units;
+  const before = JSON.stringify(await units());
+  expect(before).toContain("psi");
+  const forged = await postAction(rider, id, "/me", { pressure: "bar", mass: "lb", distance: "imperial" }, undefined, { Origin: "https://forged.example" });
+  expect(forged.http).toBe(403);
+  expect(forged.state).toBeNull();
+  // A form posted without JavaScript carries no Next-Action header: refused the same way.
+  const plain = await rider.post("/me", { form: { pressure: "bar" }, headers: { Origin: "https://forged.example" }, maxRedirects: 0 });
+  expect(plain.status()).toBe(403);
+  expect(JSON.stringify(await units())).toBe(before);
+  const own = await postAction(rider, id, "/me", { pressure: "psi", mass: "kg", distance: "metric" }, undefined, { Origin: new URL(baseURL!).origin });
+  expect(own.state).toMatchObject({ ok: true });
   await rider.dispose();
 });

@@ -9,7 +9,7 @@ import { formatTemperature, KPA_PER_PSI, type PressureUnit } from "@/lib/shared/
 import { pressureInputSchema, type PressureInput, type PressureInputRaw, type Surface, type WheelSetup } from "@/lib/pressure/pure/schemas";
 import { standardPressureKpa } from "@/lib/pressure/pure/physics/atmosphere";
 import { baselineOnTrail } from "./baseline";
-import { learnFromRides } from "./learning";
+import { learnFromRides, slickGroundReason } from "./learning";
 import { halfWidthKpa, uncertaintyParts, type BasisKind } from "./uncertainty";
 import { limitWheel, wheelLimits, type LimitedWheel } from "./band";
 import { ESTIMATE_CAUTION, pumpCaution, reportCautions, STANDARD_CAUTIONS } from "./cautions";
@@ -49,12 +49,15 @@ type Basis = {
  * there are enough, else the baseline carried from where it was checked to where it was ridden
  * (Gay-Lussac, ISO 2533), else the estimate. Today's pump reading is worked out from it in pump.ts.
  */
-function basisOf(input: PressureInput): Basis {
+function basisOf(input: PressureInput, day: PlannedDay): Basis {
   const { baseline, unit } = input;
   const reference = baseline?.surfaces ?? (["dry"] as const);
   const learned = learnFromRides(input.rides, reference, unit);
   if (learned) {
-    return { kind: "rides", frontKpa: learned.front.centreKpa, rearKpa: learned.rear.centreKpa, reasons: learned.reasons, referenceSurfaces: reference, ridesHalfKpa: { front: learned.front.halfKpa, rear: learned.rear.halfKpa } };
+    const slick = slickGroundReason(learned, day, unit);
+    const reasons = slick ? [...learned.reasons, slick] : learned.reasons;
+    const [f, r] = [learned.front.centreKpa + (slick?.frontKpa ?? 0), learned.rear.centreKpa + (slick?.rearKpa ?? 0)];
+    return { kind: "rides", frontKpa: f, rearKpa: r, reasons, referenceSurfaces: reference, ridesHalfKpa: { front: learned.front.halfKpa, rear: learned.rear.halfKpa } };
   }
   if (!baseline) return { kind: "estimate", ...estimatePressures(input), referenceSurfaces: reference };
   const checked = baseline.temperatureC === undefined ? "" : ` at ${formatTemperature(baseline.temperatureC)}`;
@@ -78,7 +81,7 @@ export function computePressureBand(raw: PressureInput | PressureInputRaw): Pres
   const { unit } = input;
   const mass = input.riderMassKg + input.bikeMassKg;
   const day = planDay(input.today);
-  const base = basisOf(input);
+  const base = basisOf(input, day);
   const tweak = todaysTweak({ day, referenceSurfaces: base.referenceSurfaces, front: input.front, rear: input.rear, basis: base, unit });
 
   const conditions = pumpConditions(input.today);

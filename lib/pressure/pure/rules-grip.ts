@@ -22,7 +22,8 @@ export function leastGrippy(surfaces: readonly Surface[]): Surface | undefined {
   return worst;
 }
 
-const ADJECTIVE: Record<Surface, string> = {
+/** A surface as an adjective ("wet ground", "snowy ground"). */
+export const GROUND_WORDS: Record<Surface, string> = {
   dry: "dry", dusty: "dusty", tacky: "tacky", damp: "damp", wet: "wet",
   muddy: "muddy", loose: "loose", rocky: "rocky", frozen: "frozen", snow: "snowy",
 };
@@ -44,10 +45,10 @@ export function surfaceReasons(day: PlannedDay, referenceSurfaces: readonly Surf
     const [front, rear] = stepsKpa([SURFACE_GRIP[surface][0] - refFront, SURFACE_GRIP[surface][1] - refRear], basis, share);
     if (isNegligible(front) && isNegligible(rear)) continue;
     const why = front + rear < 0 ? "less grip" : "more grip";
-    const versus = reference === "dry" ? "than dry ground" : `than the ${ADJECTIVE[reference]} ground your baseline was set on`;
+    const versus = reference === "dry" ? "than dry ground" : `than the ${GROUND_WORDS[reference]} ground your baseline was set on`;
     reasons.push({
       id: `grip-${surface}`,
-      text: `${capitalise(ADJECTIVE[surface])}${shareText(day, trails)}, ${why} ${versus}: ${wheelsText(front, rear, unit)}`,
+      text: `${capitalise(GROUND_WORDS[surface])}${shareText(day, trails)}, ${why} ${versus}: ${wheelsText(front, rear, unit)}`,
       frontKpa: front,
       rearKpa: rear,
     });
@@ -70,7 +71,7 @@ export function slickFeatureReasons(day: PlannedDay, basis: Basis, unit: Pressur
     const share = trails.length / day.trails.length;
     const [front, rear] = stepsKpa(item.fractions, basis, share);
     const slick = [...new Set(trails.map((t) => leastGrippy(t.surfaces.filter((s) => SLICK_SURFACES.includes(s)))))];
-    const adjective = slick.length === 1 && slick[0] ? ADJECTIVE[slick[0]] : "slick";
+    const adjective = slick.length === 1 && slick[0] ? GROUND_WORDS[slick[0]] : "slick";
     reasons.push({
       id: item.id,
       text: `${capitalise(adjective)} ${item.noun}${shareText(day, trails)}, lower for grip: ${wheelsText(front, rear, unit)}`,

@@ -2,6 +2,7 @@ import "server-only";
 import { getActor } from "@/lib/server/auth/actor";
 import type { Actor } from "@/lib/server/auth/permissions";
 import { AppError } from "@/lib/shared/errors";
+import { isCrossOriginWrite } from "@/lib/shared/same-origin";
 import { env } from "@/lib/server/env";
 import { logger, withRequestId } from "@/lib/server/logger";
 import { requestIdFrom } from "@/lib/server/request-id";
@@ -11,24 +12,9 @@ import { recordAudit } from "@/lib/audit/record";
 type Context<P> = { params: Promise<P> };
 export type HandlerArgs<P> = { request: Request; params: P; actor: Actor | null };
 
-const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
-
-/**
- * Route handlers have no CSRF protection of their own (ASVS v5.0.0 3.5.1–3.5.3):
- * a state-changing request from a browser must come from our own origin.
- * Requests without browser headers (scripts, curl) carry no ambient cookies to abuse.
- */
+/** Route handlers have no CSRF protection of their own: the shared origin rule (lib/shared/same-origin.ts). */
 export function assertSameOrigin(request: Request) {
-  if (SAFE_METHODS.has(request.method)) return;
-  const site = request.headers.get("sec-fetch-site");
-  if (site && site !== "same-origin" && site !== "none") throw new AppError(403, "Cross-site request refused.");
-  const origin = request.headers.get("origin");
-  if (origin) {
-    const allowed = new Set([new URL(env().APP_URL).origin, new URL(request.url).origin]);
-    const host = request.headers.get("host");
-    if (host) allowed.add(`${new URL(request.url).protocol}//${host}`);
-    if (!allowed.has(origin)) throw new AppError(403, "Cross-site request refused.");
-  }
+  if (isCrossOriginWrite(request, env().APP_URL)) throw new AppError(403, "Cross-site request refused.");
 }
 
 /**

@@ -3,7 +3,8 @@
 // (docs/pressure-rules.md); the directions are common practice, no published source.
 import { describe, expect, it } from "vitest";
 import { computePressureBand } from "@/lib/pressure/pure";
-import { learnFromRides, onReferenceGround } from "@/lib/pressure/pure/learning";
+import { learnFromRides, onReferenceGround, slickGroundReason } from "@/lib/pressure/pure/learning";
+import { ONE_SIDED_STEP } from "@/lib/pressure/pure/settings";
 import type { RideEvidence, Symptom } from "@/lib/pressure/pure/schemas";
 import { kpaToPsi, psiToKpa } from "@/lib/shared/units";
 import { adult, withBaseline } from "./fixtures";
@@ -65,9 +66,10 @@ describe("learning from ride logs", () => {
     expect(onReferenceGround(psiToKpa(18), ["dry"], ["dry"], "front")).toBe(psiToKpa(18));
   });
 
-  it("sliding on a wet day says nothing about the dry pressure; sliding on dry ground is an upper bound", () => {
+  it("sliding on a wet day does not lower the dry range; sliding on dry ground is an upper bound", () => {
     const wetSlide = learn([ride(19, 23), ride(19, 23, ["sliding"], ["fine"], ["wet"])])!;
     expect(wetSlide.front.highKpa).toBeUndefined();
+    expect(wetSlide.front.slickHighs).toEqual([{ kpa: onReferenceGround(psiToKpa(19), ["wet"], ["dry"], "front"), surface: "wet" }]);
     const drySlide = learn([ride(19, 23), ride(22, 23, ["sliding"], ["fine"], ["dry"])])!;
     expect(kpaToPsi(drySlide.front.highKpa!)).toBeCloseTo(22, 9);
   });
@@ -78,5 +80,58 @@ describe("learning from ride logs", () => {
     const wet = computePressureBand(withBaseline({ rides: logs, today: { surfaces: ["wet"] } }));
     expect(kpaToPsi(dry.front.targetKpa)).toBeCloseTo(21, 1);
     expect(wet.front.targetKpa).toBeLessThan(dry.front.targetKpa);
+  });
+
+  // A slide on wet ground is wet-ground evidence: an upper bound for ground that slick, converted
+  // with the wet grip step. Common practice, no published source (docs/pressure-rules.md).
+  describe("sliding on slick ground bounds the slick-ground pressure only", () => {
+    // Fine at 22/26 on dry ground twice; slid at the front at 20/26 on a wet day.
+    const logs = [ride(22, 26), ride(22, 26), ride(20, 26, ["sliding"], ["fine"], ["wet"])];
+    const wetBoundKpa = onReferenceGround(psiToKpa(20), ["wet"], ["dry"], "front");
+
+    it("a dry day keeps the dry range: the band is the one without the wet slide", () => {
+      const withSlide = computePressureBand(adult({ rides: logs, today: { surfaces: ["dry"] } }));
+      const without = computePressureBand(adult({ rides: logs.slice(0, 2), today: { surfaces: ["dry"] } }));
+      expect(withSlide.front.targetKpa).toBe(without.front.targetKpa);
+      expect(withSlide.reasons.some((r) => r.id === "basis-rides-slick")).toBe(false);
+    });
+
+    it("a wet day holds the front under the slide (less a one-sided step) and says why; the rear is untouched", () => {
+      const wet = computePressureBand(adult({ rides: logs, today: { surfaces: ["wet"] } }));
+      const wetWithout = computePressureBand(adult({ rides: logs.slice(0, 2), today: { surfaces: ["wet"] } }));
+      const slick = wet.reasons.find((r) => r.id === "basis-rides-slick")!;
+      // Basis 22 psi on dry ground; held at the wet bound on the reference ground less 5 %.
+      expect(slick.frontKpa).toBeCloseTo(wetBoundKpa * (1 - ONE_SIDED_STEP) - psiToKpa(22), 1);
+      expect(slick.rearKpa).toBe(0);
+      expect(slick.text).toMatch(/^Your rides slid on wet ground/);
+      expect(wet.front.targetKpa).toBeLessThan(wetWithout.front.targetKpa);
+      // The same wet-day log felt fine at the rear: the rear is what that log gives without a front slide.
+      const frontFine = computePressureBand(adult({ rides: [...logs.slice(0, 2), ride(20, 26, ["fine"], ["fine"], ["wet"])], today: { surfaces: ["wet"] } }));
+      expect(wet.rear.targetKpa).toBe(frontFine.rear.targetKpa);
+      // On the wet day itself the target lands under what slid.
+      expect(wet.front.targetKpa).toBeLessThan(psiToKpa(20));
+    });
+
+    it("applies to ground at least as slick (muddy) but not to grippier ground (damp)", () => {
+      const learned = learn(logs)!;
+      const day = (surfaces: RideEvidence["surfaces"]) => ({ scope: "day" as const, trails: [{ name: "today", surfaces, features: [], reportAgeHours: undefined, hasReport: true }] });
+      expect(slickGroundReason(learned, day(["muddy"]), "psi")!.frontKpa).toBeLessThan(0);
+      expect(slickGroundReason(learned, day(["damp"]), "psi")).toBeNull();
+      expect(slickGroundReason(learned, day(["dry"]), "psi")).toBeNull();
+    });
+
+    it("counts by the share of planned trails that are that slick, like every grip rule", () => {
+      const learned = learn(logs)!;
+      const trail = (name: string, surfaces: RideEvidence["surfaces"]) => ({ name, surfaces, features: [], reportAgeHours: 1, hasReport: true });
+      const allWet = slickGroundReason(learned, { scope: "trails", trails: [trail("A", ["wet"]), trail("B", ["wet"])] }, "psi")!;
+      const halfWet = slickGroundReason(learned, { scope: "trails", trails: [trail("A", ["wet"]), trail("B", ["dry"])] }, "psi")!;
+      expect(halfWet.frontKpa).toBeCloseTo(allWet.frontKpa / 2, 9);
+    });
+
+    it("never holds a wheel below a rim-strike bound", () => {
+      const learned = learn([ride(21, 26, ["rim-strike"]), ride(22, 26), ride(17, 26, ["sliding"], ["fine"], ["wet"])])!;
+      const reason = slickGroundReason(learned, { scope: "day", trails: [{ name: "today", surfaces: ["wet"], features: [], reportAgeHours: undefined, hasReport: true }] }, "psi")!;
+      expect(learned.front.centreKpa + reason.frontKpa).toBeCloseTo(learned.front.lowKpa!, 9);
+    });
   });
 });
