@@ -3,12 +3,13 @@ import "server-only";
  * The link-preview image (Open Graph, Twitter card) drawn by next/og: the park's name and
  * today's counts, and the trail's own status on a trail page. 1200 × 630 is the size Open
  * Graph consumers crop least. Satori lays out flexbox only and counts a number child as
- * several nodes, so each element gets one string.
+ * several nodes, so each element gets one string. Text stays within the Latin glyphs of next/og's
+ * bundled font: any other glyph (✓, ✕) makes it fetch a font from the internet at render time.
  */
 import { ImageResponse } from "next/og";
 import { z } from "zod";
 import { boardForPark } from "@/lib/conditions/board";
-import { STATUS_LABELS, STATUS_SIGNS } from "@/lib/conditions/pure/labels";
+import { STATUS_LABELS } from "@/lib/conditions/pure/labels";
 import { statusCounts } from "@/lib/reach/pure/status-feed";
 import { AppError, notFound } from "@/lib/shared/errors";
 import { longDate } from "@/lib/shared/park-clock";
@@ -43,7 +44,7 @@ export async function previewImage(slug: string, search: URLSearchParams): Promi
           <div style={{ fontSize: 34, color: "#5b4a3a" }}>{`Loamcast · ${longDate(board.date)}`}</div>
           <div style={{ fontSize: 80, lineHeight: 1.05, marginTop: 8 }}>{trail ? trail.name : board.park.name}</div>
           <div style={{ fontSize: 40, marginTop: 8, color: status ? INK[status] : "#5b4a3a" }}>
-            {trail ? (status ? `${STATUS_SIGNS[status]} ${STATUS_LABELS[status]} today · ${board.park.name}` : `Not inspected yet today · ${board.park.name}`) : "Today's trail conditions"}
+            {trail ? (status ? `${STATUS_LABELS[status]} today · ${board.park.name}` : `Not inspected yet today · ${board.park.name}`) : "Today's trail conditions"}
           </div>
         </div>
         <div style={{ display: "flex", gap: 28 }}>
