@@ -17,7 +17,7 @@ const STAFF_EMAIL = "ranger@demo.loamcast.test";
 const STOP_WITHIN_MS = 30_000;
 
 /** A clean environment: what `npm test` exported (DATABASE_URL, PORT, SMTP_URL…) must not leak in. */
-const env = { PATH: process.env.PATH!, HOME: process.env.HOME ?? "/root", LOAMCAST_PORT_OFFSET: String(OFFSET), LOAMCAST_PG_CLUSTER: CLUSTER, PHOTO_STORAGE_DIR: `.local/photos-${CLUSTER}` };
+const env = { PATH: process.env.PATH!, HOME: process.env.HOME ?? "/root", LOAMCAST_PORT_OFFSET: String(OFFSET), LOAMCAST_PG_CLUSTER: CLUSTER, PHOTO_STORAGE_DIR: `.local/photos-${CLUSTER}` } as unknown as NodeJS.ProcessEnv; // no NODE_ENV, as for `npm start`
 const sh = (script: string) => execFileSync("bash", ["-c", `. scripts/bootstrap.sh; . scripts/pg.sh; ${script}`], { env, encoding: "utf8", timeout: 60_000 }).trim();
 const clusterDir = () => sh(`pg_cluster_dir ${CLUSTER}`);
 
@@ -27,8 +27,8 @@ async function start(): Promise<Started> {
   // Its own process group, so the test can tell every process it started by its group id.
   const child = spawn("bash", ["scripts/start.sh"], { env, detached: true, stdio: ["ignore", "pipe", "pipe"] });
   let output = "";
-  child.stdout!.on("data", (d) => (output += d));
-  child.stderr!.on("data", (d) => (output += d));
+  child.stdout.on("data", (d: Buffer) => (output += d));
+  child.stderr.on("data", (d: Buffer) => (output += d));
   const exited = new Promise<number | null>((resolve) => child.on("exit", (code, signal) => resolve(code ?? (signal ? -1 : null))));
   for (let tries = 0; ; tries++) {
     const up = await fetch(`${APP}/api/health`).then((r) => r.ok, () => false);
