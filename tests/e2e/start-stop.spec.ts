@@ -39,12 +39,15 @@ async function start(): Promise<Started> {
   return { child, output: () => output, exited };
 }
 
-/** pid → "ppid pgid" for every process on the machine. */
+/**
+ * Every live process on the machine by pid. Zombies are left out: they have exited, and one
+ * handed to an init that does not reap (a container's) stays listed until the container ends.
+ */
 function processes(): Map<number, { ppid: number; pgid: number; started: string }> {
-  const rows = execFileSync("ps", ["-eo", "pid=,ppid=,pgid=,lstart="], { encoding: "utf8" }).trim().split("\n");
-  return new Map(rows.map((row) => {
-    const [pid, ppid, pgid, ...started] = row.trim().split(/\s+/);
-    return [Number(pid), { ppid: Number(ppid), pgid: Number(pgid), started: started.join(" ") }];
+  const rows = execFileSync("ps", ["-eo", "pid=,ppid=,pgid=,stat=,lstart="], { encoding: "utf8" }).trim().split("\n");
+  return new Map(rows.flatMap((row) => {
+    const [pid, ppid, pgid, stat, ...started] = row.trim().split(/\s+/);
+    return stat.startsWith("Z") ? [] : [[Number(pid), { ppid: Number(ppid), pgid: Number(pgid), started: started.join(" ") }] as const];
   }));
 }
 
