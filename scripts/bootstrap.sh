@@ -154,7 +154,9 @@ build_if_needed() {
 
 # The first half of `npm start` and `npm run dev`: packages, environment, PostgreSQL migrated and
 # seeded, the fakes and the notice worker. Everything started is stopped on exit, Ctrl-C or SIGTERM.
+# LOAMCAST_PG_CLUSTER names another cluster than "dev" (tests/e2e/start-stop.spec.ts uses its own).
 start_local_services() {
+  PG_CLUSTER="${LOAMCAST_PG_CLUSTER:-dev}"
   ensure_node_modules
   load_env dev
   port_free_or_die "$PORT" "the web app (set PORT to use another)"
@@ -162,11 +164,11 @@ start_local_services() {
     trap - EXIT INT TERM
     say "› Stopping…"
     stop_children
-    pg_stop dev
+    pg_stop "$PG_CLUSTER"
     say "› Stopped. Your data is kept for the next start."
   }
   trap cleanup EXIT INT TERM
-  pg_start dev "$PG_PORT" "$PG_PASSWORD"
+  pg_start "$PG_CLUSTER" "$PG_PORT" "$PG_PASSWORD"
   node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
   start_fake_smtp
   start_fake_push
