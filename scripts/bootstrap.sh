@@ -101,41 +101,38 @@ port_free_or_die() {
 
 # Children started by the scripts, stopped on exit.
 CHILD_PIDS=()
-start_fake_smtp() {
-  [ -n "${FAKE_SMTP_CONTROL_URL:-}" ] || return 0
-  port_free_or_die "$(node -e 'console.log(new URL(process.env.SMTP_URL).port)')" "fake SMTP server"
-  node --conditions=react-server --import tsx scripts/fake-smtp.ts &
+# start_fake NAME SCRIPT PORT READY: starts scripts/SCRIPT in the background and waits until the
+# shell command READY succeeds (10 s at most).
+start_fake() {
+  local name="$1" script="$2" port="$3" ready="$4"
+  port_free_or_die "$port" "$name"
+  node --conditions=react-server --import tsx "scripts/$script" &
   CHILD_PIDS+=($!)
   for _ in $(seq 1 50); do
-    node -e 'fetch(process.env.FAKE_SMTP_CONTROL_URL + "/messages").then(r => process.exit(r.ok ? 0 : 1), () => process.exit(1))' && return 0
+    eval "$ready" && return 0
     sleep 0.2
   done
-  echo "✗ The fake SMTP server did not start" >&2; exit 1
+  echo "✗ The $name did not start" >&2; exit 1
+}
+
+# Readiness: the fake answers on its control address (or, for S3, accepts a connection).
+answers() { node -e 'fetch(process.argv[1]).then(r => process.exit(r.ok ? 0 : 1), () => process.exit(1))' "$1"; }
+port_of() { node -e 'console.log(new URL(process.argv[1]).port)' "$1"; }
+
+start_fake_smtp() {
+  [ -n "${FAKE_SMTP_CONTROL_URL:-}" ] || return 0
+  start_fake "fake SMTP server" fake-smtp.ts "$(port_of "$SMTP_URL")" 'answers "$FAKE_SMTP_CONTROL_URL/messages"'
 }
 
 start_fake_push() {
   [ -n "${FAKE_PUSH_URL:-}" ] || return 0
-  port_free_or_die "$(node -e 'console.log(new URL(process.env.FAKE_PUSH_URL).port)')" "fake push service"
-  node --conditions=react-server --import tsx scripts/fake-push.ts &
-  CHILD_PIDS+=($!)
-  for _ in $(seq 1 50); do
-    node -e 'fetch(process.env.FAKE_PUSH_URL + "/control/received").then(r => process.exit(r.ok ? 0 : 1), () => process.exit(1))' && return 0
-    sleep 0.2
-  done
-  echo "✗ The fake push service did not start" >&2; exit 1
+  start_fake "fake push service" fake-push.ts "$(port_of "$FAKE_PUSH_URL")" 'answers "$FAKE_PUSH_URL/control/received"'
 }
 
 start_fake_s3() {
   [ -n "${FAKE_S3_DIR:-}" ] || return 0
-  port_free_or_die "$S3_FAKE_PORT" "fake S3 server"
   mkdir -p "$FAKE_S3_DIR"
-  node --conditions=react-server --import tsx scripts/fake-s3.ts &
-  CHILD_PIDS+=($!)
-  for _ in $(seq 1 50); do
-    (exec 3<>"/dev/tcp/127.0.0.1/$S3_FAKE_PORT") 2>/dev/null && return 0
-    sleep 0.2
-  done
-  echo "✗ The fake S3 server did not start" >&2; exit 1
+  start_fake "fake S3 server" fake-s3.ts "$S3_FAKE_PORT" '(exec 3<>"/dev/tcp/127.0.0.1/$S3_FAKE_PORT") 2>/dev/null'
 }
 
 stop_children() {
