@@ -2,8 +2,9 @@
 /**
  * "Today's pressure": the day (park, trails) and the setup → POST /api/pressure → the band. A
  * saved setup computes at once, and again whenever the day changes; a bike typed in computes on
- * submit. The band sits beside the form on a desktop and above it on a phone; errors sit beside
- * their fields and focus moves to the first. An unsaved setup can be kept in this browser only.
+ * submit, asked in three steps (`BikeSteps`). The band sits beside the form on a desktop and above
+ * it on a phone; errors sit beside their fields, the step holding the first one opens, and focus
+ * moves to it. An unsaved setup can be kept in this browser only.
  */
 import Link from "next/link";
 import { useRouter } from "next/navigation";
@@ -13,10 +14,11 @@ import type { PressureAnswer } from "@/lib/pressure/pressure-today";
 import { PRESSURE_UNITS, type MassUnit, type PressureUnit } from "@/lib/shared/units";
 import { emptyDayDraft, pressureFieldFor, pressureRequestFrom, type DayDraft } from "@/lib/pressure/pure/pressure-form";
 import { emptySetupDraft, setupDraftSchema, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
+import { LAST_BIKE_STEP, checkStep, firstStepWithError } from "@/lib/pressure/pure/bike-steps";
 import { BandResult, Cautions } from "./band-result";
+import { BikeSteps } from "./bike-steps";
 import { DayFields, type ParkOption, type TrailOption } from "./day-fields";
 import { CheckInput, Segments } from "./inputs";
-import { SetupFields } from "./setup-fields";
 
 export type SetupOption = { id: string; name: string; summary: string };
 type Props = {
@@ -42,6 +44,9 @@ export function PressureForm(props: Props) {
   const [unit, setUnit] = useState<PressureUnit>(props.units.pressure);
   const [day, setDay] = useState<DayDraft>(() => emptyDayDraft(props.park?.slug ?? null, props.defaultTrailIds));
   const [errors, setErrors] = useState<DraftErrors>({});
+  /** The step of a bike typed in that is open, and the furthest one reached. */
+  const [step, setStep] = useState(0);
+  const [reached, setReached] = useState(0);
   const [message, setMessage] = useState<string | null>(null);
   const [answer, setAnswer] = useState<PressureAnswer | null>(null);
   /** A rider's own submit in flight (the button says so and waits); a band computed at once never touches the button. */
@@ -59,8 +64,11 @@ export function PressureForm(props: Props) {
     try {
       const saved = setupDraftSchema.safeParse(JSON.parse(localStorage.getItem(STORE.setup) ?? "null"));
       if (saved.success) {
+        // A bike kept on this device has been through every step: open the last, ready to submit.
         setDraft(saved.data);
         setRemember(true);
+        setStep(LAST_BIKE_STEP);
+        setReached(LAST_BIKE_STEP);
       }
     } catch {
       // Storage blocked or damaged: start from an empty form.
@@ -109,8 +117,27 @@ export function PressureForm(props: Props) {
     }
   }
 
+  function openStep(next: number) {
+    setStep(next);
+    setReached((r) => Math.max(r, next));
+  }
+
+  /** Opens the step holding the first of `found` (a bike typed in only); the day's fields are always shown. */
+  function showErrors(found: DraftErrors) {
+    setErrors(found);
+    const at = setupId ? null : firstStepWithError(found);
+    if (at !== null) setStep(at);
+  }
+
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
+    if (!setupId && step < LAST_BIKE_STEP) {
+      const checked = checkStep(draft, step);
+      setErrors(checked.errors);
+      setMessage(Object.keys(checked.errors).length ? "Check the highlighted fields." : null);
+      openStep(checked.next);
+      return;
+    }
     await compute(true);
   }
 
@@ -119,7 +146,7 @@ export function PressureForm(props: Props) {
     // A setup typed by hand is shown in the unit it was typed in: one switch, not two.
     const built = pressureRequestFrom({ setupId, draft, day, unit: setupId ? unit : draft.pressureUnit });
     if (!built.ok) {
-      setErrors(built.errors);
+      showErrors(built.errors);
       setMessage("Check the highlighted fields.");
       return;
     }
@@ -130,7 +157,7 @@ export function PressureForm(props: Props) {
       const body = await response.json();
       if (!response.ok) {
         const field = body?.error?.field as string | undefined;
-        if (field) setErrors({ [pressureFieldFor(field)]: body.error.message });
+        if (field) showErrors({ [pressureFieldFor(field)]: body.error.message });
         setMessage(body?.error?.message ?? "Something went wrong. Nothing you typed was lost.");
         return;
       }
@@ -176,17 +203,24 @@ export function PressureForm(props: Props) {
           {setupId && <Segments name="unit" legend="Show pressures in" value={unit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={setUnit} />}
         </fieldset>
         {!setupId && (
-          <>
-            <SetupFields idPrefix="setup" draft={draft} errors={errors} onChange={setDraft} />
-            {!props.signedIn && <CheckInput id="remember" label="Keep this setup on this device (never sent to us to store)" checked={remember} onChange={setRemember} />}
-          </>
+          <BikeSteps
+            draft={draft}
+            errors={errors}
+            onChange={setDraft}
+            step={step}
+            reached={reached}
+            onStep={openStep}
+            lastStepExtra={!props.signedIn && <CheckInput id="remember" label="Keep this setup on this device (never sent to us to store)" checked={remember} onChange={setRemember} />}
+          />
         )}
         <p role="alert" aria-live="assertive" className={message ? "rounded-lg bg-brick-100 p-3 font-semibold text-brick-600" : "sr-only"}>
           {message ?? ""}
         </p>
-        <button type="submit" className="btn-primary w-full text-lg" disabled={busy}>
-          {busy ? "Working it out…" : "Show my pressure band"}
-        </button>
+        {(setupId || step === LAST_BIKE_STEP) && (
+          <button type="submit" className="btn-primary w-full text-lg" disabled={busy}>
+            {busy ? "Working it out…" : "Show my pressure band"}
+          </button>
+        )}
       </form>
       {/* After the form in reading and Tab order; shown first on a phone once there is a band, beside the form on a desktop. */}
       <div aria-live="polite" className={`${answer ? "order-first" : ""} lg:order-none lg:sticky lg:top-4`}>

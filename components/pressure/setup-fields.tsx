@@ -1,5 +1,5 @@
 "use client";
-/** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline. */
+/** The parts of a setup a rider types: weights, pace, both wheels and the optional baseline, one component each. */
 import { MASS_UNITS, PRESSURE_UNITS, wheelSizeText, type MassUnit, type PressureUnit } from "@/lib/shared/units";
 import { BEAD_SEAT_DIAMETERS_MM, CASINGS, PACES, SURFACES } from "@/lib/pressure/pure/schemas";
 import { convertDraftUnits, convertWidth, type DraftErrors, type SetupDraft, type WheelDraft } from "@/lib/setups/pure/setup-form";
@@ -13,9 +13,9 @@ const CASING_LABELS = { light: "Light", trail: "Trail", reinforced: "Reinforced"
 const PACE_LABELS = { easy: "Easy", steady: "Steady", hard: "Hard" } as const;
 export const surfaceOptions = SURFACES.map((s) => ({ value: s, label: s[0].toUpperCase() + s.slice(1) }));
 
-type Props = { idPrefix: string; draft: SetupDraft; errors: DraftErrors; onChange: (draft: SetupDraft) => void; showBaseline?: boolean };
+type Props = { idPrefix: string; draft: SetupDraft; errors: DraftErrors; onChange: (draft: SetupDraft) => void };
 
-function WheelFields({ idPrefix, position, draft, errors, onChange }: Props & { position: "front" | "rear" }) {
+export function WheelFields({ idPrefix, position, draft, errors, onChange }: Props & { position: "front" | "rear" }) {
   const wheel = draft[position];
   const set = (patch: Partial<WheelDraft>) => onChange({ ...draft, [position]: { ...wheel, ...patch } });
   const id = (name: string) => `${idPrefix}-${position}-${name}`;
@@ -47,43 +47,56 @@ function WheelFields({ idPrefix, position, draft, errors, onChange }: Props & { 
   );
 }
 
-export function SetupFields(props: Props) {
-  const { idPrefix, draft, errors, onChange } = props;
+/** Who rides the bike: units, weights and pace (the first step of a bike typed in on "Today's pressure"). */
+export function RiderFields({ idPrefix, draft, errors, onChange }: Props) {
   const id = (name: string) => `${idPrefix}-${name}`;
   const switchUnits = (units: { pressure: PressureUnit; mass: MassUnit }) => onChange(convertDraftUnits(draft, units));
   return (
+    <fieldset className="card space-y-3">
+      <legend className="px-1 text-lg font-bold">Rider and bike</legend>
+      <div className="flex flex-wrap gap-4">
+        <Segments name={id("mass-unit")} legend="Mass in" value={draft.massUnit} options={MASS_UNITS.map((u) => ({ value: u, label: u }))} onChange={(mass) => switchUnits({ pressure: draft.pressureUnit, mass })} />
+        <Segments name={id("pressure-unit")} legend="Pressure in" value={draft.pressureUnit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={(pressure) => switchUnits({ pressure, mass: draft.massUnit })} />
+      </div>
+      <div className="grid grid-cols-2 gap-3">
+        <TextInput id={id("rider-mass")} label={`Rider with kit (${draft.massUnit})`} value={draft.riderMass} onChange={(riderMass) => onChange({ ...draft, riderMass })} error={errors.riderMass} />
+        <TextInput id={id("bike-mass")} label={`Bike (${draft.massUnit})`} value={draft.bikeMass} onChange={(bikeMass) => onChange({ ...draft, bikeMass })} error={errors.bikeMass} />
+      </div>
+      <Segments name={id("pace")} legend="How you ride" value={draft.pace} options={PACES.map((p) => ({ value: p, label: PACE_LABELS[p] }))} onChange={(pace) => onChange({ ...draft, pace })} />
+    </fieldset>
+  );
+}
+
+/** Pressures the rider knows work, and where they were checked and ridden. */
+export function BaselineFields({ idPrefix, draft, errors, onChange }: Props) {
+  const id = (name: string) => `${idPrefix}-${name}`;
+  return (
+    <fieldset className="card space-y-3">
+      <legend className="px-1 text-lg font-bold">Baseline (optional)</legend>
+      <p className="text-loam-800">Pressures you know work for you, checked with a gauge. Leave blank for a starting estimate.</p>
+      <div className="grid grid-cols-2 gap-3">
+        <TextInput id={id("baseline-front")} label={`Front (${draft.pressureUnit})`} value={draft.baselineFront} onChange={(baselineFront) => onChange({ ...draft, baselineFront })} error={errors.baselineFront} />
+        <TextInput id={id("baseline-rear")} label={`Rear (${draft.pressureUnit})`} value={draft.baselineRear} onChange={(baselineRear) => onChange({ ...draft, baselineRear })} error={errors.baselineRear} />
+      </div>
+      <MultiCheck name={id("baseline-surfaces")} legend="Ground it was set on" values={draft.baselineSurfaces} options={surfaceOptions} onChange={(baselineSurfaces) => onChange({ ...draft, baselineSurfaces })} error={errors.baselineSurfaces} />
+      <div className="grid grid-cols-2 gap-3">
+        <TextInput id={id("baseline-temperature")} label="Air where you checked it (°C, optional)" value={draft.baselineTemperature} onChange={(baselineTemperature) => onChange({ ...draft, baselineTemperature })} error={errors.baselineTemperature} inputMode="text" />
+        <TextInput id={id("baseline-elevation")} label="Height where you checked it (m, optional)" value={draft.baselineElevation} onChange={(baselineElevation) => onChange({ ...draft, baselineElevation })} error={errors.baselineElevation} inputMode="numeric" />
+        <TextInput id={id("baseline-ride-temperature")} label="Air on the trail that day (°C, optional)" value={draft.baselineRideTemperature} onChange={(baselineRideTemperature) => onChange({ ...draft, baselineRideTemperature })} error={errors.baselineRideTemperature} hint="Blank: same as where you checked it." inputMode="text" />
+        <TextInput id={id("baseline-ride-elevation")} label="Height of the trail (m, optional)" value={draft.baselineRideElevation} onChange={(baselineRideElevation) => onChange({ ...draft, baselineRideElevation })} error={errors.baselineRideElevation} hint="Blank: same as where you checked it." inputMode="numeric" />
+      </div>
+    </fieldset>
+  );
+}
+
+/** The whole setup on one page (the setup editor); "Today's pressure" asks it in steps (`BikeSteps`). */
+export function SetupFields(props: Props) {
+  return (
     <div className="space-y-4">
-      <fieldset className="card space-y-3">
-        <legend className="px-1 text-lg font-bold">Rider and bike</legend>
-        <div className="flex flex-wrap gap-4">
-          <Segments name={id("mass-unit")} legend="Mass in" value={draft.massUnit} options={MASS_UNITS.map((u) => ({ value: u, label: u }))} onChange={(mass) => switchUnits({ pressure: draft.pressureUnit, mass })} />
-          <Segments name={id("pressure-unit")} legend="Pressure in" value={draft.pressureUnit} options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))} onChange={(pressure) => switchUnits({ pressure, mass: draft.massUnit })} />
-        </div>
-        <div className="grid grid-cols-2 gap-3">
-          <TextInput id={id("rider-mass")} label={`Rider with kit (${draft.massUnit})`} value={draft.riderMass} onChange={(riderMass) => onChange({ ...draft, riderMass })} error={errors.riderMass} />
-          <TextInput id={id("bike-mass")} label={`Bike (${draft.massUnit})`} value={draft.bikeMass} onChange={(bikeMass) => onChange({ ...draft, bikeMass })} error={errors.bikeMass} />
-        </div>
-        <Segments name={id("pace")} legend="How you ride" value={draft.pace} options={PACES.map((p) => ({ value: p, label: PACE_LABELS[p] }))} onChange={(pace) => onChange({ ...draft, pace })} />
-      </fieldset>
+      <RiderFields {...props} />
       <WheelFields {...props} position="front" />
       <WheelFields {...props} position="rear" />
-      {props.showBaseline !== false && (
-        <fieldset className="card space-y-3">
-          <legend className="px-1 text-lg font-bold">Baseline (optional)</legend>
-          <p className="text-loam-800">Pressures you know work for you, checked with a gauge. Leave blank for a starting estimate.</p>
-          <div className="grid grid-cols-2 gap-3">
-            <TextInput id={id("baseline-front")} label={`Front (${draft.pressureUnit})`} value={draft.baselineFront} onChange={(baselineFront) => onChange({ ...draft, baselineFront })} error={errors.baselineFront} />
-            <TextInput id={id("baseline-rear")} label={`Rear (${draft.pressureUnit})`} value={draft.baselineRear} onChange={(baselineRear) => onChange({ ...draft, baselineRear })} error={errors.baselineRear} />
-          </div>
-          <MultiCheck name={id("baseline-surfaces")} legend="Ground it was set on" values={draft.baselineSurfaces} options={surfaceOptions} onChange={(baselineSurfaces) => onChange({ ...draft, baselineSurfaces })} error={errors.baselineSurfaces} />
-          <div className="grid grid-cols-2 gap-3">
-            <TextInput id={id("baseline-temperature")} label="Air where you checked it (°C, optional)" value={draft.baselineTemperature} onChange={(baselineTemperature) => onChange({ ...draft, baselineTemperature })} error={errors.baselineTemperature} inputMode="text" />
-            <TextInput id={id("baseline-elevation")} label="Height where you checked it (m, optional)" value={draft.baselineElevation} onChange={(baselineElevation) => onChange({ ...draft, baselineElevation })} error={errors.baselineElevation} inputMode="numeric" />
-            <TextInput id={id("baseline-ride-temperature")} label="Air on the trail that day (°C, optional)" value={draft.baselineRideTemperature} onChange={(baselineRideTemperature) => onChange({ ...draft, baselineRideTemperature })} error={errors.baselineRideTemperature} hint="Blank: same as where you checked it." inputMode="text" />
-            <TextInput id={id("baseline-ride-elevation")} label="Height of the trail (m, optional)" value={draft.baselineRideElevation} onChange={(baselineRideElevation) => onChange({ ...draft, baselineRideElevation })} error={errors.baselineRideElevation} hint="Blank: same as where you checked it." inputMode="numeric" />
-          </div>
-        </fieldset>
-      )}
+      <BaselineFields {...props} />
     </div>
   );
 }

@@ -22,15 +22,26 @@ test("an anonymous rider gets a band for an unsaved setup, with the cautions", a
   // Cautions are on the page before anything is asked.
   await expect(page.getByTestId("cautions")).toContainText(STANDARD_CAUTION);
   await expect(page.getByLabel("Park")).toHaveValue("harrow-ridge");
+  // The bike is asked in three steps; the first stops only on its own fields.
+  await expect(page.getByRole("button", { name: "Show my pressure band" })).toHaveCount(0);
+  await page.getByRole("button", { name: "Next: Wheels and tyres" }).click();
+  await expect(page.locator("#setup-rider-mass-error")).toContainText("is required");
+  await expect(page.getByLabel("Rider with kit (kg)")).toBeFocused();
   await page.getByLabel("Rider with kit (kg)").fill("72");
   await page.getByLabel("Bike (kg)").fill("15.5");
+  await page.getByRole("button", { name: "Next: Wheels and tyres" }).click();
+  await expect(page.getByRole("heading", { name: "Step 2 of 3: Wheels and tyres" })).toBeFocused();
+  await expect(page.getByTestId("bike-steps")).toContainText("Rider 72 kg, bike 15.5 kg, steady pace");
   await page.getByLabel("Front wheel: tyre's printed maximum (psi)").fill("40");
-  await page.getByRole("button", { name: "Show my pressure band" }).click();
+  await page.getByRole("button", { name: "Next: Pressures that have worked" }).click();
   // The rear maximum is missing: the field says "required", focus moves to it, and nothing typed is lost.
   await expect(page.locator("#setup-rear-max-error")).toContainText("is required");
   await expect(page.getByLabel("Rear wheel: tyre's printed maximum (psi)")).toBeFocused();
-  await expect(page.getByLabel("Rider with kit (kg)")).toHaveValue("72");
+  await expect(page.getByLabel("Front wheel: tyre's printed maximum (psi)")).toHaveValue("40");
   await page.getByLabel("Rear wheel: tyre's printed maximum (psi)").fill("40");
+  await page.getByRole("button", { name: "Next: Pressures that have worked" }).click();
+  await expect(page.getByRole("heading", { name: "Step 3 of 3: Pressures that have worked" })).toBeFocused();
+  await shot(page, "pressure-bike-step-3");
   await page.getByRole("button", { name: "Show my pressure band" }).click();
 
   const result = page.getByTestId("band-result");
@@ -45,15 +56,49 @@ test("an anonymous rider gets a band for an unsaved setup, with the cautions", a
   await expect(page.getByTestId("cautions")).toContainText("Check both tyres with a gauge");
   await shot(page, "pressure-anonymous-band");
 
-  // The pressure unit switch re-words the band; the setup can be kept on this device only.
+  // A finished step is one click away: the pressure unit switch (step 1) re-words the band and the
+  // maximums typed in step 2; the setup can be kept on this device only.
+  await page.getByRole("button", { name: /^Change: 1\. Rider and bike/ }).click();
   await page.getByRole("group", { name: "Pressure in" }).getByText("bar", { exact: true }).click();
+  await page.getByRole("button", { name: /^Change: 2\. Wheels and tyres/ }).click();
   await expect(page.getByLabel("Rear wheel: tyre's printed maximum (bar)")).toHaveValue("2.758"); // 40 psi (NIST SP 811)
+  await page.getByRole("button", { name: "Next: Pressures that have worked" }).click();
   await page.getByLabel(/Keep this setup on this device/).check();
   await page.getByRole("button", { name: "Show my pressure band" }).click();
   await expect(page.getByTestId("band-front")).toContainText(/\d\.\d\d bar/);
+  // Back on this device, the kept bike opens at its last step, ready to submit; nothing was lost.
   await page.reload();
-  await expect(page.getByLabel("Rider with kit (kg)")).toHaveValue("72");
+  await expect(page.getByRole("button", { name: "Show my pressure band" })).toBeVisible();
+  await expect(page.getByTestId("bike-steps")).toContainText("Rider 72 kg, bike 15.5 kg, steady pace");
+  await page.getByRole("button", { name: /^Change: 2\. Wheels and tyres/ }).click();
   await expect(page.getByLabel("Rear wheel: tyre's printed maximum (bar)")).toHaveValue("2.758");
+  await page.getByRole("button", { name: /^Change: 1\. Rider and bike/ }).click();
+  await expect(page.getByLabel("Rider with kit (kg)")).toHaveValue("72");
+});
+
+test("a refusal from the server reopens the step that holds the field, with focus on it", async ({ page }) => {
+  // The server's own checks can refuse what the browser's let through (the same schema, but a
+  // newer server may know more); the faked answer has the shape of the API's 422.
+  await page.route("**/api/pressure", (route) =>
+    route.fulfill({ status: 422, contentType: "application/json", body: JSON.stringify({ error: { message: "Front wheel: tyre's printed maximum must be at most 100 psi.", field: "front.maxKpa" } }) }),
+  );
+  await page.goto("/pressure");
+  await page.getByLabel("Rider with kit (kg)").fill("80");
+  await page.getByLabel("Bike (kg)").fill("16");
+  await page.getByLabel("Bike (kg)").press("Enter"); // Enter goes on to the next step
+  await expect(page.getByRole("heading", { name: "Step 2 of 3: Wheels and tyres" })).toBeFocused();
+  await page.getByLabel("Front wheel: tyre's printed maximum (psi)").fill("40");
+  await page.getByLabel("Rear wheel: tyre's printed maximum (psi)").fill("40");
+  await page.getByRole("button", { name: "Next: Pressures that have worked" }).click();
+  await page.getByLabel("Front (psi)").fill("20");
+  await page.getByLabel("Rear (psi)").fill("23");
+  await page.getByRole("button", { name: "Show my pressure band" }).click();
+  await expect(page.getByRole("heading", { name: "Step 2 of 3: Wheels and tyres" })).toBeVisible();
+  await expect(page.locator("#setup-front-max-error")).toHaveText("Front wheel: tyre's printed maximum must be at most 100 psi.");
+  await expect(page.getByLabel("Front wheel: tyre's printed maximum (psi)")).toBeFocused();
+  await expect(page.getByRole("form", { name: "Today's pressure" }).getByRole("alert")).toContainText("at most 100 psi");
+  await expect(page.getByTestId("bike-steps")).toContainText("Front 20, rear 23 psi");
+  await expect(page.getByTestId("band-result")).toHaveCount(0);
 });
 
 test("the demo rider picks a saved setup and today's trails, and sees band, reasons and cautions", async ({ page }) => {
@@ -94,10 +139,16 @@ test("keyboard only: Tab to each field, type, Space to tick, Enter to submit", a
   await page.keyboard.type("64");
   expect(await tabTo(page, "Bike (kg)")).toBe(1);
   await page.keyboard.type("14");
+  // Enter in a field goes on to the next step, whose heading takes focus.
+  await page.keyboard.press("Enter");
+  await expect(page.getByRole("heading", { name: "Step 2 of 3: Wheels and tyres" })).toBeFocused();
   await tabTo(page, "Front wheel: tyre's printed maximum (psi)");
   await page.keyboard.type("45");
   await tabTo(page, "Rear wheel: tyre's printed maximum (psi)");
   await page.keyboard.type("45");
+  await page.keyboard.press("Enter");
+  await expect(page.getByRole("heading", { name: "Step 3 of 3: Pressures that have worked" })).toBeFocused();
+  await tabTo(page, "Show my pressure band");
   await page.keyboard.press("Enter");
   const heading = page.getByRole("heading", { name: "Today's band" });
   await expect(heading).toBeFocused();
