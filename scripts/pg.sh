@@ -36,6 +36,31 @@ pg_cluster_dir() {
 
 port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null && { exec 3>&- 3<&-; return 0; }; return 1; }
 
+pg_password_stamp() { printf '%s' "$1" | sha1sum | cut -d' ' -f1; }
+
+# A cluster outside the work tree outlives the clone: a new clone at the same path has new secrets
+# (.local/secrets.env), and the old cluster would refuse them ("password authentication failed").
+# The test and bench clusters are rebuilt on every run anyway, so they are made again; any other
+# cluster holds someone's data, so we stop and say how to recover it.
+pg_check_password() {
+  local name="$1" dir="$2" password="$3"
+  [ -f "$dir/data/PG_VERSION" ] || return 0
+  [ "$(cat "$dir/password.sha1" 2>/dev/null)" = "$(pg_password_stamp "$password")" ] && return 0
+  case "$name" in
+    test|bench)
+      echo "› PostgreSQL cluster '$name' in $dir was made with other secrets (an earlier clone here): making it again"
+      pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" -m immediate -w stop >/dev/null 2>&1 || true
+      rm -rf "$dir/data" "$dir/password.sha1" ;;
+    *)
+      if [ -f "$dir/password.sha1" ]; then
+        echo "✗ PostgreSQL cluster '$name' in $dir was made with another password than .local/secrets.env holds. Restore that file from the earlier clone, or delete $dir to start with an empty database." >&2
+        return 1
+      fi
+      # Made before passwords were stamped: trust it once and stamp it (a mismatch still fails at connect).
+      pg_password_stamp "$password" > "$dir/password.sha1" ;;
+  esac
+}
+
 # pg_start NAME PORT PASSWORD: init the cluster on first use, start it, wait until ready.
 pg_start() {
   local name="$1" port="$2" password="$3" dir
@@ -43,6 +68,7 @@ pg_start() {
   dir="$(pg_cluster_dir "$name")"
   mkdir -p "$dir"
   [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$dir" && chmod 700 "$dir" && chmod 755 "$(dirname "$dir")" "$(dirname "$(dirname "$dir")")"
+  pg_check_password "$name" "$dir" "$password" || return 1
   if [ ! -f "$dir/data/PG_VERSION" ]; then
     echo "› Creating PostgreSQL cluster '$name' in $dir"
     printf '%s\n' "$password" > "$dir/pwfile"
@@ -51,6 +77,7 @@ pg_start() {
       --auth-local=scram-sha-256 --auth-host=scram-sha-256 -E UTF8 --locale=C.UTF-8 >"$dir/initdb.log" 2>&1 \
       || { cat "$dir/initdb.log"; return 1; }
     rm -f "$dir/pwfile"
+    pg_password_stamp "$password" > "$dir/password.sha1"
   fi
   if pg_as_owner "$PG_BIN/pg_ctl" -D "$dir/data" status >/dev/null 2>&1; then
     echo "› PostgreSQL '$name' already running"
