@@ -16,21 +16,23 @@ export type RefreshResult = { due: number; stored: number; failed: number };
  * fetched), one after the other, and stores each good reading. A failure is recorded for that
  * park and the next park goes on: nothing a weather service answers stops the worker.
  */
-export async function refreshDueParks(service: WeatherService, { now = new Date(), log = logger }: { now?: Date; log?: Logger } = {}): Promise<RefreshResult> {
+/** `only` limits the pass to some parks (tests). */
+export async function refreshDueParks(service: WeatherService, { now = new Date(), log = logger, only }: { now?: Date; log?: Logger; only?: string[] } = {}): Promise<RefreshResult> {
   const recent = await ParkWeather.findAll({ where: { lastAttemptAt: { [Op.gt]: new Date(now.getTime() - WEATHER_EVERY_MS) } }, attributes: ["parkId"] });
   const skip = recent.map((r) => r.parkId);
-  const parks = await Park.findAll({ where: skip.length ? { id: { [Op.notIn]: skip } } : {}, attributes: ["id", "slug", "centerLat", "centerLon", "timeZone"] });
+  const ids = { ...(skip.length ? { [Op.notIn]: skip } : {}), ...(only ? { [Op.in]: only } : {}) };
+  const parks = await Park.findAll({ where: Reflect.ownKeys(ids).length ? { id: ids } : {}, attributes: ["id", "slug", "centerLat", "centerLon", "timeZone"] });
   const result: RefreshResult = { due: parks.length, stored: 0, failed: 0 };
   for (const park of parks) {
     try {
       const reading = await service.recentAndForecast({ latitude: park.centerLat, longitude: park.centerLon }, park.timeZone);
-      await storeReading(park.id, reading, new Date());
+      await storeReading(park.id, reading, now);
       result.stored++;
     } catch (error) {
       result.failed++;
       const reason = (error as Error)?.message ?? String(error);
       log.warn({ park: park.slug, reason }, `weather for ${park.slug} not updated: ${reason}`);
-      await recordFailure(park.id, reason, new Date()).catch((e) => log.error({ err: e }, "could not record the weather failure"));
+      await recordFailure(park.id, reason, now).catch((e) => log.error({ err: e }, "could not record the weather failure"));
     }
   }
   return result;

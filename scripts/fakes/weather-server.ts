@@ -55,7 +55,8 @@ export function forecastAnswer(query: URLSearchParams, now = new Date()) {
   };
 }
 
-export async function startFakeWeather({ port, host = "127.0.0.1" }: { port: number; host?: string }) {
+/** `now` fixes the fake's clock (tests that work values by hand); by default it is the real one. */
+export async function startFakeWeather({ port, host = "127.0.0.1", now = () => new Date() }: { port: number; host?: string; now?: () => Date }) {
   let fault: Fault = { mode: "none", remaining: null, delayMs: 0 };
   let requests = 0;
   const open = new Set<http.ServerResponse>();
@@ -93,7 +94,7 @@ export async function startFakeWeather({ port, host = "127.0.0.1" }: { port: num
     if (req.method !== "GET" || url.pathname !== "/v1/forecast") return send(404, { error: true, reason: "not found" });
     requests++;
     const { mode, delayMs } = takeFault();
-    const answer = forecastAnswer(url.searchParams);
+    const answer = forecastAnswer(url.searchParams, now());
     switch (mode) {
       case "malformed":
         return send(200, '{"latitude": 47.3, "hourly": {"time": [1, 2,');
