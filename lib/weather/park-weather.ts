@@ -12,6 +12,7 @@ import {
   overnightLow,
   rainBetween,
   rainByDay,
+  type DayRain,
   rainCaution,
   yesterdayEvening,
   type RideHours,
@@ -72,7 +73,7 @@ export async function parkWeather(park: ParkRef, now = new Date()): Promise<Park
 }
 
 /** Rain per park-local day between two dates (inclusive), for the history page; days with no stored hours are absent. */
-export async function rainPerDay(park: ParkRef, fromDate: string, toDate: string, now = new Date()): Promise<Map<string, number>> {
+export async function rainPerDay(park: ParkRef, fromDate: string, toDate: string, now = new Date()): Promise<Map<string, DayRain>> {
   const from = parkLocalInstant(fromDate, "00:00", park.timeZone);
   const to = parkLocalInstant(shiftDate(toDate, 1), "00:00", park.timeZone);
   return rainByDay(await hoursBetween(park.id, from, to), now, park.timeZone);

@@ -70,16 +70,28 @@ export function meanForHours(hours: WeatherHour[], date: string, ride: RideHours
   return temps.length ? round1(temps.reduce((a, b) => a + b, 0) / temps.length) : null;
 }
 
+/** A day's rain, and whether it is only part of the day (today so far). */
+export type DayRain = { mm: number; partial: boolean };
+
 /**
  * Rain per park-local day. An hour belongs to the day it fell in: the hour ending at 00:00
- * belongs to the day before.
+ * belongs to the day before. A past day counts only with 23 or more known hours (a day has 23 to
+ * 25 at daylight-saving changes), so a day with a few stored hours never reads as dry; today counts
+ * from its first hour, marked partial.
  */
-export function rainByDay(hours: WeatherHour[], now: Date, timeZone: string): Map<string, number> {
-  const days = new Map<string, number>();
+export function rainByDay(hours: WeatherHour[], now: Date, timeZone: string): Map<string, DayRain> {
+  const sums = new Map<string, { mm: number; hours: number }>();
   for (const h of ended(hours, now)) {
     if (h.precipitationMm === null) continue;
     const day = parkLocalDate(new Date(h.at.getTime() - 1), timeZone);
-    days.set(day, round1((days.get(day) ?? 0) + h.precipitationMm));
+    const sum = sums.get(day) ?? { mm: 0, hours: 0 };
+    sums.set(day, { mm: sum.mm + h.precipitationMm, hours: sum.hours + 1 });
+  }
+  const today = parkLocalDate(now, timeZone);
+  const days = new Map<string, DayRain>();
+  for (const [day, sum] of sums) {
+    if (day === today) days.set(day, { mm: round1(sum.mm), partial: true });
+    else if (sum.hours >= 23) days.set(day, { mm: round1(sum.mm), partial: false });
   }
   return days;
 }

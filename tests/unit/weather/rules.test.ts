@@ -51,11 +51,12 @@ describe("rain", () => {
 
   it("gives each day its rain; the hour ending at midnight belongs to the day before", () => {
     const days = rainByDay(hours, NOW, ZONE);
-    // 1 Dec: 9.5 mm + the hour ending 00:00 on 2 Dec (1.5 mm) = 11.0 mm; 2 Dec: 1.0 + 1.0 + 0.6 + 0.4 = 3.0 mm.
-    expect(days.get("2026-12-01")).toBe(11);
-    expect(days.get("2026-12-02")).toBe(3);
-    // The first hour in the list (ending 00:00 on 1 Dec) is 30 November's, dry.
-    expect(days.get("2026-11-30")).toBe(0);
+    // 1 Dec: 9.5 mm + the hour ending 00:00 on 2 Dec (1.5 mm) = 11.0 mm over its 24 hours.
+    expect(days.get("2026-12-01")).toEqual({ mm: 11, partial: false });
+    // 2 Dec so far (hours ending 01:00–07:00): 1.0 + 1.0 + 0.6 + 0.4 = 3.0 mm.
+    expect(days.get("2026-12-02")).toEqual({ mm: 3, partial: true });
+    // 30 November has one stored hour (ending 00:00 on 1 Dec): too few to call it dry.
+    expect(days.has("2026-11-30")).toBe(false);
   });
 
   it("cautions when the park's level is reached, and never below it", () => {
