@@ -3,7 +3,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { parkWeather, rideTemperatures } from "@/lib/weather/park-weather";
 import { refreshDueParks, runWeatherLoop, WEATHER_EVERY_MS } from "@/lib/weather/refresh";
-import { ParkWeather, WeatherHour, sequelize } from "@/models";
+import { randomUUID } from "node:crypto";
+import { Park, ParkWeather, WeatherHour, sequelize } from "@/models";
+import { createPark } from "../helpers";
 import { NOW, ownFake, stormPark } from "./fixtures";
 
 let env: Awaited<ReturnType<typeof ownFake>>;
@@ -32,6 +34,19 @@ describe("weather pass", () => {
     expect(await WeatherHour.count({ where: { parkId: park.id } })).toBe(72);
     // Not due again within 30 minutes.
     expect(await pass(park.id, later(10))).toEqual({ due: 0, stored: 0, failed: 0 });
+  });
+
+  it("reads the freeze-thaw and dry-week fixtures: a frost, no caution", async () => {
+    const cold = await Park.create({ slug: `cold-${randomUUID().slice(0, 8)}`, name: "Cold Park", timeZone: "America/Denver", centerLon: -105.61, centerLat: 39.02, baseElevationM: 2800, summitElevationM: 3200 });
+    const dry = await createPark();
+    await env.control.fault("none");
+    await refreshDueParks(env.service, { now: NOW, log: env.log, only: [cold.id, dry.id] });
+    // 07:45 PST is 08:45 MST. Freeze-thaw: −6 °C at 03:00–05:00, 5 °C at 13:00–14:00; now −4 °C; dry.
+    expect(await parkWeather(cold, NOW)).toMatchObject({ nowC: -4, overnight: { minC: -6, frost: true }, today: { minC: -6, maxC: 5 }, rain24hMm: 0, caution: null });
+    // 10:00–14:00: (2 + 3.5 + 4.5 + 5 + 5) / 5 = 4 °C.
+    expect(await rideTemperatures(cold, undefined, NOW)).toMatchObject({ trailC: 4, pumpC: -4 });
+    // Dry week (Europe/Zurich, 16:45 there): 9 + 5·cos(2π(h − 15)/24): 4 °C at 03:00, 14 °C at 15:00; no rain.
+    expect(await parkWeather(dry, NOW)).toMatchObject({ nowC: 9, today: { minC: 4, maxC: 14 }, rain24hMm: 0, rainSinceEveningMm: 0, lastRainAt: null, caution: null });
   });
 
   for (const mode of ["malformed", "partial", "out-of-bounds"] as const) {
