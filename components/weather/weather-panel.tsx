@@ -17,12 +17,13 @@ export function WeatherAttribution() {
  * riders' line (today's range, rain in the last 24 h). Without values it says so and nothing breaks.
  */
 export function WeatherPanel({ weather, timeZone, variant, now = new Date() }: { weather: ParkWeatherView | null; timeZone: string; variant: "check" | "board"; now?: Date }) {
+  // Without stored weather the board says nothing; the ranger is told, so a missing feed is noticed.
   if (!weather) {
-    return (
+    return variant === "check" ? (
       <p className="text-sm text-loam-700" data-testid="weather">
-        No weather for this park yet.
+        No weather stored for this park yet: check the rain yourself.
       </p>
-    );
+    ) : null;
   }
   return (
     <section aria-label="Weather" data-testid="weather" className={`rounded-lg border p-3 text-sm ${weather.stale ? "border-flare-700 bg-flare-100" : "border-loam-300 bg-white"}`}>
