@@ -81,3 +81,27 @@ test("with no temperature typed, the pressure band uses the forecast on the trai
   await expect(row).toContainText(/−\d+\.\d psi/);
   await shot(page, "weather-pressure");
 });
+
+test("a manager sets the park's rain caution level; the morning check uses it, and a bad value is refused beside the field", async ({ page }) => {
+  await signInAs(page, demo("manager"), undefined, "/staff/harrow-ridge/settings");
+  await page.goto("/staff/harrow-ridge/settings");
+  const field = page.getByLabel("Rain caution level (mm in 24 h)");
+  await expect(field).toHaveValue("10");
+  await field.fill("lots");
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.locator("form").getByText("Enter the rain caution level in millimetres.").first()).toBeVisible();
+  await field.fill("60");
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Settings saved.")).toBeVisible();
+  await shot(page, "weather-settings");
+  await page.goto("/staff/harrow-ridge/morning-check");
+  const weather = page.getByTestId("weather");
+  await expect(weather).toContainText("(the park's caution level is 60 mm)");
+  // The storm's rain (at most 14 mm) is below 60 mm: no caution.
+  await expect(weather.getByRole("note")).toHaveCount(0);
+  // Back to the default, for the journeys after this one.
+  await page.goto("/staff/harrow-ridge/settings");
+  await page.getByLabel("Rain caution level (mm in 24 h)").fill("10");
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Settings saved.")).toBeVisible();
+});
