@@ -22,6 +22,7 @@ import { TrailFeature } from "./trail-feature";
 import { TrailReport } from "./trail-report";
 import { TrailVersion } from "./trail-version";
 import { User } from "./user";
+import { ParkWeather, WeatherHour } from "./weather";
 
 Park.hasMany(ParkMembership, { foreignKey: "parkId", as: "memberships" });
 ParkMembership.belongsTo(Park, { foreignKey: "parkId", as: "park" });
@@ -58,6 +59,8 @@ PushSubscription.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Notice.belongsTo(Park, { foreignKey: "parkId", as: "park" });
 Notice.hasMany(NoticeDelivery, { foreignKey: "noticeId", as: "deliveries" });
 NoticeDelivery.belongsTo(Notice, { foreignKey: "noticeId", as: "notice" });
+Park.hasOne(ParkWeather, { foreignKey: "parkId", as: "weather" });
+Park.hasMany(WeatherHour, { foreignKey: "parkId", as: "weatherHours" });
 
 export { primaryRows, sequelize } from "@/models/db";
 export { parkVersionListener, PARK_VERSIONS_CHANNEL, type ListenerMark } from "@/models/park-version-listener";
@@ -73,6 +76,7 @@ export {
   ParkLayerVersion,
   ParkMembership,
   ParkState,
+  ParkWeather,
   Photo,
   PushSubscription,
   RequestCount,
@@ -85,4 +89,5 @@ export {
   TrailReport,
   TrailVersion,
   User,
+  WeatherHour,
 };

@@ -22,6 +22,8 @@ export class Park extends Model<InferAttributes<Park>, InferCreationAttributes<P
   declare lockVersion: CreationOptional<number>;
   /** Origins allowed to frame the park's status card (`https://example.org`). */
   declare embedOrigins: CreationOptional<string[]>;
+  /** Rain (mm in 24 h) at which the morning check shows a caution; the ranger decides. */
+  declare rainThresholdMm: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -42,6 +44,7 @@ Park.init(
     websiteUrl: { type: DataTypes.STRING(300), allowNull: true },
     lockVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     embedOrigins: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    rainThresholdMm: { type: DataTypes.REAL, allowNull: false, defaultValue: 10 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

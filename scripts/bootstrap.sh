@@ -52,16 +52,16 @@ load_env() {
   local purpose="$1"
   if [ -f .env ]; then set -a; . ./.env; set +a; fi
   ensure_secrets
-  local pg_port smtp_port control_port db app_port s3_port push_port
+  local pg_port smtp_port control_port db app_port s3_port push_port weather_port
   # LOAMCAST_PORT_OFFSET moves every port at once, so several clones can test side by side.
   local off=${LOAMCAST_PORT_OFFSET:-0}
   if [ "$purpose" = "test" ]; then
-    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}; s3_port=$((4567 + off)); push_port=$((4701 + off))
+    pg_port=${TEST_PGPORT:-$((55433 + off))}; smtp_port=$((2526 + off)); control_port=$((2581 + off)); db=loamcast_test; app_port=${TEST_PORT:-$((3100 + off))}; s3_port=$((4567 + off)); push_port=$((4701 + off)); weather_port=$((4591 + off))
   elif [ "$purpose" = "bench" ]; then
     # Its own cluster and database, so `npm run bench` never meets a test run's data (or its pg_stop).
-    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off)); s3_port=$((4568 + off)); push_port=$((4702 + off))
+    pg_port=${BENCH_PGPORT:-$((55434 + off))}; smtp_port=$((2527 + off)); control_port=$((2582 + off)); db=loamcast_bench; app_port=$((3200 + off)); s3_port=$((4568 + off)); push_port=$((4702 + off)); weather_port=$((4592 + off))
   else
-    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}; s3_port=$((4566 + off)); push_port=$((4700 + off))
+    pg_port=${PGPORT:-$((55432 + off))}; smtp_port=$((2525 + off)); control_port=$((2580 + off)); db=loamcast; app_port=${PORT:-$((3000 + off))}; s3_port=$((4566 + off)); push_port=$((4700 + off)); weather_port=$((4590 + off))
   fi
   export LOAMCAST_PURPOSE="$purpose" PG_PORT="$pg_port" PORT="$app_port"
   export PG_PASSWORD="${PG_PASSWORD:-$GENERATED_PG_PASSWORD}"
@@ -77,6 +77,8 @@ load_env() {
   export VAPID_PUBLIC_KEY="${VAPID_PUBLIC_KEY:-$GENERATED_VAPID_PUBLIC_KEY}" VAPID_PRIVATE_KEY="${VAPID_PRIVATE_KEY:-$GENERATED_VAPID_PRIVATE_KEY}"
   # The local fake push service runs unless FAKE_PUSH_URL is set empty (then only real push services are reached).
   [ -n "${FAKE_PUSH_URL+set}" ] || export FAKE_PUSH_URL="http://127.0.0.1:${push_port}"
+  # Weather: the local fake Open-Meteo runs unless WEATHER_URL names a service of your own.
+  if [ -z "${WEATHER_URL:-}" ]; then export WEATHER_URL="http://127.0.0.1:${weather_port}" FAKE_WEATHER=1; fi
   export PHOTO_STORAGE_DIR="${PHOTO_STORAGE_DIR:-.local/photos-${purpose}}"
   # PHOTO_STORAGE=s3 without an S3_ENDPOINT of your own: the local fake S3 server (s3rver) is started and used.
   S3_FAKE_PORT="$s3_port"
@@ -129,6 +131,11 @@ start_fake_push() {
   start_fake "fake push service" fake-push.ts "$(port_of "$FAKE_PUSH_URL")" 'answers "$FAKE_PUSH_URL/control/received"'
 }
 
+start_fake_weather() {
+  [ -n "${FAKE_WEATHER:-}" ] || return 0
+  start_fake "fake weather service" fakes/fake-weather.ts "$(port_of "$WEATHER_URL")" 'answers "$WEATHER_URL/control/health"'
+}
+
 start_fake_s3() {
   [ -n "${FAKE_S3_DIR:-}" ] || return 0
   mkdir -p "$FAKE_S3_DIR"
@@ -169,6 +176,7 @@ start_local_services() {
   node_modules/.bin/tsx --conditions=react-server scripts/db.ts prepare
   start_fake_smtp
   start_fake_push
+  start_fake_weather
   start_fake_s3
   if [ -f scripts/worker.ts ]; then node --conditions=react-server --import tsx scripts/worker.ts & CHILD_PIDS+=($!); fi
 }

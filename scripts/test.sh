@@ -28,6 +28,7 @@ INTEGRATION_DATABASE_URL="${DATABASE_URL%/*}/loamcast_integration"
 DATABASE_URL="$INTEGRATION_DATABASE_URL" node_modules/.bin/tsx --conditions=react-server scripts/db.ts fresh || exit 1
 start_fake_smtp
 start_fake_push
+start_fake_weather
 rm -rf .local/test-results && mkdir -p .local/test-results
 
 # `npm test -- tests/unit/x.test.ts tests/e2e/y.spec.ts` runs only the stages those paths belong to, on

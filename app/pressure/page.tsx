@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { PressureForm } from "@/components/pressure/pressure-form";
 import { getActor } from "@/lib/server/auth/actor";
-import { pressurePageData } from "@/lib/pressure/pressure-page";
+import { pressurePageData, pressurePageWeather } from "@/lib/pressure/pressure-page";
+import { WeatherAttribution } from "@/components/weather/weather-panel";
 
 export const metadata = { title: "Today's pressure" };
 export const dynamic = "force-dynamic";
@@ -10,6 +11,7 @@ export default async function PressurePage({ searchParams }: { searchParams: Pro
   const { park, setup } = await searchParams;
   const actor = await getActor();
   const data = await pressurePageData(actor, park);
+  const weather = await pressurePageWeather(data.park?.slug);
   return (
     <section className="space-y-4">
       <div className="space-y-2">
@@ -22,6 +24,11 @@ export default async function PressurePage({ searchParams }: { searchParams: Pro
           A starting point, not an instruction: never go above the printed maximum of your tyre or rim, and check with a gauge.
         </p>
       </div>
+      {weather && (
+        <p className="text-sm text-loam-800" data-testid="pressure-weather">
+          {weather.text} <WeatherAttribution />
+        </p>
+      )}
       <PressureForm {...data} signedIn={Boolean(actor)} initialSetupId={data.setups.some((s) => s.id === setup) ? setup : undefined} />
     </section>
   );

@@ -6,14 +6,30 @@ import { StatusLabel } from "@/components/board/status-label";
 import { describeFeatures } from "@/lib/conditions/pure/labels";
 import type { HistoryRow } from "@/lib/conditions/history";
 import { parkLocalTime } from "@/lib/shared/park-clock";
+import { formatRain } from "@/lib/weather/pure/summary";
+import type { DayRain } from "@/lib/weather/pure/rules";
 
 const features = tableFeatures({ rowSortingFeature, sortedRowModel: createSortedRowModel(), sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic } });
 const helper = createColumnHelper<typeof features, HistoryRow>();
 const STATUS_ORDER = { open: 0, caution: 1, closed: 2 } as const;
 
-function columnsFor(timeZone: string, showRevisions: boolean) {
+function columnsFor(timeZone: string, showRevisions: boolean, rainByDate?: Record<string, DayRain>) {
   return helper.columns([
     helper.accessor("date", { header: "Date", sortFn: "alphanumeric", cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span> }),
+    // The day's rain (park-local day, from the stored weather): how a trail recovers after rain.
+    ...(rainByDate
+      ? [
+          helper.accessor((r) => rainByDate[r.date]?.mm ?? -1, {
+            id: "rain",
+            header: "Rain that day",
+            sortFn: "basic",
+            cell: (info) => {
+              const day = rainByDate[info.row.original.date];
+              return day ? `${formatRain(day.mm)}${day.partial ? " so far" : ""}` : "–";
+            },
+          }),
+        ]
+      : []),
     helper.accessor((r) => STATUS_ORDER[r.status], {
       id: "status",
       header: "Status",
@@ -32,8 +48,9 @@ function columnsFor(timeZone: string, showRevisions: boolean) {
   ]);
 }
 
-export function HistoryTable({ rows, timeZone, showRevisions }: { rows: HistoryRow[]; timeZone: string; showRevisions: boolean }) {
-  const columns = useMemo(() => columnsFor(timeZone, showRevisions), [timeZone, showRevisions]);
+/** `rainByDate` (YYYY-MM-DD → mm, today's partial) adds the day's rain beside its reports; a day without stored weather shows "–". */
+export function HistoryTable({ rows, timeZone, showRevisions, rainByDate }: { rows: HistoryRow[]; timeZone: string; showRevisions: boolean; rainByDate?: Record<string, DayRain> }) {
+  const columns = useMemo(() => columnsFor(timeZone, showRevisions, rainByDate), [timeZone, showRevisions, rainByDate]);
   const table = useTable({ features, columns, data: rows, enableSortingRemoval: false, initialState: { sorting: [{ id: "date", desc: true }] } });
   return (
     <div className="overflow-x-auto">

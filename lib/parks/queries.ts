@@ -24,7 +24,7 @@ export function parkSummary(park: Park) {
 
 /** What the settings form and `PATCH /api/parks/{slug}` work with: the public view, contact details and the lock. */
 export function parkSettings(park: Park) {
-  return { ...parkSummary(park), contactEmail: park.contactEmail ?? null, websiteUrl: park.websiteUrl ?? null, lockVersion: park.lockVersion };
+  return { ...parkSummary(park), contactEmail: park.contactEmail ?? null, websiteUrl: park.websiteUrl ?? null, rainThresholdMm: park.rainThresholdMm ?? 10, lockVersion: park.lockVersion };
 }
 
 export async function listParks() {

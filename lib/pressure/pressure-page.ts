@@ -6,8 +6,11 @@ import { parkSummary } from "@/lib/parks/queries";
 import { listSetups, type SetupView } from "@/lib/setups/setup-queries";
 import { defaultTrailIds, trailsToday } from "@/lib/pressure/trails-today";
 import { unitsFor } from "@/lib/accounts/units";
-import { formatMass, formatPressure, wheelSizeText, type MassUnit, type PressureUnit } from "@/lib/shared/units";
+import { formatMass, formatPressure, formatTemperature, wheelSizeText, type MassUnit, type PressureUnit } from "@/lib/shared/units";
 import { Park, Trail } from "@/models";
+import { rideTemperatures } from "@/lib/weather/park-weather";
+import { DEFAULT_RIDE_HOURS } from "@/lib/weather/pure/rules";
+import { parkClockText, rideHoursText } from "@/lib/weather/pure/summary";
 
 /** "29″ · 94 kg with bike · baseline 19.0 psi / 23.0 psi" — enough to tell setups apart. */
 export function setupSummary(setup: SetupView, units: { pressure: PressureUnit; mass: MassUnit }): string {
@@ -50,4 +53,13 @@ export async function pressurePageData(actor: Actor | null, parkSlug: string | u
     setups: setups.map((s) => ({ id: s.id, name: s.name, summary: setupSummary(s, units) })),
     units: { pressure: units.pressure, mass: units.mass },
   };
+}
+
+/** The park's stored weather as the band would use it when no temperature is typed (default ride hours), for the note above the form. */
+export async function pressurePageWeather(parkSlug: string | undefined, now = new Date()): Promise<{ text: string } | null> {
+  const park = parkSlug ? await Park.findOne({ where: { slug: parkSlug } }) : null;
+  const temperatures = park ? await rideTemperatures(park, DEFAULT_RIDE_HOURS, now) : null;
+  if (!park || !temperatures) return null;
+  const measured = `${temperatures.stale ? "last measured" : "measured"} ${parkClockText(temperatures.measuredAt, now, park.timeZone)}`;
+  return { text: `${park.name}: ${formatTemperature(temperatures.trailC)} forecast for ${rideHoursText(temperatures.hours)}, ${formatTemperature(temperatures.pumpC)} now (${measured}). Leave the temperatures blank to use these.` };
 }

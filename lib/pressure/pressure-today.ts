@@ -9,7 +9,7 @@ import { AppError } from "@/lib/shared/errors";
 import { findOwnSetup, storedSetup } from "@/lib/setups/setup-queries";
 import { defaultTrailIds, parkForRequest, pickTrails, trailConditions, trailsToday, type TrailToday } from "@/lib/pressure/trails-today";
 import { computePressureBand, inputFromRequest, type PressureResult } from "@/lib/pressure/pure";
-import type { PressureUnit } from "@/lib/shared/units";
+import { formatTemperature, type PressureUnit } from "@/lib/shared/units";
 import { parseInput } from "@/lib/shared/parse";
 import {
   pressureRequestSchema,
@@ -21,6 +21,11 @@ import { unitsOf } from "@/lib/accounts/pure/units-schema";
 import { rideEvidence } from "@/lib/setups/ride-log-queries";
 import type { RideEvidence } from "@/lib/pressure/pure/schemas";
 import { User } from "@/models";
+import { pumpTemperatureLabel } from "@/lib/pressure/pure/pump";
+import { rideTemperatures, type RideTemperatures } from "@/lib/weather/park-weather";
+import { DEFAULT_RIDE_HOURS } from "@/lib/weather/pure/rules";
+import { forecastReason, parkClockText, rideHoursText } from "@/lib/weather/pure/summary";
+import { WEATHER_ATTRIBUTION } from "@/lib/weather/pure/types";
 
 export type PressureConditions = {
   park: { slug: string; name: string; baseElevationM: number; summitElevationM: number };
@@ -30,6 +35,8 @@ export type PressureConditions = {
   lowestElevationM: number;
   highestElevationM: number;
   trails: Pick<TrailToday, "id" | "name" | "status" | "surfaces" | "features">[];
+  /** Set when no temperature was typed and the park's stored weather supplied both. */
+  weather?: RideTemperatures & { text: string; attribution: string };
 };
 export type PressureAnswer = PressureResult & { unit: PressureUnit; setupId?: string; conditions?: PressureConditions };
 
@@ -72,6 +79,12 @@ export async function pressureForRequest(actor: Actor | null, raw: unknown, now 
     today.highestElevationM ??= Math.max(...chosen.map((t) => t.maxElevationM ?? park.summitElevationM));
     today.lowestElevationM ??= Math.min(...chosen.map((t) => t.minElevationM ?? park.baseElevationM));
     today.rideElevationM ??= Math.round((today.lowestElevationM + today.highestElevationM) / 2);
+    // No temperatures typed: the forecast for the ride hours on the trail, now's at the pump (stored by the worker).
+    const temperatures = today.airTemperatureC === undefined && today.pumpTemperatureC === undefined ? await rideTemperatures(park, today.rideHours ?? DEFAULT_RIDE_HOURS, now) : null;
+    if (temperatures) {
+      today.airTemperatureC = temperatures.trailC;
+      today.pumpTemperatureC = temperatures.pumpC;
+    }
     conditions = {
       park: { slug: park.slug, name: park.name, baseElevationM: park.baseElevationM, summitElevationM: park.summitElevationM },
       reportDate: parkDay.reportDate,
@@ -79,9 +92,20 @@ export async function pressureForRequest(actor: Actor | null, raw: unknown, now 
       lowestElevationM: today.lowestElevationM,
       highestElevationM: today.highestElevationM,
       trails: chosen.map(({ id, name, status, surfaces, features }) => ({ id, name, status, surfaces, features })),
+      ...(temperatures
+        ? { weather: { ...temperatures, text: forecastReason(temperatures, `measured ${parkClockText(temperatures.measuredAt, now, park.timeZone)}${temperatures.stale ? ", not updated since" : ""}`), attribution: WEATHER_ATTRIBUTION.text } }
+        : {}),
     };
   }
-  const result = computePressureBand({ ...inputFromRequest(request, trails), ...(rides?.length ? { rides } : {}) });
+  const band = computePressureBand({ ...inputFromRequest(request, trails), ...(rides?.length ? { rides } : {}) });
+  const result = conditions?.weather ? { ...band, reasons: band.reasons.map((r) => withWeatherSource(r, conditions.weather!)) } : band;
   const cautions = closed.length > 0 ? [closedCaution(closed), ...result.cautions] : result.cautions;
   return { ...result, cautions, unit: request.unit, ...(setupId ? { setupId } : {}), ...(conditions ? { conditions } : {}) };
+}
+
+/** The pump-temperature reason names where its temperatures came from: "8 °C forecast for 10:00–14:00, 3 °C now (park weather): +0.4 psi … to pump now". */
+function withWeatherSource(reason: PressureResult["reasons"][number], weather: RideTemperatures): PressureResult["reasons"][number] {
+  const label = pumpTemperatureLabel(weather.trailC - weather.pumpC);
+  if (reason.id !== "pump-temperature" || !reason.text.startsWith(label)) return reason;
+  return { ...reason, text: `${label} (the park's weather: ${formatTemperature(weather.trailC)} forecast for ${rideHoursText(weather.hours)}, ${formatTemperature(weather.pumpC)} now)${reason.text.slice(label.length)}` };
 }

@@ -34,6 +34,9 @@ const envSchema = z.object({
   /** The local fake push service (npm start and npm test run it); browsers' endpoints here may be plain http. */
   FAKE_PUSH_URL: z.string().url().optional(),
   MAP_STYLE_URL: z.string().url().optional(),
+  /** Open-Meteo (https://api.open-meteo.com) or the local fake; unset: no weather is fetched. */
+  WEATHER_URL: z.string().url().optional(),
+  WEATHER_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(8000),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SECURE_COOKIES: z.enum(["true", "false"]).optional(),
   /** Reverse proxies in front of the app that append to X-Forwarded-For (0: the socket peer is the client). */

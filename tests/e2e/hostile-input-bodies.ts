@@ -136,6 +136,8 @@ export const BODY_CASES: HostileCase[] = [
   { name: "a park slug with a path in it", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), slug: "../admin" }), expect: 422, field: "slug" },
   { name: "a park slug already taken", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), slug: "harrow-ridge" }), expect: 409, field: "slug" },
   { name: "mass assignment: fictional on a new park", as: "admin", method: "POST", path: () => "/api/parks", json: () => ({ ...newPark(), fictional: true }), expect: 422 },
+  { name: "a negative rain caution level", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ rainThresholdMm: -5, lockVersion: 0 }), expect: 422, field: "rainThresholdMm" },
+  { name: "a rain caution level that is not a number", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ rainThresholdMm: "lots", lockVersion: 0 }), expect: 422, field: "rainThresholdMm" },
   { name: "park settings without a lockVersion", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ name: "Renamed" }), expect: 422, field: "lockVersion" },
   { name: "a new slug for a park that has trails", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge", json: () => ({ slug: "harrow-ridge-2", lockVersion: 0 }), expect: 409 },
   { name: "a role that does not exist", as: "manager", method: "PATCH", path: () => "/api/parks/harrow-ridge/staff/00000000-0000-4000-8000-000000000000", json: () => ({ role: "owner" }), expect: 400, field: "role" },

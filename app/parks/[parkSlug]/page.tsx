@@ -11,6 +11,9 @@ import { boardForPark } from "@/lib/conditions/board";
 import { absoluteUrl, webcalUrl } from "@/lib/reach/links";
 import { statusCounts } from "@/lib/reach/pure/status-feed";
 import { previewMetadata } from "@/lib/reach/preview-image";
+import { WeatherPanel } from "@/components/weather/weather-panel";
+import { findParkBySlug } from "@/lib/parks/queries";
+import { parkWeather } from "@/lib/weather/park-weather";
 
 export const dynamic = "force-dynamic";
 
@@ -37,6 +40,9 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
   const { parkSlug } = await params;
   const [board, query] = await Promise.all([boardOnce(parkSlug), searchParams]);
   if (!board) notFound();
+  // Stored by the worker; read beside the cached board, so a weather update never drops the board's cache.
+  const park = await findParkBySlug(parkSlug);
+  const weather = park ? await parkWeather(park) : null;
   const filters = parseBoardFilters(query);
   const path = `/parks/${board.park.slug}`;
   return (
@@ -66,6 +72,7 @@ export default async function ParkBoardPage({ params, searchParams }: Props) {
           </a>
         </p>
       </header>
+      <WeatherPanel weather={weather} timeZone={board.park.timeZone} variant="board" />
       <OfflineNote asOf={board.generatedAt} timeZone={board.park.timeZone} />
       <BoardLive initial={board} filters={filters} filterLinks={<BoardFilterLinks path={path} filters={filters} />} />
     </section>

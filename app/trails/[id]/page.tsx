@@ -17,6 +17,8 @@ import { distanceSystemFor } from "@/lib/accounts/user-units";
 import { AppError } from "@/lib/shared/errors";
 import { formatDistance } from "@/lib/shared/units";
 import { formatParkDay } from "@/lib/shared/park-clock";
+import { WeatherPanel } from "@/components/weather/weather-panel";
+import { parkWeather } from "@/lib/weather/park-weather";
 
 export const dynamic = "force-dynamic";
 
@@ -50,7 +52,9 @@ export default async function TrailPage({ params }: Props) {
   const [trail, system] = await Promise.all([loadTrail(id, actor), distanceSystemFor(actor)]);
   const download = `/api/trails/${trail.id}/download`;
   const today = trail.archivedAt ? null : (await boardForPark(trail.park.slug))?.trails.find((t) => t.id === trail.id);
-  const canEdit = !trail.archivedAt && actor !== null && can(actor, "trail:write", { parkId: (await getParkBySlug(trail.park.slug)).id });
+  const park = await getParkBySlug(trail.park.slug);
+  const canEdit = !trail.archivedAt && actor !== null && can(actor, "trail:write", { parkId: park.id });
+  const weather = trail.archivedAt ? null : await parkWeather(park);
 
   return (
     <article className="space-y-4">
@@ -78,6 +82,7 @@ export default async function TrailPage({ params }: Props) {
       {today && (
         <section aria-labelledby="today-heading" className="space-y-2">
           <h2 id="today-heading" className="text-lg font-bold">Today</h2>
+          <WeatherPanel weather={weather} timeZone={trail.park.timeZone} variant="board" />
           <ul>
             <TrailCard trail={today} timeZone={trail.park.timeZone} />
           </ul>

@@ -34,6 +34,10 @@ export const parkFieldShape = {
   baseElevationM: elevation("base elevation"),
   summitElevationM: elevation("summit elevation"),
   contactEmail: optionalText(emailSchema),
+  /** Rain in 24 h at which the morning check shows a caution (never a status change). */
+  rainThresholdMm: numberOf(
+    z.number({ message: "Enter the rain caution level in millimetres." }).min(0.5, "Use at least 0.5 mm: weather services report to 0.1 mm.").max(500, "Use at most 500 mm."),
+  ).optional(),
   websiteUrl: optionalText(
     z.string().trim().max(300, "Use at most 300 characters.").url("Enter a full address starting with https://.").refine((u) => /^https?:\/\//i.test(u), "Enter a full address starting with https://."),
   ),
@@ -61,6 +65,7 @@ export const parkPatchSchema = z
     summitElevationM: parkFieldShape.summitElevationM.optional(),
     contactEmail: parkFieldShape.contactEmail,
     websiteUrl: parkFieldShape.websiteUrl,
+    rainThresholdMm: parkFieldShape.rainThresholdMm,
     lockVersion: z.number({ message: "Send the lockVersion you read." }).int().min(0),
   })
   .strict()

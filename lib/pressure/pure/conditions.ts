@@ -58,6 +58,6 @@ export function shareText(day: PlannedDay, matching: PlannedTrail[]): string {
 export function inputFromRequest(request: PressureRequest, trails: TrailConditions[] = []): PressureInput {
   const { today, ...setup } = request;
   if (!today) return setup;
-  const { parkSlug: _park, trailIds: _ids, ...day } = today;
+  const { parkSlug: _park, trailIds: _ids, rideHours: _hours, ...day } = today;
   return { ...setup, today: trails.length > 0 ? { ...day, trails } : day };
 }

@@ -53,12 +53,15 @@ export function pumpPlan(targetKpa: number, conditions: PumpConditions, maxKpa: 
   };
 }
 
+/** The words of the pump-temperature reason before its numbers; pressure-today.ts names the weather in their place when it supplied the temperatures. */
+export const pumpTemperatureLabel = (dT: number) => `Trail ${formatTemperature(Math.abs(dT))} ${dT < 0 ? "colder" : "warmer"} than where you pump`;
+
 /** Reasons for the step from target to pump reading (ids start with "pump-"). */
 export function pumpReasons(front: PumpPlan, rear: PumpPlan, conditions: PumpConditions, unit: PressureUnit): Reason[] {
   const dT = conditions.rideTemperatureC - conditions.pumpTemperatureC;
   const dE = conditions.rideElevationM - conditions.pumpElevationM;
   const items = [
-    { id: "pump-temperature", label: `Trail ${formatTemperature(Math.abs(dT))} ${dT < 0 ? "colder" : "warmer"} than where you pump`, f: front.temperatureKpa, r: rear.temperatureKpa, suffix: " to pump now" },
+    { id: "pump-temperature", label: pumpTemperatureLabel(dT), f: front.temperatureKpa, r: rear.temperatureKpa, suffix: " to pump now" },
     { id: "pump-elevation", label: `Riding ${Math.round(Math.abs(dE))} m ${dE > 0 ? "higher" : "lower"} than where you pump`, f: front.elevationKpa, r: rear.elevationKpa, suffix: " to pump now" },
     { id: "pump-limit", label: "Pump reading kept within 0 and the printed maximum", f: front.limitKpa, r: rear.limitKpa, suffix: "" },
   ];

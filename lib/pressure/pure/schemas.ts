@@ -95,6 +95,14 @@ export const todayRequestSchema = z.strictObject({
     .max(80, { error: "Park slug is too long." })
     .optional(),
   trailIds: uniqueList(z.string().min(1).max(100), "trail ids", 60).optional(),
+  /** Park-local hours of riding (both included) whose forecast stands for the trail's air when no temperature is typed; default 10–14. */
+  rideHours: z
+    .strictObject({
+      from: z.number({ error: "Ride hours: give the first hour (0–23)." }).int({ error: "Ride hours are whole hours." }).min(0, { error: "Ride hours run from 0 to 23." }).max(23, { error: "Ride hours run from 0 to 23." }),
+      to: z.number({ error: "Ride hours: give the last hour (0–23)." }).int({ error: "Ride hours are whole hours." }).min(0, { error: "Ride hours run from 0 to 23." }).max(23, { error: "Ride hours run from 0 to 23." }),
+    })
+    .refine((h) => h.from <= h.to, { error: "Ride hours: the first hour must not be after the last.", path: ["to"] })
+    .optional(),
   surfaces: surfaceList.optional(),
   features: featureList.optional(),
   ...airFields,

@@ -87,6 +87,14 @@ describe("park settings", () => {
     expect(await rejection(updatePark(manager, park.slug, { slug: slug(), lockVersion: 0 }))).toMatchObject({ status: 409, field: "slug" });
   });
 
+  it("keeps the rain caution level (default 10 mm in 24 h), refusing one out of range and writing nothing", async () => {
+    const { park, manager } = await managedPark();
+    expect(await rejection(updatePark(manager, park.slug, { rainThresholdMm: 0, lockVersion: 0 }))).toMatchObject({ status: 422, field: "rainThresholdMm" });
+    expect((await Park.findByPk(park.id))?.rainThresholdMm).toBe(10);
+    expect(await updatePark(manager, park.slug, { rainThresholdMm: "25.4", lockVersion: 0 })).toMatchObject({ rainThresholdMm: 25.4, lockVersion: 1 });
+    expect(await AuditEvent.findOne({ where: { parkId: park.id, action: "park.update" } })).toMatchObject({ data: { changed: ["rainThresholdMm"] } });
+  });
+
   it("rangers may not change settings", async () => {
     const { park } = await managedPark();
     const ranger = await createUser();

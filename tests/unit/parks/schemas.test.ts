@@ -47,3 +47,12 @@ describe("park settings schema", () => {
     expect(fieldOf({ lockVersion: 2, timeZone: "Asia/Tokyo" }, parkPatchSchema)).toBeNull();
   });
 });
+
+describe("rain caution level", () => {
+  it("is optional on create, and from 0.5 to 500 mm when given (a blank field asks for a number)", () => {
+    expect(fieldOf(valid)).toBeNull();
+    expect(fieldOf({ rainThresholdMm: "12.5", lockVersion: 0 }, parkPatchSchema)).toBeNull();
+    expect(parseParkFields(parkPatchSchema, { rainThresholdMm: " ", lockVersion: 0 })).toMatchObject({ ok: false, field: "rainThresholdMm", message: "Enter the rain caution level in millimetres." });
+    for (const bad of [-5, 0, 0.4, 501, "lots"]) expect(fieldOf({ rainThresholdMm: bad, lockVersion: 0 }, parkPatchSchema)).toBe("rainThresholdMm");
+  });
+});

@@ -12,6 +12,8 @@ import { parkToday } from "@/lib/conditions/park-today";
 import { resolveRange, trailReportHistory } from "@/lib/conditions/history";
 import { AppError } from "@/lib/shared/errors";
 import { shiftDate } from "@/lib/shared/park-clock";
+import { WeatherAttribution } from "@/components/weather/weather-panel";
+import { rainPerDay } from "@/lib/weather/park-weather";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Trail history" };
@@ -44,7 +46,12 @@ export default async function TrailHistoryPage({ params, searchParams }: Props) 
     rangeError = error instanceof AppError ? error.message : "Check the dates.";
     range = resolveRange({}, park);
   }
-  const [monthRows, rows] = await Promise.all([trailReportHistory(trail.id, { from: `${month}-01`, to: monthEnd }), trailReportHistory(trail.id, range, allRevisions, isStaff)]);
+  const [monthRows, rows, rain] = await Promise.all([
+    trailReportHistory(trail.id, { from: `${month}-01`, to: monthEnd }),
+    trailReportHistory(trail.id, range, allRevisions, isStaff),
+    rainPerDay(park, range.from, range.to),
+  ]);
+  const rainByDate = rain.size > 0 ? Object.fromEntries(rain) : undefined;
   const statusByDate = new Map(monthRows.map((r) => [r.date, r.status]));
   const base = `/trails/${trail.id}/history`;
   const keep = (extra: Record<string, string>) => `${base}?${new URLSearchParams({ ...(query.from ? { from: query.from } : {}), ...(query.to ? { to: query.to } : {}), month, ...extra })}`;
@@ -86,7 +93,12 @@ export default async function TrailHistoryPage({ params, searchParams }: Props) 
             </Link>
           </p>
         )}
-        {rows.length === 0 ? <p>No reports in these dates.</p> : <HistoryTable rows={rows} timeZone={park.timeZone} showRevisions={allRevisions} />}
+        {rows.length === 0 ? <p>No reports in these dates.</p> : <HistoryTable rows={rows} timeZone={park.timeZone} showRevisions={allRevisions} rainByDate={rainByDate} />}
+        {rainByDate && (
+          <p className="text-xs text-loam-700">
+            Rain that day: the park-local day&apos;s total from the stored weather. <WeatherAttribution />
+          </p>
+        )}
       </section>
     </section>
   );

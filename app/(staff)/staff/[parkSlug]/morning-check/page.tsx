@@ -7,6 +7,8 @@ import { getActor } from "@/lib/server/auth/actor";
 import { activeParkState } from "@/lib/conditions/park-state";
 import { requireParkAccess } from "@/lib/parks/queries";
 import { morningCheckStart } from "@/lib/conditions/morning-check-start";
+import { WeatherPanel } from "@/components/weather/weather-panel";
+import { parkWeather } from "@/lib/weather/park-weather";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Morning check" };
@@ -15,7 +17,7 @@ export const metadata: Metadata = { title: "Morning check" };
 export default async function MorningCheckPage({ params }: { params: Promise<{ parkSlug: string }> }) {
   const { parkSlug } = await params;
   const [actor, park] = await Promise.all([getActor(), requireParkAccess(parkSlug, "report:write")]);
-  const [start, active] = await Promise.all([morningCheckStart(park), activeParkState(park.id)]);
+  const [start, active, weather] = await Promise.all([morningCheckStart(park), activeParkState(park.id), parkWeather(park)]);
   return (
     <section className="space-y-4">
       <header>
@@ -32,6 +34,7 @@ export default async function MorningCheckPage({ params }: { params: Promise<{ p
           </Link>
         </p>
       </header>
+      <WeatherPanel weather={weather} timeZone={park.timeZone} variant="check" />
       <ParkStateForm parkSlug={park.slug} active={active} />
       {start.trails.length === 0 ? <p className="card">This park has no trails yet.</p> : <MorningCheckForm parkSlug={park.slug} start={start} />}
     </section>

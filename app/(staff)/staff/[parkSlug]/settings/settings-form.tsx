@@ -14,6 +14,7 @@ export type ParkSettingsView = {
   summitElevationM: number;
   contactEmail: string | null;
   websiteUrl: string | null;
+  rainThresholdMm: number;
   lockVersion: number;
 };
 
@@ -33,6 +34,7 @@ const valuesOf = (p: ParkSettingsView): ParkFormValues => ({
 export function ParkSettingsForm({ initial, slugLocked }: { initial: ParkSettingsView; slugLocked: boolean }) {
   const router = useRouter();
   const [values, setValues] = useState(valuesOf(initial));
+  const [threshold, setThreshold] = useState(String(initial.rainThresholdMm));
   const [lockVersion, setLockVersion] = useState(initial.lockVersion);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [note, setNote] = useState<{ ok: boolean; text: string } | null>(null);
@@ -40,7 +42,7 @@ export function ParkSettingsForm({ initial, slugLocked }: { initial: ParkSetting
 
   async function save(event: React.FormEvent) {
     event.preventDefault();
-    const body = { ...parkBodyOf(values), lockVersion };
+    const body = { ...parkBodyOf(values), rainThresholdMm: threshold.trim(), lockVersion };
     if (slugLocked) delete (body as { slug?: string }).slug;
     const checked = parseParkFields(parkPatchSchema, body);
     if (!checked.ok) {
@@ -60,6 +62,7 @@ export function ParkSettingsForm({ initial, slugLocked }: { initial: ParkSetting
     const current = (result.error.details as { current?: ParkSettingsView } | undefined)?.current;
     if (result.status === 409 && current) {
       setValues(valuesOf(current));
+      setThreshold(String(current.rainThresholdMm));
       setLockVersion(current.lockVersion);
     }
     setErrors(result.error.field ? { [result.error.field]: result.error.message } : {});
@@ -78,6 +81,23 @@ export function ParkSettingsForm({ initial, slugLocked }: { initial: ParkSetting
         slugLocked={slugLocked}
         slugHint={slugLocked ? "The address is fixed now that the park has trails: links in e-mails and QR codes depend on it." : undefined}
       />
+      <div>
+        <label htmlFor="park-settings-rain" className="label">Rain caution level (mm in 24 h)</label>
+        <input
+          id="park-settings-rain"
+          className="field w-32"
+          inputMode="decimal"
+          value={threshold}
+          onChange={(e) => setThreshold(e.target.value)}
+          aria-invalid={Boolean(errors.rainThresholdMm)}
+          aria-describedby="park-settings-rain-hint"
+        />
+        {errors.rainThresholdMm && <p className="field-error">{errors.rainThresholdMm}</p>}
+        <p id="park-settings-rain-hint" className="text-sm text-loam-700">
+          When the last 24 hours bring this much rain or more, the morning check shows a caution. It decides nothing: each trail&apos;s status stays the ranger&apos;s call.
+          Published closure rules can guide the number; the USDA Forest Service&apos;s wet-weather guidance for motorised trails, for example, uses 2 in (51 mm) in 24 h.
+        </p>
+      </div>
       <p className="rounded-lg bg-flare-100 p-3 text-sm">
         <strong>Time zone:</strong> &ldquo;today&rdquo; on the board, the morning check and closure notices is the date in this zone. A change counts from the moment you save; reports already written keep their dates.
       </p>
