@@ -1,6 +1,7 @@
 "use client";
 /** Where and in what conditions: the park, today's trails, and optional temperatures and elevations. */
 import type { DayDraft } from "@/lib/pressure/pure/pressure-form";
+import { hourText } from "@/lib/weather/pure/summary";
 import type { DraftErrors } from "@/lib/setups/pure/setup-form";
 import { CheckInput, MultiCheck, SelectInput, TextInput } from "./inputs";
 import { surfaceOptions } from "./setup-fields";
@@ -9,6 +10,7 @@ export type ParkOption = { slug: string; name: string; baseElevationM: number; s
 export type TrailOption = { id: string; name: string; difficulty: string; status: "open" | "caution" | "closed" | null; surfaces: string[]; features: string[] };
 
 const STATUS_TEXT = { open: "Open", caution: "Caution", closed: "Closed" } as const;
+const HOURS = Array.from({ length: 24 }, (_, h) => ({ value: String(h), label: hourText(h) }));
 
 function TrailPicker({ trails, anyReport, day, errors, onChange }: { trails: TrailOption[]; anyReport: boolean; day: DayDraft; errors: DraftErrors; onChange: (day: DayDraft) => void }) {
   const toggle = (id: string, on: boolean) => onChange({ ...day, trailIds: on ? [...day.trailIds, id] : day.trailIds.filter((t) => t !== id) });
@@ -82,6 +84,16 @@ export function DayFields(props: {
             <TextInput id="ride-elevation" label="Ride elevation (m)" value={day.rideElevation} onChange={(rideElevation) => onChange({ ...day, rideElevation })} error={errors.rideElevation} hint={midpoint ? `Blank: ${midpoint} m, halfway up the park.` : undefined} inputMode="numeric" />
             <TextInput id="pump-elevation" label="Pump elevation (m)" value={day.pumpElevation} onChange={(pumpElevation) => onChange({ ...day, pumpElevation })} error={errors.pumpElevation} hint="Blank: same as the ride." inputMode="numeric" />
           </div>
+          {park && (
+            <fieldset className="space-y-1">
+              <legend className="label">Hours you ride (park time)</legend>
+              <p className="text-sm text-loam-700">With the temperatures blank, the park&apos;s forecast for these hours stands for the air on the trail.</p>
+              <div className="grid grid-cols-2 gap-3">
+                <SelectInput id="ride-from" label="From" value={day.rideFrom} options={HOURS} onChange={(rideFrom) => onChange({ ...day, rideFrom })} error={errors.rideFrom} />
+                <SelectInput id="ride-to" label="Until" value={day.rideTo} options={HOURS} onChange={(rideTo) => onChange({ ...day, rideTo })} error={errors.rideTo} />
+              </div>
+            </fieldset>
+          )}
         </div>
       </details>
     </fieldset>

@@ -120,7 +120,7 @@ test("the demo rider picks a saved setup and today's trails, and sees band, reas
   expect(surfaces.size).toBeGreaterThan(0);
   for (const surface of surfaces) await expect(page.getByTestId("band-result")).toContainText(`${surface} on `);
   const reasons = page.getByTestId("reasons");
-  const ridesRow = reasons.locator("tr[data-reason^=basis-rides]");
+  const ridesRow = reasons.locator('tr[data-reason="basis-rides"], tr[data-reason="basis-rides-disagree"]');
   await expect(ridesRow).toContainText(/From \d+ of your rides on this setup/);
   // Support takes the most demanding planned trail and names it.
   await expect(reasons).toContainText(/(Jumps|Drops|Jumps and drops) on (Tumblewire|Gnarlroot)/);

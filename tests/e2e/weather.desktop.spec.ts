@@ -72,14 +72,23 @@ test("with no temperature typed, the pressure band uses the forecast on the trai
   await expectAttribution(page);
   await page.getByLabel("Rider with kit (kg)").fill("72");
   await page.getByLabel("Bike (kg)").fill("15.5");
+  await page.getByRole("button", { name: "Next: Wheels and tyres" }).click();
   await page.getByLabel("Front wheel: tyre's printed maximum (psi)").fill("40");
   await page.getByLabel("Rear wheel: tyre's printed maximum (psi)").fill("40");
+  await page.getByRole("button", { name: "Next: Pressures that have worked" }).click();
   await page.getByRole("button", { name: "Show my pressure band" }).click();
   const row = page.getByTestId("reasons").locator("tr[data-reason=pump-temperature]");
   await expect(row).toContainText("Trail 5 °C warmer than where you pump (the park's weather: 8 °C forecast for 10:00–14:00, 3 °C now)");
   // Pumped at 3 °C for an 8 °C trail: a lower reading now (Gay-Lussac; worked by hand in tests/integration/weather/pressure-forecast.test.ts).
   await expect(row).toContainText(/−\d+\.\d psi/);
   await shot(page, "weather-pressure");
+
+  // The rider rides in the afternoon: the forecast for 14:00–16:00 is (8 + 7.5 + 7) / 3 = 7.5 °C (the fixture's hours).
+  await page.getByText("More about today (optional)").click();
+  await page.getByLabel("From").selectOption("14");
+  await page.getByLabel("Until").selectOption("16");
+  await page.getByRole("button", { name: "Show my pressure band" }).click();
+  await expect(row).toContainText("Trail 4.5 °C warmer than where you pump (the park's weather: 7.5 °C forecast for 14:00–16:00, 3 °C now)");
 });
 
 test("a manager sets the park's rain caution level; the morning check uses it, and a bad value is refused beside the field", async ({ page }) => {

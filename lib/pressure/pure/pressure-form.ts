@@ -3,6 +3,7 @@
  * schemas the handler uses check it first, and errors are keyed by the form's own fields.
  */
 import type { PressureUnit } from "@/lib/shared/units";
+import { DEFAULT_RIDE_HOURS } from "@/lib/weather/pure/rules";
 import { pressureRequestSchema, savedSetupPressureRequestSchema, todayRequestSchema, type Surface } from "./schemas";
 import { draftErrors, draftFieldFor, numberFrom, parseSetupDraft, type DraftErrors, type SetupDraft } from "@/lib/setups/pure/setup-form";
 
@@ -14,9 +15,13 @@ export type DayDraft = {
   pumpTemperature: string;
   rideElevation: string;
   pumpElevation: string;
+  /** Park-local hours of riding, whose forecast stands for the trail's air when no temperature is typed. */
+  rideFrom: string;
+  rideTo: string;
 };
 export const emptyDayDraft = (parkSlug: string | null, trailIds: string[]): DayDraft => ({
   parkSlug, trailIds, surfaces: [], airTemperature: "", pumpTemperature: "", rideElevation: "", pumpElevation: "",
+  rideFrom: String(DEFAULT_RIDE_HOURS.from), rideTo: String(DEFAULT_RIDE_HOURS.to),
 });
 
 /** API paths of the day's fields → the form's field names. */
@@ -28,13 +33,23 @@ const DAY_FIELD: Record<string, string> = {
   "today.pumpTemperatureC": "pumpTemperature",
   "today.rideElevationM": "rideElevation",
   "today.pumpElevationM": "pumpElevation",
+  "today.rideHours.from": "rideFrom",
+  "today.rideHours.to": "rideTo",
 };
 
 export const pressureFieldFor = (path: string) => DAY_FIELD[path] ?? draftFieldFor(path);
 
+/** The ride hours, sent only when the rider moved them off the default (the server assumes it). */
+function rideHours(day: DayDraft) {
+  const hours = { from: Number(day.rideFrom), to: Number(day.rideTo) };
+  const isDefault = hours.from === DEFAULT_RIDE_HOURS.from && hours.to === DEFAULT_RIDE_HOURS.to;
+  return day.parkSlug && !isDefault ? { rideHours: hours } : {};
+}
+
 function today(day: DayDraft) {
   return {
     ...(day.parkSlug ? { parkSlug: day.parkSlug, trailIds: day.trailIds } : {}),
+    ...rideHours(day),
     ...(day.surfaces.length ? { surfaces: day.surfaces } : {}),
     airTemperatureC: numberFrom(day.airTemperature),
     pumpTemperatureC: numberFrom(day.pumpTemperature),

@@ -48,7 +48,7 @@ export function measuredLine(w: { measuredAt: string; stale: boolean; age: strin
   return w.stale ? `Last measured ${at} (${w.age} ago): newer weather could not be fetched yet` : `Measured ${at}`;
 }
 
-const hourText = (h: number) => `${String(h).padStart(2, "0")}:00`;
+export const hourText = (h: number) => `${String(h).padStart(2, "0")}:00`;
 export const rideHoursText = (hours: RideHours) => `${hourText(hours.from)}–${hourText(hours.to)}`;
 
 /** The pressure band's reason: "8 °C forecast for 10:00–14:00, 3 °C now (measured 18:15, Open-Meteo): pump for the trail, not the car park". */

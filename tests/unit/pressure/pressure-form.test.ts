@@ -23,6 +23,19 @@ describe("pressure form", () => {
     expect(pressureRequestSchema.safeParse(result.body).success).toBe(true);
   });
 
+  it("sends the ride hours only when the rider moved them off 10:00–14:00, and names a bad pair on its field", () => {
+    const at = (rideFrom: string, rideTo: string) => pressureRequestFrom({ setupId: SETUP, draft: draft(), day: { ...emptyDayDraft("harrow-ridge", [TRAIL]), rideFrom, rideTo }, unit: "psi" });
+    const standard = at("10", "14");
+    expect(standard.ok && standard.body.today).toEqual({ parkSlug: "harrow-ridge", trailIds: [TRAIL] });
+    const afternoon = at("14", "16");
+    expect(afternoon.ok && afternoon.body.today).toEqual({ parkSlug: "harrow-ridge", trailIds: [TRAIL], rideHours: { from: 14, to: 16 } });
+    const backwards = at("15", "10");
+    expect(backwards).toEqual({ ok: false, errors: { rideTo: "Ride hours: the first hour must not be after the last." } });
+    // Away from a park there is no forecast to pick hours of.
+    const away = pressureRequestFrom({ setupId: SETUP, draft: draft(), day: { ...emptyDayDraft(null, []), surfaces: ["dry"], rideFrom: "14", rideTo: "16" }, unit: "psi" });
+    expect(away.ok && away.body.today).toEqual({ surfaces: ["dry"] });
+  });
+
   it("a saved setup is sent by id only", () => {
     const result = pressureRequestFrom({ setupId: SETUP, draft: emptySetupDraft({ pressure: "psi", mass: "kg" }), day: emptyDayDraft(null, []), unit: "psi" });
     expect(result).toEqual({ ok: true, body: { setupId: SETUP, unit: "psi", today: {} } });
