@@ -1,6 +1,6 @@
 import "server-only";
 import { authorize, type Actor } from "@/lib/server/auth/permissions";
-import { formDataOf, readBodyWithin, refuseDeclaredOver } from "@/lib/server/api/body";
+import { readFormEntries, refuseDeclaredOver, type FormEntry } from "@/lib/server/api/body";
 import { AppError } from "@/lib/shared/errors";
 import { TRAIL_LIMITS } from "@/lib/trails/pure";
 import { formatFromName } from "@/lib/trails/pure/file-type";
@@ -19,9 +19,9 @@ const tooLarge = () =>
 const FORM_FIELDS = new Set(["file", "name", "difficulty", "kind", "direction"]);
 
 /** Only the fields we read, each once: an extra field (say "parkId") is refused, never silently dropped. */
-function refuseUnexpectedFields(form: FormData) {
+function refuseUnexpectedFields(entries: FormEntry[]) {
   const seen = new Set<string>();
-  for (const key of form.keys()) {
+  for (const { field: key } of entries) {
     if (!FORM_FIELDS.has(key)) throw new AppError(400, `The upload form has no field "${key.slice(0, 40)}".`, key.slice(0, 40));
     if (seen.has(key)) throw new AppError(400, `The field ${key} was sent twice.`, key);
     seen.add(key);
@@ -30,8 +30,8 @@ function refuseUnexpectedFields(form: FormData) {
 
 /**
  * The checks that cost nothing, in order: who is asking (401/403), multipart at all (415), the
- * declared size before a byte is read (413), then the hourly quota (429). Then the body is read
- * within the limit and the file's name and type are checked (415) before any parsing.
+ * declared size before a byte is read (413), then the hourly quota (429). Then the form is parsed
+ * as it arrives, within the limit, and the file's name and type are checked (415) before any parsing.
  */
 export async function receiveTrailUpload(request: Request, actor: Actor | null, parkId: string, purpose: UploadPurpose): Promise<{ file: UploadedFile; fields: TrailUploadFields }> {
   authorize(actor, "trail:write", { parkId });
@@ -42,19 +42,19 @@ export async function receiveTrailUpload(request: Request, actor: Actor | null, 
   refuseDeclaredOver(request, MAX_BODY_BYTES, tooLarge);
   await claimUploadSlot(actor, parkId, purpose);
 
-  const body = await readBodyWithin(request, MAX_BODY_BYTES, tooLarge);
-  const form = await formDataOf(body, type, "The upload could not be read as a form. Choose the file again and retry.", "file");
-  refuseUnexpectedFields(form);
-  const file = form.get("file");
-  if (!(file instanceof File) || (file.size === 0 && file.name === "")) throw new AppError(400, "Choose a GPX or GeoJSON file to upload.", "file");
-  if (file.size > TRAIL_LIMITS.maxFileBytes) throw tooLarge();
+  const entries = await readFormEntries(request, MAX_BODY_BYTES, tooLarge, () => new AppError(400, "The upload could not be read as a form. Choose the file again and retry.", "file"));
+  refuseUnexpectedFields(entries);
+  const entry = (name: string) => entries.find((e) => e.field === name);
+  const sent = entry("file");
+  const file = sent && "file" in sent ? sent.file : null;
+  if (!file || (file.bytes.length === 0 && file.name === "")) throw new AppError(400, "Choose a GPX or GeoJSON file to upload.", "file");
+  if (file.bytes.length > TRAIL_LIMITS.maxFileBytes) throw tooLarge();
   formatFromName(file.name, file.type);
 
   const text = (name: string) => {
-    const value = form.get(name);
-    return typeof value === "string" ? value : undefined;
+    const value = entry(name);
+    return value && "value" in value ? value.value : undefined;
   };
   const fields = trailUploadFieldsSchema.parse({ name: text("name"), difficulty: text("difficulty"), kind: text("kind"), direction: text("direction") });
-  const bytes = Buffer.from(await file.arrayBuffer());
-  return { file: { bytes, filename: file.name, contentType: file.type || undefined }, fields };
+  return { file: { bytes: file.bytes, filename: file.name, contentType: file.type || undefined }, fields };
 }

@@ -1,5 +1,5 @@
 import { AppError } from "@/lib/shared/errors";
-import { distanceM, formatDistance } from "./geo";
+import { cumulativeDistancesM, distanceM, formatDistance } from "./geo";
 import { TRAIL_LIMITS } from "./limits";
 import type { LonLat, Position, RawTrail, TrailWaypoint } from "./types";
 
@@ -26,19 +26,24 @@ function where(segment: number, point: number, segmentCount: number): string {
 
 const inRange = (lon: number, lat: number) => Math.abs(lat) <= 90 && Math.abs(lon) <= 180;
 
-function checkPosition(lon: number, lat: number, ele: number | undefined, label: string): void {
-  if (!Number.isFinite(lon) || !Number.isFinite(lat)) throw fail(`${label} has a coordinate that is not a number.`);
+/**
+ * What is wrong with a position ("has …"), or null. The caller names the point only on a refusal:
+ * a large file has 200,000 points, and naming each one cost more than checking it.
+ */
+function positionProblem(lon: number, lat: number, ele: number | undefined): string | null {
+  if (!Number.isFinite(lon) || !Number.isFinite(lat)) return "has a coordinate that is not a number.";
   if (!inRange(lon, lat)) {
     const swapHint = inRange(lat, lon) ? " Latitude and longitude look swapped (GeoJSON lists longitude first)." : "";
     const what = Math.abs(lat) > 90 ? `latitude ${lat}, outside −90…90` : `longitude ${lon}, outside −180…180`;
-    throw fail(`${label} has ${what}.${swapHint}`);
+    return `has ${what}.${swapHint}`;
   }
   if (ele !== undefined) {
-    if (!Number.isFinite(ele)) throw fail(`${label} has an elevation that is not a number.`);
+    if (!Number.isFinite(ele)) return "has an elevation that is not a number.";
     if (ele < TRAIL_LIMITS.minElevationM || ele > TRAIL_LIMITS.maxElevationM) {
-      throw fail(`${label} has elevation ${ele} m, which is not plausible (expected ${TRAIL_LIMITS.minElevationM}…${TRAIL_LIMITS.maxElevationM} m).`);
+      return `has elevation ${ele} m, which is not plausible (expected ${TRAIL_LIMITS.minElevationM}…${TRAIL_LIMITS.maxElevationM} m).`;
     }
   }
+  return null;
 }
 
 function nearestDistanceM(segments: Position[][], center: LonLat, swap: boolean): number {
@@ -67,19 +72,26 @@ function checkNearPark(segments: Position[][], center: LonLat): void {
   throw fail(`The trail is ${formatDistance(distance)} from the park's location (the limit is ${formatDistance(limit)}). Check that this is the right file and that the park's location is set correctly.`);
 }
 
-/** Refuses an impossible jump between neighbouring points; returns the line's whole length. */
+/**
+ * Refuses an impossible jump between neighbouring points; returns the line's whole length. Measured
+ * with the cumulative distances stats, profile and features reuse (one pass over the points); a
+ * step near the limit is measured again on its own, so the refusal and its figure are exact.
+ */
 function checkSteps(segments: Position[][]): number {
   let lengthM = 0;
+  const maxStepM = TRAIL_LIMITS.maxStepM;
   segments.forEach((segment, s) => {
+    const along = cumulativeDistancesM(segment);
     for (let i = 1; i < segment.length; i++) {
+      if (along[i] - along[i - 1] <= maxStepM - 1e-6) continue;
       const step = distanceM(segment[i - 1], segment[i]);
-      lengthM += step;
-      if (step > TRAIL_LIMITS.maxStepM) {
+      if (step > maxStepM) {
         throw fail(
-          `Points ${i} and ${i + 1}${segments.length > 1 ? ` of segment ${s + 1}` : ""} are ${formatDistance(step, Math.ceil)} apart; a recording never jumps that far in one step (limit ${formatDistance(TRAIL_LIMITS.maxStepM)}). Remove the stray point or split the line there.`,
+          `Points ${i} and ${i + 1}${segments.length > 1 ? ` of segment ${s + 1}` : ""} are ${formatDistance(step, Math.ceil)} apart; a recording never jumps that far in one step (limit ${formatDistance(maxStepM)}). Remove the stray point or split the line there.`,
         );
       }
     }
+    lengthM += along[along.length - 1];
   });
   return lengthM;
 }
@@ -119,9 +131,15 @@ export function checkTrailGeometry(raw: RawTrail, parkCenter?: LonLat): RawTrail
   if (raw.segments.length === 0) refuseMissingLine(raw.waypoints);
   raw.segments.forEach((segment, s) => {
     if (segment.length < 2) throw fail(`${raw.segments.length > 1 ? `Segment ${s + 1}` : "The line"} has fewer than two points.`);
-    segment.forEach((p, i) => checkPosition(p[0], p[1], p[2], where(s, i, raw.segments.length)));
+    for (let i = 0; i < segment.length; i++) {
+      const problem = positionProblem(segment[i][0], segment[i][1], segment[i][2]);
+      if (problem) throw fail(`${where(s, i, raw.segments.length)} ${problem}`);
+    }
   });
-  raw.waypoints.forEach((w, i) => checkPosition(w.lon, w.lat, w.ele, `Waypoint ${i + 1}${w.name ? ` ("${w.name.slice(0, 40)}")` : ""}`));
+  raw.waypoints.forEach((w, i) => {
+    const problem = positionProblem(w.lon, w.lat, w.ele);
+    if (problem) throw fail(`Waypoint ${i + 1}${w.name ? ` ("${w.name.slice(0, 40)}")` : ""} ${problem}`);
+  });
 
   const warnings = [...raw.warnings];
   const segments = raw.segments.filter((segment, s) => {

@@ -1,5 +1,4 @@
 import { AppError } from "@/lib/shared/errors";
-import type { Position } from "./types";
 
 /** A decimal number as GPX writes it (xsd:decimal; an exponent is tolerated). */
 const DECIMAL = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
@@ -13,21 +12,15 @@ function notANumber(tag: PointTag, index: number, what: string, value: string): 
   return new AppError(422, `${LABEL[tag]} ${index + 1} has ${what} "${shown}", which is not a number.`, "file");
 }
 
-function coordinate(value: string | undefined, attr: "lat" | "lon", tag: PointTag, index: number): number {
+/**
+ * A point's latitude or longitude from its attribute, refused when missing or not a decimal.
+ * Lenient readers skip such points silently; we refuse them so nothing is lost unsaid.
+ */
+export function pointCoordinate(value: string | undefined, attr: "lat" | "lon", tag: PointTag, index: number): number {
   const what = attr === "lat" ? "latitude" : "longitude";
   if (value === undefined) throw new AppError(422, `${LABEL[tag]} ${index + 1} has no ${what} (the "${attr}" attribute is required).`, "file");
   if (!DECIMAL.test(value)) throw notANumber(tag, index, what, value);
   return Number.parseFloat(value);
-}
-
-/**
- * [lon, lat] of a point element from its attributes, refused when either is missing or not a
- * decimal (latitude checked first). Lenient readers skip such points silently; we refuse them so
- * nothing is lost unsaid.
- */
-export function pointPosition(lat: string | undefined, lon: string | undefined, tag: PointTag, index: number): Position {
-  const latitude = coordinate(lat, "lat", tag, index);
-  return [coordinate(lon, "lon", tag, index), latitude];
 }
 
 /** The elevation of a point from its <ele> text, refused when it is not a decimal. */

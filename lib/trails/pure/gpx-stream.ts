@@ -1,7 +1,7 @@
 import { SaxesParser, type SaxesAttributeNS, type SaxesTagNS } from "saxes";
 import { AppError } from "@/lib/shared/errors";
 import { doctypeRefusal } from "./gpx-guard";
-import { isPointTag, pointElevation, pointPosition, type PointTag } from "./gpx-points";
+import { isPointTag, pointCoordinate, pointElevation, type PointTag } from "./gpx-points";
 import { tooManyPoints } from "./geometry-checks";
 import { TRAIL_LIMITS } from "./limits";
 import type { Position, TrailWaypoint } from "./types";
@@ -16,7 +16,9 @@ type OpenPoint = {
   tag: PointTag;
   index: number;
   depth: number;
-  position: Position;
+  lon: number;
+  lat: number;
+  ele: number | undefined;
   line: Position[] | null;
   waypoint: { name?: string; type?: string; sym?: string } | null;
   eleSeen: boolean;
@@ -40,6 +42,7 @@ function notWellFormed(detail: string): AppError {
 }
 
 const trimmed = (text: string | undefined) => (text && text.trim() ? text.trim() : undefined);
+const MAX_POINTS = TRAIL_LIMITS.maxPoints;
 
 /**
  * One streaming pass over GPX text (saxes, no document tree): the root is handed to
@@ -52,6 +55,7 @@ const trimmed = (text: string | undefined) => (text && text.trim() ? text.trim()
 export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void): GpxRead {
   const parser = new SaxesParser({ xmlns: true });
   const seen: Record<PointTag, number> = { trkpt: 0, rtept: 0, wpt: 0 };
+  let pointsSeen = 0;
   const names: string[] = [];
   const tracks: Track[] = [];
   const segments: Segment[] = [];
@@ -79,12 +83,14 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
   function openPoint(tag: PointTag, element: SaxesTagNS, depth: number) {
     const index = seen[tag]++;
     const attributes = element.attributes as Record<string, SaxesAttributeNS | undefined>;
-    const position = pointPosition(attributes.lat?.value, attributes.lon?.value, tag, index);
-    if (seen.trkpt + seen.rtept + seen.wpt > TRAIL_LIMITS.maxPoints) throw tooManyPoints();
+    // Latitude first, as the refusals have always named it.
+    const lat = pointCoordinate(attributes.lat?.value, "lat", tag, index);
+    const lon = pointCoordinate(attributes.lon?.value, "lon", tag, index);
+    if (++pointsSeen > MAX_POINTS) throw tooManyPoints();
     let line: Position[] | null = null;
     if (tag === "trkpt") {
       read.linePoints += 1;
-      const segment = segments.at(-1);
+      const segment = segments[segments.length - 1];
       if (segment && names[depth - 1] === "trkseg" && segment.depth === depth - 1) segment.directPoints += 1;
       if (segment?.track) {
         if (segment.line.length === 0) read.trackLines.push({ line: segment.line, track: segment.track });
@@ -92,16 +98,18 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
       }
     } else if (tag === "rtept") {
       read.linePoints += 1;
-      line = routes.at(-1)?.line ?? null;
+      line = routes[routes.length - 1]?.line ?? null;
     }
     const waypoint = tag === "wpt" && tracks.length === 0 ? {} : null;
-    point = { tag, index, depth, position, line, waypoint, eleSeen: false };
+    point = { tag, index, depth, lon, lat, ele: undefined, line, waypoint, eleSeen: false };
   }
 
   function closePoint(open: OpenPoint) {
-    open.line?.push(open.position);
+    const { lon, lat, ele } = open;
+    // Built once its elevation is known: an array grown by one element afterwards takes its
+    // length several times over in memory, and a large file keeps 200,000 of them.
+    open.line?.push(ele === undefined ? [lon, lat] : [lon, lat, ele]);
     if (open.waypoint) {
-      const [lon, lat, ele] = open.position;
       const { name, type, sym } = open.waypoint;
       const kind = trimmed(type) ?? trimmed(sym);
       read.waypoints.push({ ...(name ? { name } : {}), ...(kind ? { type: kind } : {}), lon, lat, ...(ele === undefined ? {} : { ele }) });
@@ -134,7 +142,7 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
   });
   const onText = (value: string) => {
     if (eleDepth >= 0) eleText += value;
-    for (const c of captures) c.parts.push(value);
+    if (captures.length > 0) for (const c of captures) c.parts.push(value);
   };
   parser.on("text", onText);
   parser.on("cdata", onText);
@@ -190,7 +198,7 @@ export function readGpxStream(text: string, checkRoot: (root: GpxRoot) => void):
     }
     if (point) {
       if (eleDepth === depth) {
-        point.position[2] = pointElevation(eleText, point.tag, point.index);
+        point.ele = pointElevation(eleText, point.tag, point.index);
         eleDepth = -1;
       } else if (point.depth === depth) {
         closePoint(point);

@@ -1,6 +1,6 @@
 // Public surface of the trail module: parse, measure, simplify, rate, export. Pure; no database.
 export { parseTrailFile } from "./parse";
-export { processTrailUpload, type TrailUploadResult, type ProcessTrailOptions } from "./process-upload";
+export { measureTrailUpload, processTrailUpload, type ProcessTrailOptions, type TrailMeasurement, type TrailUploadResult } from "./process-upload";
 export { computeTrailStats, hasElevation, type TrailStats } from "./stats";
 export { climbAndDescent, steepestGradePct } from "./elevation";
 export { elevationProfile, type ProfilePoint } from "./profile";

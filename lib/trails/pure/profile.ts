@@ -15,25 +15,30 @@ const tenth = (x: number) => Math.round(x * 10) / 10;
 export function elevationProfile(segments: Position[][], maxPoints = 300): ProfilePoint[] {
   if (!Number.isInteger(maxPoints) || maxPoints < 2) throw new AppError(400, "A profile needs at least two points.", "maxPoints");
   if (!hasElevation(segments)) return [];
-  const full: ProfilePoint[] = [];
+  // Distance and elevation of every point in two flat arrays, not an object per point.
+  const count = segments.reduce((n, segment) => n + segment.length, 0);
+  const dM = new Float64Array(count);
+  const eleM = new Float64Array(count);
   let start = 0;
+  let at = 0;
   for (const segment of segments) {
     const along = cumulativeDistancesM(segment);
-    for (let i = 0; i < segment.length; i++) full.push({ dM: start + along[i], eleM: segment[i][2] });
+    for (let i = 0; i < segment.length; i++, at++) {
+      dM[at] = start + along[i];
+      eleM[at] = segment[i][2];
+    }
     start += along[along.length - 1];
   }
-  if (full.length <= maxPoints) return full.map((p) => ({ dM: tenth(p.dM), eleM: tenth(p.eleM) }));
+  if (count <= maxPoints) return Array.from(dM, (d, i) => ({ dM: tenth(d), eleM: tenth(eleM[i]) }));
 
-  const total = full[full.length - 1].dM;
+  const total = dM[count - 1];
   const sampled: ProfilePoint[] = [];
   let j = 0;
   for (let k = 0; k < maxPoints; k++) {
     const target = (total * k) / (maxPoints - 1);
-    while (j < full.length - 2 && full[j + 1].dM < target) j++;
-    const a = full[j];
-    const b = full[j + 1];
-    const t = b.dM > a.dM ? Math.min(1, Math.max(0, (target - a.dM) / (b.dM - a.dM))) : 0;
-    sampled.push({ dM: tenth(target), eleM: tenth(a.eleM + t * (b.eleM - a.eleM)) });
+    while (j < count - 2 && dM[j + 1] < target) j++;
+    const t = dM[j + 1] > dM[j] ? Math.min(1, Math.max(0, (target - dM[j]) / (dM[j + 1] - dM[j]))) : 0;
+    sampled.push({ dM: tenth(target), eleM: tenth(eleM[j] + t * (eleM[j + 1] - eleM[j])) });
   }
   return sampled;
 }
