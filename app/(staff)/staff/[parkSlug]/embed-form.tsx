@@ -1,5 +1,5 @@
 "use client";
-import { useActionState } from "react";
+import { useActionState, useState } from "react";
 import { FormMessage } from "@/components/form-bits";
 import { saveEmbedOriginsAction } from "@/lib/reach/embed-actions";
 import { initialFormState } from "@/lib/shared/form-state";
@@ -8,6 +8,9 @@ import { initialFormState } from "@/lib/shared/form-state";
 export function EmbedForm({ parkSlug, origins, snippet, feedUrl, canEdit }: { parkSlug: string; origins: string[]; snippet: string; feedUrl: string; canEdit: boolean }) {
   const [state, action, pending] = useActionState(saveEmbedOriginsAction, initialFormState);
   const error = state.fieldErrors?.origins;
+  // Controlled, so the form reset React does after an action never replaces what the manager typed
+  // meanwhile (an uncontrolled field reset to the refused text when it landed after the next keystrokes).
+  const [text, setText] = useState(origins.join("\n"));
   return (
     <form action={action} className="card space-y-3">
       <h2 className="text-lg font-bold">On your own website</h2>
@@ -26,7 +29,8 @@ export function EmbedForm({ parkSlug, origins, snippet, feedUrl, canEdit }: { pa
             id="embed-origins"
             name="origins"
             rows={3}
-            defaultValue={state.values?.origins ?? origins.join("\n")}
+            value={text}
+            onChange={(e) => setText(e.target.value)}
             placeholder="https://www.example.org"
             aria-describedby="embed-origins-hint embed-origins-error"
             aria-invalid={Boolean(error)}
